@@ -1,0 +1,27 @@
+// @ts-check
+import { defineConfig, envField } from 'astro/config';
+import node from '@astrojs/node';
+import react from '@astrojs/react';
+import mdx from '@astrojs/mdx';
+import tailwindcss from '@tailwindcss/vite';
+
+export default defineConfig({
+  output: 'server',
+  adapter: node({ mode: 'standalone' }),
+  integrations: [react(), mdx()],
+  security: { checkOrigin: true },
+  server: { host: '127.0.0.1', port: 4321 },
+  vite: {
+    plugins: [tailwindcss()],
+    ssr: { external: ['sharp', 'fontkit', 'pg', 'pg-hstore', 'sequelize', 'isomorphic-dompurify'] },
+  },
+  env: {
+    // Every setting is read at run time, so one build serves any port, database or site URL.
+    schema: {
+      DATABASE_URL: envField.string({ context: 'server', access: 'secret' }),
+      SITE_URL: envField.string({ context: 'server', access: 'secret', default: 'http://127.0.0.1:4321' }),
+      AUTH_SECRET: envField.string({ context: 'server', access: 'secret' }),
+      AUTH_SIGN_IN_LIMIT: envField.number({ context: 'server', access: 'secret', default: 5 }),
+    },
+  },
+});

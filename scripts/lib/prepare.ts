@@ -1,0 +1,67 @@
+// One path from nothing to a ready database: cluster, schema, demo. Used by `npm start` and the tests.
+import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
+import { connect } from '../../db/models';
+import { migrateAll } from '../../db/migrate';
+import { seedDemo } from '../../db/seeders/demo';
+import type { AuthSettings } from '../../src/lib/auth/auth-options';
+import { projectRoot } from './settings';
+
+/** Run migrations and seed the demo against `settings.databaseUrl`. */
+export async function prepareDatabase(settings: AuthSettings, opts: { seed?: boolean } = {}): Promise<{ migrations: string[] }> {
+  const sequelize = connect(settings.databaseUrl);
+  try {
+    const migrations = await migrateAll(sequelize, settings);
+    if (opts.seed !== false) await seedDemo(sequelize, settings);
+    return { migrations };
+  } finally {
+    await sequelize.close();
+  }
+}
+
+/** Build the Astro server bundle into dist/. */
+export function buildApp(): void {
+  const result = spawnSync(process.execPath, ['node_modules/astro/astro.js', 'build', '--silent'], {
+    cwd: projectRoot,
+    stdio: 'inherit',
+    env: { ...process.env, ASTRO_TELEMETRY_DISABLED: '1' },
+  });
+  if (result.status !== 0) throw new Error('astro build failed; see the output above.');
+}
+
+export interface ServerEnv {
+  host: string;
+  port: number;
+  databaseUrl: string;
+  siteUrl: string;
+  secret: string;
+  signInLimit?: number;
+}
+
+/** Start the built server and resolve once it answers HTTP. */
+export async function startServer(env: ServerEnv, opts: { quiet?: boolean } = {}): Promise<ChildProcess> {
+  const child = spawn(process.execPath, ['dist/server/entry.mjs'], {
+    cwd: projectRoot,
+    stdio: opts.quiet ? ['ignore', 'ignore', 'inherit'] : 'inherit',
+    env: {
+      ...process.env,
+      HOST: env.host,
+      PORT: String(env.port),
+      DATABASE_URL: env.databaseUrl,
+      SITE_URL: env.siteUrl,
+      AUTH_SECRET: env.secret,
+      ...(env.signInLimit ? { AUTH_SIGN_IN_LIMIT: String(env.signInLimit) } : {}),
+    },
+  });
+  const url = `http://${env.host}:${env.port}/`;
+  for (let i = 0; i < 300; i++) {
+    if (child.exitCode !== null) throw new Error(`the server exited early (code ${child.exitCode})`);
+    try {
+      await fetch(url, { redirect: 'manual' });
+      return child;
+    } catch {
+      await new Promise((r) => setTimeout(r, 100));
+    }
+  }
+  child.kill();
+  throw new Error(`the server did not answer on ${url} within 30 s`);
+}

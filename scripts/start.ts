@@ -1,0 +1,40 @@
+// `npm start`: PostgreSQL (installed if missing), migrations, demo, build, serve, and the sign-ins printed.
+import { join } from 'node:path';
+import { DEMO_PASSWORD, DEMO_PEOPLE } from '../db/seeders/demo';
+import { buildApp, prepareDatabase, startServer } from './lib/prepare';
+import { startCluster } from './lib/postgres';
+import { authSecret, dataDir, host, pgPort, port, siteUrl } from './lib/settings';
+
+const started = Date.now();
+const step = (what: string) => console.log(`\n▸ ${what}`);
+
+step(`PostgreSQL on 127.0.0.1:${pgPort} (data in ${join(dataDir, 'postgres')})`);
+const databaseUrl = process.env.DATABASE_URL ?? startCluster(join(dataDir, 'postgres'), pgPort).url;
+const secret = authSecret();
+const signInLimit = Number(process.env.AUTH_SIGN_IN_LIMIT ?? 5);
+
+step('Migrations and demo data');
+const { migrations } = await prepareDatabase({ databaseUrl, siteUrl, secret, signInLimit });
+console.log(migrations.length ? `  applied ${migrations.length} migration(s)` : '  schema up to date');
+
+if (process.env.PLUMBLINE_SKIP_BUILD !== '1') {
+  step('Building the app');
+  buildApp();
+}
+
+step('Starting the server');
+const server = await startServer({ host, port, databaseUrl, siteUrl, secret, signInLimit });
+const width = Math.max(...DEMO_PEOPLE.map((p) => p.email.length));
+console.log(`
+Plumbline is running at ${siteUrl}   (ready in ${((Date.now() - started) / 1000).toFixed(1)} s)
+
+Demo sign-ins (password for all: ${DEMO_PASSWORD})
+${DEMO_PEOPLE.map((p) => `  ${p.email.padEnd(width)}  ${p.says}`).join('\n')}
+
+Ctrl-C stops the server; \`npm run db:stop\` stops PostgreSQL.
+`);
+
+const stop = () => server.kill('SIGTERM');
+process.on('SIGINT', stop);
+process.on('SIGTERM', stop);
+server.on('exit', (code) => process.exit(code ?? 0));

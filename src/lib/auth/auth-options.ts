@@ -1,0 +1,53 @@
+// better-auth's options in one place, shared by the server and by the scripts that run its migrations.
+import type { BetterAuthOptions } from 'better-auth';
+import pg from 'pg';
+
+export interface AuthSettings {
+  databaseUrl: string;
+  siteUrl: string;
+  secret: string;
+  /** Sign-in and sign-up attempts allowed per client address per minute. */
+  signInLimit: number;
+}
+
+/** The header our auth route fills from the socket address, so the limiter keys on the real client. */
+export const CLIENT_IP_HEADER = 'x-plumbline-client-ip';
+
+export const PASSWORD_MIN = 10;
+export const PASSWORD_MAX = 128;
+
+/** better-auth options: e-mail and password, sessions and rate limits in PostgreSQL, one origin. */
+export function authOptions(settings: AuthSettings): BetterAuthOptions {
+  const secure = settings.siteUrl.startsWith('https://');
+  return {
+    appName: 'Plumbline',
+    baseURL: settings.siteUrl,
+    basePath: '/api/auth',
+    secret: settings.secret,
+    trustedOrigins: [settings.siteUrl],
+    database: new pg.Pool({ connectionString: settings.databaseUrl, max: 5 }),
+    emailAndPassword: {
+      enabled: true,
+      minPasswordLength: PASSWORD_MIN,
+      maxPasswordLength: PASSWORD_MAX,
+      autoSignIn: true,
+    },
+    session: { expiresIn: 60 * 60 * 24 * 14, updateAge: 60 * 60 * 24 },
+    rateLimit: {
+      enabled: true,
+      storage: 'database',
+      window: 60,
+      max: 300,
+      customRules: {
+        '/sign-in/email': { window: 60, max: settings.signInLimit },
+        '/sign-up/email': { window: 60, max: settings.signInLimit },
+      },
+    },
+    advanced: {
+      useSecureCookies: secure,
+      defaultCookieAttributes: { httpOnly: true, sameSite: 'lax', secure },
+      ipAddress: { ipAddressHeaders: [CLIENT_IP_HEADER] },
+    },
+    telemetry: { enabled: false },
+  };
+}

@@ -1,0 +1,102 @@
+// The API's conventions: JSON in and out, one error shape, zod at the boundary.
+import type { APIContext, APIRoute } from 'astro';
+import { z } from 'zod';
+
+export interface ApiErrorBody {
+  error: { code: string; message: string; details?: unknown };
+}
+
+/** An error that maps to an HTTP status and our JSON error shape. */
+export class ApiError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly details?: unknown,
+    readonly extra?: Record<string, unknown>,
+  ) {
+    super(message);
+  }
+}
+
+export const notFound = (what = 'That brand') => new ApiError(404, 'not_found', `${what} was not found.`);
+
+/** A JSON response with our defaults (no caching of personal data). */
+export function json(body: unknown, status = 200, headers: Record<string, string> = {}): Response {
+  return new Response(JSON.stringify(body), {
+    status,
+    headers: { 'content-type': 'application/json; charset=utf-8', 'cache-control': 'no-store', ...headers },
+  });
+}
+
+/** The error shape as a response. */
+export function errorResponse(err: ApiError): Response {
+  const body: ApiErrorBody = { error: { code: err.code, message: err.message } };
+  if (err.details !== undefined) body.error.details = err.details;
+  return json({ ...body, ...err.extra }, err.status);
+}
+
+/** Readable details for a zod failure: each problem with its path. */
+export function zodDetails(error: z.ZodError): { path: string; message: string }[] {
+  return error.issues.map((i) => {
+    const at = i.path.join('.');
+    if (i.code === 'unrecognized_keys') {
+      const keys = i.keys.map((k) => (at ? `${at}.${k}` : k));
+      return { path: keys.join(', '), message: `unknown field${keys.length > 1 ? 's' : ''}, not accepted here` };
+    }
+    return { path: at || '(body)', message: i.message };
+  });
+}
+
+/** Parse a value through a schema or raise a 400 naming the first bad path. */
+export function parseWith<T extends z.ZodType>(schema: T, value: unknown, where = 'body'): z.infer<T> {
+  const result = schema.safeParse(value);
+  if (result.success) return result.data;
+  const details = zodDetails(result.error);
+  const first = details[0];
+  throw new ApiError(400, 'invalid_input', `The ${where} is not valid: ${first.path}: ${first.message}`, details);
+}
+
+const MAX_JSON_BYTES = 1_000_000;
+
+/** Read a JSON request body through a schema: malformed JSON, wrong type or unknown fields → 400. */
+export async function readJson<T extends z.ZodType>(request: Request, schema: T): Promise<z.infer<T>> {
+  const type = request.headers.get('content-type') ?? '';
+  if (!type.includes('application/json')) {
+    throw new ApiError(415, 'unsupported_media_type', 'Send the request body as JSON (Content-Type: application/json).');
+  }
+  const text = await request.text();
+  if (text.length > MAX_JSON_BYTES) throw new ApiError(413, 'too_large', 'The request body is too large.');
+  let value: unknown;
+  try {
+    value = JSON.parse(text);
+  } catch {
+    throw new ApiError(400, 'malformed_json', 'The request body is not valid JSON.');
+  }
+  return parseWith(schema, value);
+}
+
+type Handler = (context: APIContext) => Promise<Response> | Response;
+
+/** Wrap an endpoint so thrown ApiErrors and unexpected failures both answer in our error shape. */
+export function endpoint(handler: Handler): APIRoute {
+  return async (context) => {
+    try {
+      return await handler(context);
+    } catch (err) {
+      if (err instanceof ApiError) return errorResponse(err);
+      console.error(`[api] ${context.request.method} ${context.url.pathname}`, err);
+      return errorResponse(new ApiError(500, 'internal', 'Something went wrong on our side. Please try again.'));
+    }
+  };
+}
+
+/** A uuid path parameter, or 404 (a malformed id names nothing). */
+export function idParam(value: string | undefined, what = 'That brand'): string {
+  if (!value || !z.uuid().safeParse(value).success) throw notFound(what);
+  return value;
+}
+
+/** Answer for a method a resource does not offer. */
+export const methodNotAllowed: APIRoute = ({ request }) =>
+  errorResponse(new ApiError(405, 'method_not_allowed', `${request.method} is not offered here.`));

@@ -1,0 +1,21 @@
+import { authorizeBrand } from '../../../../../lib/auth/access.server';
+import { addMember, listMembers } from '../../../../../lib/brands/brands.server';
+import { addMemberBody } from '../../../../../lib/brands/schemas';
+import { endpoint, idParam, json, methodNotAllowed, readJson } from '../../../../../lib/http/api';
+
+/** The brand's members and pending invitations. */
+export const GET = endpoint(async ({ locals, params }) => {
+  const { brand } = await authorizeBrand(locals, idParam(params.id), 'members.read');
+  return json(await listMembers(brand));
+});
+
+/** Add someone by e-mail: an existing user joins now, an unknown address becomes a pending invitation. */
+export const POST = endpoint(async ({ locals, params, request }) => {
+  const { caller, brand } = await authorizeBrand(locals, idParam(params.id), 'members.manage');
+  const body = await readJson(request, addMemberBody);
+  const result = await addMember(caller, brand, body.email, body.role);
+  if (result.kind === 'member') return json({ member: result.member }, 201);
+  return json({ invitation: result.invitation }, 201);
+});
+
+export const ALL = methodNotAllowed;
