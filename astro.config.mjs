@@ -5,11 +5,20 @@ import react from '@astrojs/react';
 import mdx from '@astrojs/mdx';
 import tailwindcss from '@tailwindcss/vite';
 
+// Hosts whose Host header Astro may trust when it builds request URLs (and so checks origins):
+// loopback for local use and tests, plus the configured site's host when one is given at build time.
+const siteHost = process.env.SITE_URL ? new URL(process.env.SITE_URL) : null;
+const allowedDomains = [
+  { hostname: '127.0.0.1' },
+  { hostname: 'localhost' },
+  ...(siteHost ? [{ hostname: siteHost.hostname, protocol: siteHost.protocol.replace(':', '') }] : []),
+];
+
 export default defineConfig({
   output: 'server',
   adapter: node({ mode: 'standalone' }),
   integrations: [react(), mdx()],
-  security: { checkOrigin: true },
+  security: { checkOrigin: true, allowedDomains },
   server: { host: '127.0.0.1', port: 4321 },
   vite: {
     plugins: [tailwindcss()],

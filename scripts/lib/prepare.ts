@@ -23,7 +23,7 @@ export function buildApp(): void {
   const result = spawnSync(process.execPath, ['node_modules/astro/astro.js', 'build', '--silent'], {
     cwd: projectRoot,
     stdio: 'inherit',
-    env: { ...process.env, ASTRO_TELEMETRY_DISABLED: '1' },
+    env: { ...process.env, NODE_ENV: 'production', ASTRO_TELEMETRY_DISABLED: '1' },
   });
   if (result.status !== 0) throw new Error('astro build failed; see the output above.');
 }
@@ -44,6 +44,8 @@ export async function startServer(env: ServerEnv, opts: { quiet?: boolean } = {}
     stdio: opts.quiet ? ['ignore', 'ignore', 'inherit'] : 'inherit',
     env: {
       ...process.env,
+      // The built server runs as production whatever the caller's environment (vitest sets NODE_ENV=test).
+      NODE_ENV: 'production',
       HOST: env.host,
       PORT: String(env.port),
       DATABASE_URL: env.databaseUrl,

@@ -188,11 +188,11 @@ describe('fontMetrics of shipped OFL fonts agree with an independent read of the
 describe('measure: characters per line (Bringhurst, The Elements of Typographic Style, §2.1.2: 45–75, 66 ideal)', () => {
   const font = openFont(DM_SANS);
   test.each([
-    ['DM Sans 16 px in a 600 px column', DM_SANS, 600],
-    ['DM Sans 16 px in a 680 px column', DM_SANS, 680],
-    ['Source Serif 4 16 px in a 640 px column', SOURCE_SERIF, 640],
-  ])('%s falls in the comfortable range', (_name, file, width) => {
-    const m = measure(file, { sizePx: 16, columnWidthPx: width });
+    ['DM Sans 16 px in a 520 px column', DM_SANS, 16, 520],
+    ['DM Sans 18 px in a 560 px column', DM_SANS, 18, 560],
+    ['Source Serif 4 17 px in a 560 px column', SOURCE_SERIF, 17, 560],
+  ])('%s falls in the comfortable range', (_name, file, size, width) => {
+    const m = measure(file, { sizePx: size, columnWidthPx: width });
     expect(m.charsPerLine).toBeGreaterThanOrEqual(MEASURE_RANGE.min);
     expect(m.charsPerLine).toBeLessThanOrEqual(MEASURE_RANGE.max);
     expect(m.verdict).toBe('comfortable');
@@ -203,6 +203,8 @@ describe('measure: characters per line (Bringhurst, The Elements of Typographic 
     expect(measure(font, { sizePx: 32, columnWidthPx: 600 }).charsPerLine).toBeCloseTo(a, 9);
     expect(measure(font, { sizePx: 16, columnWidthPx: 200 }).verdict).toBe('too-short');
     expect(measure(font, { sizePx: 16, columnWidthPx: 1400 }).verdict).toBe('too-long');
+    // A 680 px column at 16 px already runs past 75 characters in this face: wide columns need larger type.
+    expect(measure(font, { sizePx: 16, columnWidthPx: 680 }).verdict).toBe('too-long');
   });
   test('the column for 66 characters is read back as 66', () => {
     const width = columnWidthFor(font, 18);

@@ -1,6 +1,6 @@
 // A brand's people: who holds which role, who is invited, and (for owners) the controls to change that.
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { useState, type FormEvent } from 'react';
+import { useState } from 'react';
 import { z } from 'zod';
 import { BRAND_ROLES, ROLE_LABELS, type BrandRole } from '../../lib/auth/roles';
 import { api } from '../../lib/client/api';
@@ -113,7 +113,7 @@ function AddMember({ brandId, onDone }: { brandId: string; onDone: (text: string
     },
     onError: (e) => setError(e.message),
   });
-  const submit = (e: FormEvent) => {
+  const submit = (e: { preventDefault(): void }) => {
     e.preventDefault();
     setError(null);
     if (!emailSchema.safeParse(email.trim()).success) return setError('Enter a valid e-mail address.');

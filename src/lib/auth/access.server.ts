@@ -1,6 +1,5 @@
 // Resolves a caller's role on a brand and asks the policy; routes call this before touching a brand.
-import { Op } from 'sequelize';
-import { Brand, BrandMember, StudioMember } from '../../../db/models';
+import { Brand, BrandMember } from '../../../db/models';
 import '../db.server';
 import { ApiError } from '../http/api';
 import { decide, type BrandAction } from './policy';
@@ -18,13 +17,9 @@ export function requireCaller(locals: App.Locals): Caller {
   return { id: locals.user.id, email: locals.user.email, name: locals.user.name };
 }
 
-/** A caller's effective role on a brand: studio admins hold every brand of their studio as owner. */
+/** A caller's role on a brand: their brand membership, or none. */
 export async function roleOn(userId: string, brand: Brand): Promise<BrandRole | null> {
-  const [member, studioAdmin] = await Promise.all([
-    BrandMember.findOne({ where: { brandId: brand.id, userId }, attributes: ['role'] }),
-    StudioMember.findOne({ where: { studioId: brand.studioId, userId, role: 'admin' }, attributes: ['id'] }),
-  ]);
-  if (studioAdmin) return 'owner';
+  const member = await BrandMember.findOne({ where: { brandId: brand.id, userId }, attributes: ['role'] });
   return member?.role ?? null;
 }
 
@@ -46,20 +41,12 @@ export async function authorizeBrand(
   return { caller, brand: brand!, role: role! };
 }
 
-/** Every brand the user can see, with their effective role on each. */
+/** Every brand the user can see, with their role on each. */
 export async function visibleBrands(userId: string): Promise<{ brand: Brand; role: BrandRole }[]> {
-  const [memberships, adminOf] = await Promise.all([
-    BrandMember.findAll({ where: { userId }, attributes: ['brandId', 'role'] }),
-    StudioMember.findAll({ where: { userId, role: 'admin' }, attributes: ['studioId'] }),
-  ]);
-  const studioIds = adminOf.map((s) => s.studioId);
-  const roleByBrand = new Map(memberships.map((m) => [m.brandId, m.role]));
-  const brands = await Brand.findAll({
-    where: { [Op.or]: [{ id: [...roleByBrand.keys()] }, { studioId: studioIds }] },
-    order: [['name', 'ASC']],
+  const memberships = await BrandMember.findAll({
+    where: { userId },
+    include: [{ model: Brand, as: 'brand', required: true }],
+    order: [[{ model: Brand, as: 'brand' }, 'name', 'ASC']],
   });
-  return brands.map((brand) => ({
-    brand,
-    role: studioIds.includes(brand.studioId) ? 'owner' : roleByBrand.get(brand.id)!,
-  }));
+  return memberships.map((m) => ({ brand: (m as BrandMember & { brand: Brand }).brand, role: m.role }));
 }

@@ -47,6 +47,9 @@ export function authOptions(settings: AuthSettings): BetterAuthOptions {
       useSecureCookies: secure,
       defaultCookieAttributes: { httpOnly: true, sameSite: 'lax', secure },
       ipAddress: { ipAddressHeaders: [CLIENT_IP_HEADER] },
+      // Always on, whatever NODE_ENV or TEST say: better-auth would otherwise relax them under a test runner.
+      disableOriginCheck: false,
+      disableCSRFCheck: false,
     },
     telemetry: { enabled: false },
   };

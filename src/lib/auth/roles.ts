@@ -2,7 +2,7 @@
 export const BRAND_ROLES = ['owner', 'editor', 'reviewer', 'partner', 'viewer'] as const;
 export type BrandRole = (typeof BRAND_ROLES)[number];
 
-/** Studio admins hold every brand of their studio as owner; members need a brand role. */
+/** Studio admins manage the studio; any studio member may start brands in it. Brand access is per brand. */
 export const STUDIO_ROLES = ['admin', 'member'] as const;
 export type StudioRole = (typeof STUDIO_ROLES)[number];
 

@@ -1,0 +1,35 @@
+/** Error codes the logo library reports. */
+export type LogoErrorCode =
+  | 'svg_not_svg'
+  | 'svg_too_large'
+  | 'svg_entity'
+  | 'svg_foreign_object'
+  | 'svg_external_reference'
+  | 'svg_absurd_size'
+  | 'svg_no_size'
+  | 'logo_unreadable'
+  | 'logo_empty'
+  | 'invalid_input';
+
+export interface LogoErrorInfo {
+  code: LogoErrorCode;
+  message: string;
+}
+
+/** A typed, plain-worded logo error that callers can map to a response. */
+export class LogoError extends Error {
+  readonly code: LogoErrorCode;
+  constructor(code: LogoErrorCode, message: string) {
+    super(message);
+    this.name = 'LogoError';
+    this.code = code;
+  }
+}
+
+/** Throws invalid_input unless value is a finite number above zero (or zero when allowed). */
+export function requireSize(value: unknown, what: string, allowZero = false): number {
+  if (typeof value !== 'number' || !Number.isFinite(value) || value < 0 || (!allowZero && value === 0)) {
+    throw new LogoError('invalid_input', `${what} must be a number ${allowZero ? 'of zero or more' : 'above zero'}, got ${String(value)}.`);
+  }
+  return value;
+}

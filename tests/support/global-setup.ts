@@ -1,0 +1,43 @@
+// Once per run: a throwaway PostgreSQL cluster on a free loopback port, the schema and demo, the built
+// server on a free port. Everything is removed afterwards, also when tests fail.
+import type { ChildProcess } from 'node:child_process';
+import { mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import type { TestProject } from 'vitest/node';
+import { buildApp, prepareDatabase, startServer } from '../../scripts/lib/prepare';
+import { dropCluster, freePort, startCluster } from '../../scripts/lib/postgres';
+
+let server: ChildProcess | undefined;
+let clusterDir: string | undefined;
+
+export async function setup(project: TestProject): Promise<void> {
+  clusterDir = mkdtempSync(join(tmpdir(), 'plumbline-test-'));
+  const cluster = startCluster(clusterDir, await freePort());
+  const port = await freePort();
+  const siteUrl = `http://127.0.0.1:${port}`;
+  const secret = 'test-secret-that-is-long-enough-for-better-auth';
+  // A generous sign-in limit: the suite signs in many people from one address; the limiter has its own test.
+  const signInLimit = 10_000;
+  await prepareDatabase({ databaseUrl: cluster.url, siteUrl, secret, signInLimit });
+  if (process.env.PLUMBLINE_TEST_SKIP_BUILD !== '1') buildApp();
+  server = await startServer({ host: '127.0.0.1', port, databaseUrl: cluster.url, siteUrl, secret, signInLimit }, { quiet: true });
+  project.provide('baseUrl', siteUrl);
+  project.provide('databaseUrl', cluster.url);
+}
+
+export async function teardown(): Promise<void> {
+  if (server && server.exitCode === null) {
+    const exited = new Promise((r) => server!.once('exit', r));
+    server.kill('SIGTERM');
+    await Promise.race([exited, new Promise((r) => setTimeout(r, 5000))]);
+  }
+  if (clusterDir) dropCluster(clusterDir);
+}
+
+declare module 'vitest' {
+  export interface ProvidedContext {
+    baseUrl: string;
+    databaseUrl: string;
+  }
+}
