@@ -16,6 +16,8 @@ const allowedDomains = [
 
 export default defineConfig({
   output: 'server',
+  // A second build (tests, a parallel checkout) can go elsewhere without touching dist/.
+  outDir: process.env.PLUMBLINE_OUT_DIR ?? './dist',
   adapter: node({ mode: 'standalone' }),
   integrations: [react(), mdx()],
   security: { checkOrigin: true, allowedDomains },
@@ -30,6 +32,7 @@ export default defineConfig({
       DATABASE_URL: envField.string({ context: 'server', access: 'secret' }),
       SITE_URL: envField.string({ context: 'server', access: 'secret', default: 'http://127.0.0.1:4321' }),
       AUTH_SECRET: envField.string({ context: 'server', access: 'secret' }),
+      FILES_DIR: envField.string({ context: 'server', access: 'secret', default: '.data/files' }),
       AUTH_SIGN_IN_LIMIT: envField.number({ context: 'server', access: 'secret', default: 5 }),
     },
   },

@@ -5,5 +5,7 @@ declare namespace App {
     /** The signed-in person, or null for an anonymous visitor. */
     user: import('./lib/auth/auth.server').AuthSession['user'] | null;
     session: import('./lib/auth/auth.server').AuthSession['session'] | null;
+    /** Read access to one brand's published site through a share link (no account), when its cookie is present. */
+    shareGrant: { brandId: string; linkId: string; allowDownloads: boolean; version: number | null } | null;
   }
 }

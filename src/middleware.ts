@@ -5,6 +5,7 @@ import { auth } from './lib/auth/auth.server';
 export const onRequest = defineMiddleware(async (context, next) => {
   context.locals.user = null;
   context.locals.session = null;
+  context.locals.shareGrant = null;
   if (!context.url.pathname.startsWith('/api/auth/') && !context.isPrerendered) {
     const found = await auth.api.getSession({ headers: context.request.headers });
     if (found) {

@@ -11,6 +11,8 @@ import {
 } from 'sequelize';
 import pg from 'pg';
 import { BRAND_ROLES, STUDIO_ROLES, type BrandRole, type StudioRole } from '../../src/lib/auth/roles';
+import type { Box, ColorRole, LogoVariant, TypefaceRole, TypeScaleSettings } from '../../src/lib/identity/types';
+import type { FontMetrics } from '../../src/lib/type/metrics';
 
 export class Studio extends Model<InferAttributes<Studio>, InferCreationAttributes<Studio>> {
   declare id: CreationOptional<string>;
@@ -34,6 +36,7 @@ export class Brand extends Model<InferAttributes<Brand>, InferCreationAttributes
   declare name: string;
   declare slug: string;
   declare createdById: string | null;
+  declare typeScale: CreationOptional<TypeScaleSettings | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -73,6 +76,61 @@ export class AuditEvent extends Model<InferAttributes<AuditEvent>, InferCreation
   declare createdAt: CreationOptional<Date>;
 }
 
+export class BrandColor extends Model<InferAttributes<BrandColor>, InferCreationAttributes<BrandColor>> {
+  declare id: CreationOptional<string>;
+  declare brandId: string;
+  declare name: string;
+  declare value: string;
+  declare hex: string;
+  declare role: ColorRole | null;
+  declare cmykOverride: [number, number, number, number] | null;
+  declare spot: string | null;
+  declare position: number;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+export class BrandLogo extends Model<InferAttributes<BrandLogo>, InferCreationAttributes<BrandLogo>> {
+  declare id: CreationOptional<string>;
+  declare brandId: string;
+  declare name: string;
+  declare variant: LogoVariant;
+  declare format: 'svg' | 'png';
+  declare storageKey: string;
+  declare contentHash: string;
+  declare byteSize: number;
+  declare canvas: Box;
+  declare bounds: Box;
+  declare clearSpaceUnit: number;
+  declare clearSpaceLabel: string;
+  declare clearSpaceMultiple: number;
+  declare thinnestStroke: number;
+  declare minScreenPx: number | null;
+  declare minPrintMm: number | null;
+  declare position: number;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+export class BrandTypeface extends Model<InferAttributes<BrandTypeface>, InferCreationAttributes<BrandTypeface>> {
+  declare id: CreationOptional<string>;
+  declare brandId: string;
+  declare role: TypefaceRole;
+  declare family: string;
+  declare source: 'shipped' | 'upload';
+  declare shippedKey: string | null;
+  declare storageKey: string | null;
+  declare format: string;
+  declare metrics: FontMetrics;
+  declare fallback: string[];
+  declare weights: number[];
+  declare licenceConfirmedAt: Date | null;
+  declare licenceConfirmedById: string | null;
+  declare licenceNote: string | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
 const id = { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true };
 const timestamps = { createdAt: DataTypes.DATE, updatedAt: DataTypes.DATE };
 
@@ -95,6 +153,7 @@ export function initModels(sequelize: Sequelize): void {
       name: { type: DataTypes.STRING(120), allowNull: false },
       slug: { type: DataTypes.STRING(80), allowNull: false, unique: true },
       createdById: { type: DataTypes.TEXT, allowNull: true },
+      typeScale: { type: DataTypes.JSONB, allowNull: true },
       ...timestamps,
     },
     { ...common, tableName: 'brands' },
@@ -135,6 +194,65 @@ export function initModels(sequelize: Sequelize): void {
       createdAt: DataTypes.DATE,
     },
     { ...common, tableName: 'audit_events', updatedAt: false },
+  );
+
+  BrandColor.init(
+    {
+      id,
+      brandId: { type: DataTypes.UUID, allowNull: false },
+      name: { type: DataTypes.STRING(80), allowNull: false },
+      value: { type: DataTypes.STRING(200), allowNull: false },
+      hex: { type: DataTypes.STRING(9), allowNull: false },
+      role: { type: DataTypes.STRING(20), allowNull: true },
+      cmykOverride: { type: DataTypes.JSONB, allowNull: true },
+      spot: { type: DataTypes.STRING(120), allowNull: true },
+      position: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+      ...timestamps,
+    },
+    { ...common, tableName: 'brand_colors' },
+  );
+  BrandLogo.init(
+    {
+      id,
+      brandId: { type: DataTypes.UUID, allowNull: false },
+      name: { type: DataTypes.STRING(120), allowNull: false },
+      variant: { type: DataTypes.STRING(20), allowNull: false },
+      format: { type: DataTypes.STRING(8), allowNull: false },
+      storageKey: { type: DataTypes.STRING(200), allowNull: false },
+      contentHash: { type: DataTypes.STRING(64), allowNull: false },
+      byteSize: { type: DataTypes.INTEGER, allowNull: false },
+      canvas: { type: DataTypes.JSONB, allowNull: false },
+      bounds: { type: DataTypes.JSONB, allowNull: false },
+      clearSpaceUnit: { type: DataTypes.DOUBLE, allowNull: false },
+      clearSpaceLabel: { type: DataTypes.STRING(120), allowNull: false },
+      clearSpaceMultiple: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 1 },
+      thinnestStroke: { type: DataTypes.DOUBLE, allowNull: false },
+      minScreenPx: { type: DataTypes.INTEGER, allowNull: true },
+      minPrintMm: { type: DataTypes.DOUBLE, allowNull: true },
+      position: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+      ...timestamps,
+    },
+    { ...common, tableName: 'brand_logos' },
+  );
+  BrandTypeface.init(
+    {
+      id,
+      brandId: { type: DataTypes.UUID, allowNull: false },
+      role: { type: DataTypes.STRING(20), allowNull: false },
+      family: { type: DataTypes.STRING(120), allowNull: false },
+      source: { type: DataTypes.STRING(10), allowNull: false },
+      shippedKey: { type: DataTypes.STRING(60), allowNull: true },
+      storageKey: { type: DataTypes.STRING(200), allowNull: true },
+      format: { type: DataTypes.STRING(8), allowNull: false },
+      metrics: { type: DataTypes.JSONB, allowNull: false },
+      fallback: { type: DataTypes.JSONB, allowNull: false },
+      weights: { type: DataTypes.JSONB, allowNull: false },
+      licenceConfirmedAt: { type: DataTypes.DATE, allowNull: true },
+      licenceConfirmedById: { type: DataTypes.TEXT, allowNull: true },
+      licenceNote: { type: DataTypes.STRING(500), allowNull: true },
+      ...timestamps,
+    },
+    { ...common, tableName: 'brand_typefaces' },
   );
 
   Studio.hasMany(StudioMember, { foreignKey: 'studioId', as: 'members' });

@@ -4,7 +4,11 @@ import { connect } from '../../db/models';
 import { migrateAll } from '../../db/migrate';
 import { seedDemo } from '../../db/seeders/demo';
 import type { AuthSettings } from '../../src/lib/auth/auth-options';
+import { join } from 'node:path';
 import { projectRoot } from './settings';
+
+/** Where the build goes (PLUMBLINE_OUT_DIR, default dist/). */
+export const outDir = () => process.env.PLUMBLINE_OUT_DIR ?? join(projectRoot, 'dist');
 
 /** Run migrations and seed the demo against `settings.databaseUrl`. */
 export async function prepareDatabase(settings: AuthSettings, opts: { seed?: boolean } = {}): Promise<{ migrations: string[] }> {
@@ -18,7 +22,7 @@ export async function prepareDatabase(settings: AuthSettings, opts: { seed?: boo
   }
 }
 
-/** Build the Astro server bundle into dist/. */
+/** Build the Astro server bundle into outDir(). */
 export function buildApp(): void {
   const result = spawnSync(process.execPath, ['node_modules/astro/astro.js', 'build', '--silent'], {
     cwd: projectRoot,
@@ -35,11 +39,12 @@ export interface ServerEnv {
   siteUrl: string;
   secret: string;
   signInLimit?: number;
+  filesDir?: string;
 }
 
 /** Start the built server and resolve once it answers HTTP. */
 export async function startServer(env: ServerEnv, opts: { quiet?: boolean } = {}): Promise<ChildProcess> {
-  const child = spawn(process.execPath, ['dist/server/entry.mjs'], {
+  const child = spawn(process.execPath, [join(outDir(), 'server', 'entry.mjs')], {
     cwd: projectRoot,
     stdio: opts.quiet ? ['ignore', 'ignore', 'inherit'] : 'inherit',
     env: {
@@ -52,6 +57,7 @@ export async function startServer(env: ServerEnv, opts: { quiet?: boolean } = {}
       SITE_URL: env.siteUrl,
       AUTH_SECRET: env.secret,
       ...(env.signInLimit ? { AUTH_SIGN_IN_LIMIT: String(env.signInLimit) } : {}),
+      ...(env.filesDir ? { FILES_DIR: env.filesDir } : {}),
     },
   });
   const url = `http://${env.host}:${env.port}/`;

@@ -2,6 +2,9 @@
 import { Client, signUpFresh } from '../support/client';
 import type { BrandRole } from '../../src/lib/auth/roles';
 
+/** A small logo of our own: a circle mark with a margin, for fixtures. */
+export const FIXTURE_SVG = '<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 120 60"><circle cx="30" cy="30" r="20" fill="#1d2a44"/><rect x="60" y="20" width="40" height="20" fill="#c8553d"/></svg>';
+
 export const CALLERS = ['anonymous', 'owner', 'editor', 'reviewer', 'partner', 'viewer', 'outsider'] as const;
 export type CallerName = (typeof CALLERS)[number];
 
@@ -28,8 +31,17 @@ export async function makeCast(): Promise<Cast> {
   return { clients, emails, target: { email: target.email } };
 }
 
-/** A brand owned by the cast's owner with every other role filled; returns its id and the target's member id. */
-export async function makeBrand(cast: Cast, name = 'Fixture Brand'): Promise<{ brandId: string; targetMemberId: string }> {
+/** What a matrix row may refer to: a fresh brand with every role filled, and things inside it. */
+export interface Fixture {
+  brandId: string;
+  targetMemberId: string;
+  colorId: string;
+  logoId: string;
+  typefaceId: string;
+}
+
+/** A brand owned by the cast's owner with every other role filled, one colour, one logo and one typeface. */
+export async function makeBrand(cast: Cast, name = 'Fixture Brand'): Promise<Fixture> {
   const owner = cast.clients.owner;
   const created = await owner.post('/api/brands', { name });
   if (created.status !== 201) throw new Error(`brand create answered ${created.status}`);
@@ -47,5 +59,9 @@ export async function makeBrand(cast: Cast, name = 'Fixture Brand'): Promise<{ b
     if (r.status !== 201) throw new Error(`member add answered ${r.status}: ${JSON.stringify(r.body)}`);
     if (email === cast.target.email) targetMemberId = r.body.member.id;
   }
-  return { brandId, targetMemberId };
+  const color = await owner.post(`/api/brands/${brandId}/colors`, { name: 'Ink', value: '#1d2a44' });
+  const typeface = await owner.post(`/api/brands/${brandId}/typefaces`, { shipped: 'dm-sans', role: 'body' });
+  const logo = await owner.upload(`/api/brands/${brandId}/logos`, 'mark.svg', FIXTURE_SVG, 'image/svg+xml');
+  for (const r of [color, typeface, logo]) if (r.status !== 201) throw new Error(`fixture answered ${r.status}: ${JSON.stringify(r.body)}`);
+  return { brandId, targetMemberId, colorId: color.body.color.id, logoId: logo.body.logo.id, typefaceId: typeface.body.typeface.id };
 }

@@ -2,46 +2,11 @@
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join, relative } from 'node:path';
 import { beforeAll, describe, expect, test } from 'vitest';
-import { CALLERS, makeBrand, makeCast, type Cast, type CallerName } from './fixtures';
+import { CALLERS, makeBrand, makeCast, type Cast } from './fixtures';
+import type { Route } from './matrix/route';
 
-interface Route {
-  method: string;
-  /** Route file pattern as Astro names it, so the table can be checked against src/pages/api. */
-  file: string;
-  path: (f: { brandId: string; targetMemberId: string }) => string;
-  body?: () => unknown;
-  expect: Record<CallerName, number>;
-}
-
-const all = (ok: number, overrides: Partial<Record<CallerName, number>> = {}): Record<CallerName, number> => ({
-  anonymous: 401,
-  owner: ok,
-  editor: ok,
-  reviewer: ok,
-  partner: ok,
-  viewer: ok,
-  outsider: ok,
-  ...overrides,
-});
-const only = (ok: number, allowed: CallerName[]): Record<CallerName, number> => {
-  const row = all(403, { outsider: 404 });
-  for (const c of allowed) row[c] = ok;
-  return row;
-};
-let n = 0;
-const unique = () => `invitee-${Date.now()}-${n++}@test.example`;
-
-const ROUTES: Route[] = [
-  { method: 'GET', file: 'brands/index.ts', path: () => '/api/brands', expect: all(200) },
-  { method: 'POST', file: 'brands/index.ts', path: () => '/api/brands', body: () => ({ name: 'Matrix Made' }), expect: all(201) },
-  { method: 'GET', file: 'brands/[id]/index.ts', path: (f) => `/api/brands/${f.brandId}`, expect: all(200, { outsider: 404 }) },
-  { method: 'PATCH', file: 'brands/[id]/index.ts', path: (f) => `/api/brands/${f.brandId}`, body: () => ({ name: 'Renamed' }), expect: only(200, ['owner', 'editor']) },
-  { method: 'DELETE', file: 'brands/[id]/index.ts', path: (f) => `/api/brands/${f.brandId}`, expect: only(204, ['owner']) },
-  { method: 'GET', file: 'brands/[id]/members/index.ts', path: (f) => `/api/brands/${f.brandId}/members`, expect: only(200, ['owner', 'editor']) },
-  { method: 'POST', file: 'brands/[id]/members/index.ts', path: (f) => `/api/brands/${f.brandId}/members`, body: () => ({ email: unique(), role: 'viewer' }), expect: only(201, ['owner']) },
-  { method: 'PATCH', file: 'brands/[id]/members/[memberId].ts', path: (f) => `/api/brands/${f.brandId}/members/${f.targetMemberId}`, body: () => ({ role: 'partner' }), expect: only(200, ['owner']) },
-  { method: 'DELETE', file: 'brands/[id]/members/[memberId].ts', path: (f) => `/api/brands/${f.brandId}/members/${f.targetMemberId}`, expect: only(204, ['owner']) },
-];
+// Each area lists its routes in matrix/<area>.routes.ts; a new endpoint needs a row there.
+const ROUTES: Route[] = Object.values(import.meta.glob<{ default: Route[] }>('./matrix/*.routes.ts', { eager: true })).flatMap((m) => m.default);
 
 let cast: Cast;
 beforeAll(async () => {
@@ -52,7 +17,11 @@ describe.each(ROUTES)('$method $file', (route) => {
   test.each(CALLERS.map((c) => [c, route.expect[c]] as const))('%s → %i', async (caller, status) => {
     // A fresh brand per case, so a delete or a role change in one case cannot colour the next.
     const fixture = await makeBrand(cast);
-    const r = await cast.clients[caller].request(route.method, route.path(fixture), route.body?.());
+    const client = cast.clients[caller];
+    const u = route.upload?.();
+    const r = u
+      ? await client.upload(route.path(fixture), u.filename, u.content, u.type, u.fields)
+      : await client.request(route.method, route.path(fixture), route.body?.(fixture));
     expect(r.status, JSON.stringify(r.body)).toBe(status);
     if (status >= 400) {
       expect(r.body.error.code).toBeTypeOf('string');

@@ -42,6 +42,24 @@ export class Client {
     return { status: res.status, body: parsed as T, headers: res.headers };
   }
 
+  /** Upload one file as multipart/form-data (field "file") with extra text fields. */
+  async upload<T = any>(path: string, filename: string, content: string | Uint8Array, type: string, fields: Record<string, string> = {}): Promise<Reply<T>> {
+    const form = new FormData();
+    form.set('file', new Blob([typeof content === 'string' ? content : new Uint8Array(content)], { type }), filename);
+    for (const [k, v] of Object.entries(fields)) form.set(k, v);
+    const h: Record<string, string> = { origin: baseUrl() };
+    if (this.cookies.size) h.cookie = [...this.cookies].map(([k, v]) => `${k}=${v}`).join('; ');
+    const res = await fetch(baseUrl() + path, { method: 'POST', headers: h, body: form });
+    const text = await res.text();
+    let parsed: unknown = text;
+    try {
+      parsed = text ? JSON.parse(text) : undefined;
+    } catch {
+      // Not JSON: keep the text.
+    }
+    return { status: res.status, body: parsed as T, headers: res.headers };
+  }
+
   get = <T = any>(path: string) => this.request<T>('GET', path);
   post = <T = any>(path: string, body?: unknown) => this.request<T>('POST', path, body ?? {});
   patch = <T = any>(path: string, body?: unknown) => this.request<T>('PATCH', path, body ?? {});

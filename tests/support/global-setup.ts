@@ -12,6 +12,8 @@ let server: ChildProcess | undefined;
 let clusterDir: string | undefined;
 
 export async function setup(project: TestProject): Promise<void> {
+  // The suite builds into its own folder, so it never disturbs a running `npm start`.
+  process.env.PLUMBLINE_OUT_DIR ??= join(process.cwd(), 'dist-test');
   clusterDir = mkdtempSync(join(tmpdir(), 'plumbline-test-'));
   const cluster = startCluster(clusterDir, await freePort());
   const port = await freePort();
@@ -21,7 +23,8 @@ export async function setup(project: TestProject): Promise<void> {
   const signInLimit = 10_000;
   await prepareDatabase({ databaseUrl: cluster.url, siteUrl, secret, signInLimit });
   if (process.env.PLUMBLINE_TEST_SKIP_BUILD !== '1') buildApp();
-  server = await startServer({ host: '127.0.0.1', port, databaseUrl: cluster.url, siteUrl, secret, signInLimit }, { quiet: true });
+  const filesDir = join(clusterDir, 'files');
+  server = await startServer({ host: '127.0.0.1', port, databaseUrl: cluster.url, siteUrl, secret, signInLimit, filesDir }, { quiet: true });
   project.provide('baseUrl', siteUrl);
   project.provide('databaseUrl', cluster.url);
 }

@@ -1,7 +1,8 @@
 // Brands and their people: creation, renaming, deletion, members and pending invitations.
 import { createHash, randomBytes } from 'node:crypto';
 import { Op, QueryTypes, type Transaction } from 'sequelize';
-import { Brand, BrandMember, Invitation, Studio, StudioMember } from '../../../db/models';
+import { Brand, BrandLogo, BrandMember, BrandTypeface, Invitation, Studio, StudioMember } from '../../../db/models';
+import { storage } from '../storage/index.server';
 import { audit } from '../audit.server';
 import type { Caller } from '../auth/access.server';
 import type { BrandRole } from '../auth/roles';
@@ -74,10 +75,15 @@ export async function updateBrand(caller: Caller, brand: Brand, changes: { name?
 
 /** Delete a brand and everything it holds; the audit rows stay, with the brand reference cleared. */
 export async function deleteBrand(caller: Caller, brand: Brand): Promise<void> {
+  const files = [
+    ...(await BrandLogo.findAll({ where: { brandId: brand.id }, attributes: ['storageKey'] })).map((l) => l.storageKey),
+    ...(await BrandTypeface.findAll({ where: { brandId: brand.id }, attributes: ['storageKey'] })).map((f) => f.storageKey),
+  ].filter((k): k is string => !!k);
   await sequelize.transaction(async (t) => {
     await audit({ actorId: caller.id, action: 'brand.delete', targetType: 'brand', targetId: brand.id, studioId: brand.studioId, details: { name: brand.name, slug: brand.slug } }, t);
     await brand.destroy({ transaction: t });
   });
+  await Promise.all(files.map((key) => storage.delete(key)));
 }
 
 export interface MemberView {

@@ -100,3 +100,48 @@ export function idParam(value: string | undefined, what = 'That brand'): string 
 /** Answer for a method a resource does not offer. */
 export const methodNotAllowed: APIRoute = ({ request }) =>
   errorResponse(new ApiError(405, 'method_not_allowed', `${request.method} is not offered here.`));
+
+/** Read a multipart form, refusing other bodies and anything over `maxBytes` before it is parsed. */
+export async function readForm(request: Request, maxBytes: number): Promise<FormData> {
+  const type = request.headers.get('content-type') ?? '';
+  if (!type.includes('multipart/form-data')) {
+    throw new ApiError(415, 'unsupported_media_type', 'Send files as multipart/form-data, in a field named "file".');
+  }
+  const length = Number(request.headers.get('content-length') ?? 0);
+  if (length > maxBytes) throw new ApiError(413, 'too_large', `The upload is larger than ${Math.round(maxBytes / 1024 / 1024)} MB.`);
+  try {
+    return await request.formData();
+  } catch {
+    throw new ApiError(400, 'malformed_form', 'The upload could not be read as a form.');
+  }
+}
+
+/** The single file in a form's "file" field, or a 400 saying it is missing. */
+export function formFile(form: FormData, field = 'file'): File {
+  const file = form.get(field);
+  if (!(file instanceof File)) throw new ApiError(400, 'missing_file', `Attach a file in the "${field}" field.`);
+  return file;
+}
+
+/** The form's text fields (the file field aside) as a plain object, for a zod schema. */
+export function formFields(form: FormData, skip = 'file'): Record<string, string> {
+  const out: Record<string, string> = {};
+  for (const [k, v] of form.entries()) if (k !== skip && typeof v === 'string') out[k] = v;
+  return out;
+}
+
+/** A file download response; `inline` shows it in the browser, otherwise it downloads with the name given. */
+export function fileResponse(body: Buffer, contentType: string, filename: string, opts: { inline?: boolean } = {}): Response {
+  const safe = filename.replace(/[^\w.-]+/g, '-');
+  return new Response(new Uint8Array(body), {
+    headers: {
+      'content-type': contentType,
+      'content-length': String(body.length),
+      'content-disposition': `${opts.inline ? 'inline' : 'attachment'}; filename="${safe}"`,
+      'cache-control': 'private, no-cache',
+      'x-content-type-options': 'nosniff',
+      // An SVG opened directly must not run anything, whatever slipped through.
+      'content-security-policy': "default-src 'none'; style-src 'unsafe-inline'; sandbox",
+    },
+  });
+}

@@ -1,0 +1,17 @@
+// A shelf of approved files; the list is filled once assets exist.
+import { refIdSchema } from '../ids';
+import { defineBlock, distinctList, text } from './define';
+
+export const downloadsBlock = defineBlock({
+  type: 'downloads',
+  label: 'Downloads',
+  description: 'A list of approved files readers may download.',
+  group: 'files',
+  fields: {
+    title: text(200, 'Files to download'),
+    assetIds: distinctList(refIdSchema('asset'), 100, 'files').default(() => []),
+    note: text(500),
+  },
+});
+export const downloadsSchema = downloadsBlock.schema;
+export type DownloadsAttrs = ReturnType<typeof downloadsSchema.parse>;

@@ -1,0 +1,24 @@
+// Chosen logo variants, each on light, dark and brand-colour grounds.
+import { z } from 'zod';
+import { refIdSchema } from '../ids';
+import { defineBlock, distinctList, text } from './define';
+
+/** Which file of the logo sits on the dark and brand grounds. */
+export const ON_DARK_FILES = ['white', 'reversed', 'original'] as const;
+
+export const logoShowcaseBlock = defineBlock({
+  type: 'logoShowcase',
+  label: 'Logo on grounds',
+  description: 'Logo variants shown on light, dark and brand-colour backgrounds.',
+  group: 'logo',
+  fields: {
+    logoIds: distinctList(refIdSchema('logo'), 12, 'logos').default(() => []),
+    /** The brand ground; null takes the identity's primary colour. */
+    brandColorId: refIdSchema('colour').nullable().default(null),
+    onDark: z.enum(ON_DARK_FILES, { error: 'onDark must be "white", "reversed" or "original".' }).default('white'),
+    caption: text(500),
+  },
+  starter: { logoIds: ['$all'], brandColorId: '$primary' },
+});
+export const logoShowcaseSchema = logoShowcaseBlock.schema;
+export type LogoShowcaseAttrs = ReturnType<typeof logoShowcaseSchema.parse>;

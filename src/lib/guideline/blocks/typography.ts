@@ -1,0 +1,23 @@
+// The brand's typefaces by role, a specimen, and the type scale set in the real fonts.
+import { z } from 'zod';
+import { TYPEFACE_ROLES } from '../../identity/types';
+import { defineBlock, distinctList, text } from './define';
+
+export const SPECIMEN_DEFAULT = 'Roasted slowly, poured with care: quiet mornings start here.';
+
+export const typographyBlock = defineBlock({
+  type: 'typography',
+  label: 'Typography',
+  description: 'Typefaces by role, a specimen and the type scale.',
+  group: 'type',
+  fields: {
+    roles: distinctList(z.enum(TYPEFACE_ROLES, { error: `A role must be one of ${TYPEFACE_ROLES.join(', ')}.` }), TYPEFACE_ROLES.length, 'roles').default(
+      () => [...TYPEFACE_ROLES],
+    ),
+    showSpecimen: z.boolean({ error: 'showSpecimen must be true or false.' }).default(true),
+    specimenText: text(300, SPECIMEN_DEFAULT),
+    showScale: z.boolean({ error: 'showScale must be true or false.' }).default(true),
+  },
+});
+export const typographySchema = typographyBlock.schema;
+export type TypographyAttrs = ReturnType<typeof typographySchema.parse>;

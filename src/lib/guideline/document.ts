@@ -1,0 +1,144 @@
+// The guideline document: ProseMirror JSON made of registry blocks and rich text, with the limits the server enforces.
+import { z } from 'zod';
+import { BLOCKS, blockDefinition, type BlockAttrs, type BlockType } from './blocks';
+import { INNER_TYPES, RICH_TEXT_SCHEMAS, RICH_TEXT_TYPES, type RichBlockNode } from './richText';
+
+/** Limits on one stored document. */
+export const GUIDELINE_LIMITS = {
+  /** Size of the document as JSON, in bytes (UTF-8). */
+  maxBytes: 2 * 1024 * 1024,
+  /** Nesting of content arrays below the doc (a paragraph's text is at depth 2). */
+  maxDepth: 12,
+  maxTopLevelBlocks: 2000,
+} as const;
+
+export type IdentityBlockNode = { [T in BlockType]: { type: T; attrs: BlockAttrs<T> } }[BlockType];
+export type TopLevelNode = IdentityBlockNode | RichBlockNode;
+export interface GuidelineDoc {
+  type: 'doc';
+  content: TopLevelNode[];
+}
+
+const blockNodeSchemas = BLOCKS.map((b) => z.strictObject({ type: z.literal(b.type), attrs: b.schema }));
+
+const topLevelSchema = z.union([...blockNodeSchemas, ...Object.values(RICH_TEXT_SCHEMAS)] as unknown as [z.ZodType, z.ZodType, ...z.ZodType[]]);
+
+/** The whole document: every top-level block carries a distinct id. */
+export const guidelineDocSchema = z
+  .strictObject({
+    type: z.literal('doc', { error: 'The document must have type "doc".' }),
+    content: z
+      .array(topLevelSchema)
+      .max(GUIDELINE_LIMITS.maxTopLevelBlocks, { error: `A document may hold at most ${GUIDELINE_LIMITS.maxTopLevelBlocks} blocks.` }),
+  })
+  .superRefine((doc, ctx) => {
+    const seen = new Set<string>();
+    (doc.content as TopLevelNode[]).forEach((node, i) => {
+      const id = (node.attrs as { id?: unknown } | undefined)?.id;
+      if (typeof id !== 'string') ctx.addIssue({ code: 'custom', path: ['content', i, 'attrs', 'id'], message: 'Every block needs an id.' });
+      else if (seen.has(id)) ctx.addIssue({ code: 'custom', path: ['content', i, 'attrs', 'id'], message: `The block id "${id}" is used twice.` });
+      else seen.add(id);
+    });
+  }) as unknown as z.ZodType<GuidelineDoc>;
+
+export type ValidationResult = { ok: true; doc: GuidelineDoc } | { ok: false; error: { path: string; message: string } };
+
+const KNOWN_TYPES = new Set<string>([...BLOCKS.map((b) => b.type), ...RICH_TEXT_TYPES, ...INNER_TYPES]);
+
+const fail = (path: (string | number)[], message: string): ValidationResult => ({ ok: false, error: { path: path.join('.'), message } });
+
+/** UTF-8 length of a string without allocating a buffer. */
+function utf8Length(text: string): number {
+  let bytes = 0;
+  for (let i = 0; i < text.length; i++) {
+    const code = text.charCodeAt(i);
+    if (code < 0x80) bytes += 1;
+    else if (code < 0x800) bytes += 2;
+    else if (code >= 0xd800 && code <= 0xdbff) {
+      bytes += 4;
+      i++;
+    } else bytes += 3;
+  }
+  return bytes;
+}
+
+/** Walks node trees in document order: too deep, not an object or an unknown type → the first offending path. */
+function checkTree(nodes: unknown[], path: (string | number)[], depth: number): ValidationResult | null {
+  for (let i = 0; i < nodes.length; i++) {
+    const node = nodes[i];
+    const here = [...path, i];
+    if (depth > GUIDELINE_LIMITS.maxDepth) return fail(here, `The document nests deeper than ${GUIDELINE_LIMITS.maxDepth} levels.`);
+    if (typeof node !== 'object' || node === null || Array.isArray(node)) return fail(here, 'Expected a block (an object with a type).');
+    const { type, content } = node as { type?: unknown; content?: unknown };
+    if (typeof type !== 'string') return fail([...here, 'type'], 'A block needs a type.');
+    if (!KNOWN_TYPES.has(type)) return fail([...here, 'type'], `Unknown block type "${type.slice(0, 60)}".`);
+    if (depth === 1 && (INNER_TYPES as readonly string[]).includes(type)) {
+      return fail([...here, 'type'], `"${type}" may only appear inside another block.`);
+    }
+    if (Array.isArray(content)) {
+      const inner = checkTree(content, [...here, 'content'], depth + 1);
+      if (inner) return inner;
+    }
+  }
+  return null;
+}
+
+function describeIssue(issue: z.core.$ZodIssue): { path: (string | number)[]; message: string } {
+  const path = issue.path.map((p) => (typeof p === 'symbol' ? String(p) : p));
+  if (issue.code === 'unrecognized_keys') return { path: [...path, issue.keys[0]], message: `Unknown attribute "${issue.keys[0]}".` };
+  return { path, message: issue.message };
+}
+
+/** Checks a stored or submitted document against the limits and every block's schema; names the first bad path. */
+export function validateGuideline(doc: unknown): ValidationResult {
+  let json: string | undefined;
+  try {
+    json = JSON.stringify(doc);
+  } catch {
+    return fail([], 'The document could not be read as JSON.');
+  }
+  if (json === undefined || typeof doc !== 'object' || doc === null || Array.isArray(doc)) return fail([], 'The document must be an object {type:"doc", content:[…]}.');
+  const bytes = utf8Length(json);
+  if (bytes > GUIDELINE_LIMITS.maxBytes) {
+    return fail([], `The document is ${(bytes / 1024 / 1024).toFixed(1)} MB; the limit is ${GUIDELINE_LIMITS.maxBytes / 1024 / 1024} MB.`);
+  }
+  const { type, content } = doc as { type?: unknown; content?: unknown };
+  if (type !== 'doc') return fail(['type'], 'The document must have type "doc".');
+  if (!Array.isArray(content)) return fail(['content'], 'The document needs a content list.');
+  if (content.length > GUIDELINE_LIMITS.maxTopLevelBlocks) {
+    return fail(['content'], `A document may hold at most ${GUIDELINE_LIMITS.maxTopLevelBlocks} blocks; this one has ${content.length}.`);
+  }
+  const treeError = checkTree(content, ['content'], 1);
+  if (treeError) return treeError;
+  const parsed = guidelineDocSchema.safeParse(doc);
+  if (parsed.success) return { ok: true, doc: parsed.data };
+  // A union hides which member was meant: re-check the first failing block against its own type's schema.
+  const first = parsed.error.issues[0];
+  const index = first.path[0] === 'content' && typeof first.path[1] === 'number' ? first.path[1] : -1;
+  if (index >= 0 && first.code === 'invalid_union') {
+    const node = content[index] as { type: string };
+    const own = blockDefinition(node.type)
+      ? z.strictObject({ type: z.literal(node.type), attrs: blockDefinition(node.type)!.schema })
+      : RICH_TEXT_SCHEMAS[node.type as keyof typeof RICH_TEXT_SCHEMAS];
+    const result = own?.safeParse(node);
+    if (result && !result.success) {
+      const { path, message } = describeIssue(result.error.issues[0]);
+      return fail(['content', index, ...path], message);
+    }
+  }
+  const { path, message } = describeIssue(first);
+  return fail(path, message);
+}
+
+/** Parses a block's attributes through its schema (defaults filled), or null when they do not fit. */
+export function parseBlockAttrs<T extends BlockType>(type: T, attrs: unknown): BlockAttrs<T> | null {
+  const def = blockDefinition(type);
+  if (!def) return null;
+  const result = def.schema.safeParse(attrs ?? {});
+  return result.success ? (result.data as BlockAttrs<T>) : null;
+}
+
+/** True for a top-level node that is a registry block (not rich text). */
+export function isIdentityBlock(node: { type: string }): node is IdentityBlockNode {
+  return blockDefinition(node.type) !== undefined;
+}

@@ -1,0 +1,93 @@
+// Request bodies for the identity: colours, logos, typefaces and the type scale.
+import { z } from 'zod';
+import { SCALE_RATIOS } from '../type/scale';
+import { SHIPPED_FONTS } from '../type/shipped-fonts';
+import { COLOR_ROLES, LOGO_VARIANTS, TYPEFACE_ROLES } from './types';
+
+const percent = z.number().min(0, 'CMYK values run from 0 to 100.').max(100, 'CMYK values run from 0 to 100.');
+export const cmykSchema = z.tuple([percent, percent, percent, percent], { error: 'Give CMYK as four numbers [c, m, y, k] from 0 to 100.' });
+
+const colorName = z.string().trim().min(1, 'Give the colour a name.').max(80, 'A colour name can be at most 80 characters.');
+const colorValue = z.string().trim().min(1, 'Type a colour value, e.g. #1f6f5c or oklch(55% 0.1 170).').max(200);
+const spot = z.string().trim().max(120, 'Keep the spot reference under 120 characters.').nullable();
+
+export const createColorBody = z.strictObject({
+  name: colorName,
+  value: colorValue,
+  role: z.enum(COLOR_ROLES).nullable().optional(),
+  cmyk: cmykSchema.nullable().optional(),
+  spot: spot.optional(),
+});
+
+export const updateColorBody = z
+  .strictObject({
+    name: colorName.optional(),
+    value: colorValue.optional(),
+    role: z.enum(COLOR_ROLES).nullable().optional(),
+    cmyk: cmykSchema.nullable().optional(),
+    spot: spot.optional(),
+  })
+  .refine((b) => Object.keys(b).length > 0, 'Send at least one field to change.');
+
+export const reorderBody = z.strictObject({ ids: z.array(z.uuid()).min(1).max(500) });
+
+export const logoFields = z.strictObject({
+  name: z.string().trim().min(1).max(120).optional(),
+  variant: z.enum(LOGO_VARIANTS, { error: `Choose a variant: ${LOGO_VARIANTS.join(', ')}.` }).default('primary'),
+});
+
+export const updateLogoBody = z
+  .strictObject({
+    name: z.string().trim().min(1).max(120).optional(),
+    variant: z.enum(LOGO_VARIANTS).optional(),
+    clearSpaceUnit: z.number().positive('The clear-space unit must be larger than 0.').max(1e5).optional(),
+    clearSpaceLabel: z.string().trim().min(1).max(120).optional(),
+    clearSpaceMultiple: z.number().min(0.25).max(10).optional(),
+    thinnestStroke: z.number().positive().max(1e5).optional(),
+    minScreenPx: z.number().int().min(4).max(4000).nullable().optional(),
+    minPrintMm: z.number().min(1).max(2000).nullable().optional(),
+  })
+  .refine((b) => Object.keys(b).length > 0, 'Send at least one field to change.');
+
+const fallback = z.array(z.string().trim().min(1).max(60).regex(/^[^;{}<>"\\]+$/, 'A fallback font name cannot contain ; { } < > " or \\.')).max(8);
+
+export const shippedTypefaceBody = z.strictObject({
+  shipped: z.enum(SHIPPED_FONTS.map((f) => f.key) as [string, ...string[]], { error: 'Pick one of the open fonts Plumbline ships.' }),
+  role: z.enum(TYPEFACE_ROLES),
+  fallback: fallback.optional(),
+});
+
+export const typefaceUploadFields = z.strictObject({
+  role: z.enum(TYPEFACE_ROLES, { error: `Choose a role: ${TYPEFACE_ROLES.join(', ')}.` }),
+  family: z.string().trim().min(1).max(120).optional(),
+});
+
+export const updateTypefaceBody = z
+  .strictObject({
+    role: z.enum(TYPEFACE_ROLES).optional(),
+    fallback: fallback.optional(),
+    weights: z.array(z.number().int().min(1).max(1000)).max(12).optional(),
+    licenceConfirmed: z.boolean().optional(),
+    licenceNote: z.string().trim().max(500).nullable().optional(),
+  })
+  .refine((b) => Object.keys(b).length > 0, 'Send at least one field to change.');
+
+export const typeScaleBody = z.strictObject({
+  basePx: z.number().min(10, 'A base size under 10 px is too small to read.').max(32),
+  ratioName: z.enum(Object.keys(SCALE_RATIOS) as [string, ...string[]], { error: `Choose a ratio: ${Object.keys(SCALE_RATIOS).join(', ')}.` }),
+  stepsUp: z.number().int().min(1).max(10),
+  stepsDown: z.number().int().min(0).max(4),
+  bodyLineHeight: z.number().min(1).max(2.5),
+  headingLineHeight: z.number().min(0.9).max(2),
+  columnPx: z.number().int().min(200).max(1600),
+});
+
+export const DEFAULT_TYPE_SCALE = {
+  basePx: 16,
+  ratioName: 'major-third',
+  stepsUp: 5,
+  stepsDown: 1,
+  bodyLineHeight: 1.5,
+  headingLineHeight: 1.15,
+  columnPx: 600,
+} as const;

@@ -1,0 +1,113 @@
+// The identity document: everything a brand types once (colours, logos, typefaces, type scale) with every
+// computed value beside it. GET /api/brands/:id/identity returns it; blocks, the published site, the PDF
+// and the token files are all rendered from it.
+import type { ColorValues } from '../color/values';
+import type { FontMetrics } from '../type/metrics';
+
+export const COLOR_ROLES = ['primary', 'secondary', 'accent', 'neutral', 'background', 'text', 'support'] as const;
+export type ColorRole = (typeof COLOR_ROLES)[number];
+
+export interface IdentityColor extends ColorValues {
+  id: string;
+  name: string;
+  /** What the designer typed, e.g. "oklch(62% 0.14 40)". */
+  value: string;
+  role: ColorRole | null;
+  /** Press values through libvips' built-in CMYK profile, beside the plain formula in `cmyk`. */
+  cmykIcc: [number, number, number, number];
+  /** The designer's own CMYK for print, when they have proofed one; shown instead of the computed values. */
+  cmykOverride: [number, number, number, number] | null;
+  /** A spot-colour reference typed by the designer (free text, e.g. a swatch-book number). */
+  spot: string | null;
+  position: number;
+}
+
+export const LOGO_VARIANTS = ['primary', 'secondary', 'mark', 'wordmark', 'lockup', 'monogram'] as const;
+export type LogoVariant = (typeof LOGO_VARIANTS)[number];
+
+export interface Box {
+  x: number;
+  y: number;
+  width: number;
+  height: number;
+}
+
+export interface IdentityLogo {
+  id: string;
+  name: string;
+  variant: LogoVariant;
+  format: 'svg' | 'png';
+  /** The canvas in the logo's own units (the SVG viewBox, or PNG pixels). */
+  canvas: Box;
+  /** Drawn bounds measured from a raster: transparent margins do not count. */
+  bounds: Box;
+  clearSpace: {
+    /** Size of one clear-space unit in logo units, and what the designer calls it (e.g. "height of the mark"). */
+    unitSize: number;
+    unitLabel: string;
+    multiple: number;
+    /** The protected area around the drawn bounds, in logo units. */
+    box: Box;
+  };
+  minimumSize: {
+    thinnestStroke: number;
+    suggested: { screenPx: number; printMm: number };
+    /** What the designer settled on (defaults to the suggestion). */
+    screenPx: number;
+    printMm: number;
+  };
+  /** Where to fetch the file and its recoloured variants (members only). */
+  files: { original: string; black: string; white: string; reversed: string };
+  position: number;
+}
+
+export const TYPEFACE_ROLES = ['heading', 'body', 'accent'] as const;
+export type TypefaceRole = (typeof TYPEFACE_ROLES)[number];
+
+export interface IdentityTypeface {
+  id: string;
+  role: TypefaceRole;
+  family: string;
+  source: 'shipped' | 'upload';
+  /** Key of an open font Plumbline ships, when source is "shipped". */
+  shippedKey: string | null;
+  fallback: string[];
+  weights: number[];
+  metrics: FontMetrics;
+  licence: { confirmed: boolean; confirmedAt: string | null; note: string | null; shippedLicence: string | null };
+  fileUrl: string;
+}
+
+export interface TypeScaleSettings {
+  basePx: number;
+  ratioName: string;
+  stepsUp: number;
+  stepsDown: number;
+  bodyLineHeight: number;
+  headingLineHeight: number;
+  /** Column width the measure is computed for, in CSS px. */
+  columnPx: number;
+}
+
+export interface TypeScaleStep {
+  name: string;
+  step: number;
+  px: number;
+  rem: number;
+  pt: number;
+  lineHeight: number;
+  role: TypefaceRole;
+}
+
+export interface Identity {
+  brand: { id: string; name: string; slug: string };
+  colors: IdentityColor[];
+  logos: IdentityLogo[];
+  typefaces: IdentityTypeface[];
+  typeScale: TypeScaleSettings & {
+    ratio: number;
+    steps: TypeScaleStep[];
+    /** Characters per line of body text at columnPx, from the body face's own advance widths. */
+    measure: { charsPerLine: number; verdict: 'too-short' | 'comfortable' | 'too-long'; range: { min: number; max: number; ideal: number } } | null;
+  };
+}

@@ -1,0 +1,23 @@
+// One storage interface for every stored file: local disk by default, an S3-compatible store later.
+
+export interface StoredObject {
+  key: string;
+  size: number;
+}
+
+export interface FileStorage {
+  /** Store bytes under a key; overwrites. */
+  put(key: string, bytes: Uint8Array, contentType: string): Promise<StoredObject>;
+  /** The bytes under a key, or null when there are none. */
+  get(key: string): Promise<Buffer | null>;
+  /** Remove a key; a missing key is not an error. */
+  delete(key: string): Promise<void>;
+}
+
+/** A generated, unguessable key inside a brand's folder, keeping only a safe extension. */
+export function newKey(brandId: string, kind: string, extension: string): string {
+  const ext = extension.replace(/[^a-z0-9]/gi, '').toLowerCase().slice(0, 8);
+  return `${brandId}/${kind}/${crypto.randomUUID()}${ext ? `.${ext}` : ''}`;
+}
+
+export const SAFE_KEY = /^[0-9a-f-]{36}\/[a-z-]+\/[0-9a-f-]{36}(\.[a-z0-9]{1,8})?$/;

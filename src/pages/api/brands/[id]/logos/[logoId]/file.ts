@@ -1,0 +1,20 @@
+import { z } from 'zod';
+import { authorizeBrand } from '../../../../../../lib/auth/access.server';
+import { endpoint, fileResponse, idParam, methodNotAllowed, parseWith } from '../../../../../../lib/http/api';
+import { logoFile } from '../../../../../../lib/identity/identity.server';
+
+const query = z.strictObject({
+  variant: z.enum(['original', 'black', 'white', 'reversed', 'one-colour']).default('original'),
+  color: z.string().max(100).optional(),
+  download: z.enum(['1']).optional(),
+});
+
+/** The logo file, or a recoloured variant of it (black, white, reversed, one-colour with ?color=). */
+export const GET = endpoint(async ({ locals, params, url }) => {
+  const { brand } = await authorizeBrand(locals, idParam(params.id), 'draft.read');
+  const q = parseWith(query, Object.fromEntries(url.searchParams), 'query');
+  const file = await logoFile(brand, idParam(params.logoId, 'That logo'), q.variant, q.color);
+  return fileResponse(file.body, file.contentType, file.filename, { inline: q.download !== '1' });
+});
+
+export const ALL = methodNotAllowed;
