@@ -1,7 +1,16 @@
 // The guideline document: ProseMirror JSON made of registry blocks and rich text, with the limits the server enforces.
 import { z } from 'zod';
 import { BLOCKS, blockDefinition, type BlockAttrs, type BlockType } from './blocks';
-import { INNER_TYPES, RICH_TEXT_SCHEMAS, RICH_TEXT_TYPES, type RichBlockNode } from './richText';
+import {
+  blockquoteSchema,
+  bulletListSchema,
+  headingSchema,
+  INNER_TYPES,
+  orderedListSchema,
+  paragraphSchema,
+  RICH_TEXT_TYPES,
+  type RichBlockNode,
+} from './richText';
 
 /** Limits on one stored document. */
 export const GUIDELINE_LIMITS = {
@@ -21,7 +30,10 @@ export interface GuidelineDoc {
 
 const blockNodeSchemas = BLOCKS.map((b) => z.strictObject({ type: z.literal(b.type), attrs: b.schema }));
 
-const topLevelSchema = z.union([...blockNodeSchemas, ...Object.values(RICH_TEXT_SCHEMAS)] as unknown as [z.ZodType, z.ZodType, ...z.ZodType[]]);
+const topLevelSchema = z.discriminatedUnion('type', [...blockNodeSchemas, paragraphSchema, headingSchema, bulletListSchema, orderedListSchema, blockquoteSchema] as unknown as [
+  z.ZodObject<{ type: z.ZodLiteral<string> }>,
+  ...z.ZodObject<{ type: z.ZodLiteral<string> }>[],
+]);
 
 /** The whole document: every top-level block carries a distinct id. */
 export const guidelineDocSchema = z
@@ -112,20 +124,7 @@ export function validateGuideline(doc: unknown): ValidationResult {
   if (treeError) return treeError;
   const parsed = guidelineDocSchema.safeParse(doc);
   if (parsed.success) return { ok: true, doc: parsed.data };
-  // A union hides which member was meant: re-check the first failing block against its own type's schema.
   const first = parsed.error.issues[0];
-  const index = first.path[0] === 'content' && typeof first.path[1] === 'number' ? first.path[1] : -1;
-  if (index >= 0 && first.code === 'invalid_union') {
-    const node = content[index] as { type: string };
-    const own = blockDefinition(node.type)
-      ? z.strictObject({ type: z.literal(node.type), attrs: blockDefinition(node.type)!.schema })
-      : RICH_TEXT_SCHEMAS[node.type as keyof typeof RICH_TEXT_SCHEMAS];
-    const result = own?.safeParse(node);
-    if (result && !result.success) {
-      const { path, message } = describeIssue(result.error.issues[0]);
-      return fail(['content', index, ...path], message);
-    }
-  }
   const { path, message } = describeIssue(first);
   return fail(path, message);
 }

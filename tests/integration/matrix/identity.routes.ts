@@ -1,6 +1,6 @@
 // The identity: colours, logos, typefaces, type scale, palette report and tokens.
 import { FIXTURE_SVG } from '../fixtures';
-import { all, only, type Route } from './route';
+import { only, type Route } from './route';
 
 const readers = only(200, ['owner', 'editor', 'reviewer']);
 const makers = (ok: number) => only(ok, ['owner', 'editor']);
