@@ -14,7 +14,8 @@ const secret = authSecret();
 const signInLimit = Number(process.env.AUTH_SIGN_IN_LIMIT ?? 5);
 
 step('Migrations and demo data');
-const { migrations } = await prepareDatabase({ databaseUrl, siteUrl, secret, signInLimit });
+const filesDir = join(dataDir, 'files');
+const { migrations } = await prepareDatabase({ databaseUrl, siteUrl, secret, signInLimit }, { filesDir });
 console.log(migrations.length ? `  applied ${migrations.length} migration(s)` : '  schema up to date');
 
 if (process.env.PLUMBLINE_SKIP_BUILD !== '1') {
@@ -23,7 +24,7 @@ if (process.env.PLUMBLINE_SKIP_BUILD !== '1') {
 }
 
 step('Starting the server');
-const server = await startServer({ host, port, databaseUrl, siteUrl, secret, signInLimit });
+const server = await startServer({ host, port, databaseUrl, siteUrl, secret, signInLimit, filesDir });
 const width = Math.max(...DEMO_PEOPLE.map((p) => p.email.length));
 console.log(`
 Plumbline is running at ${siteUrl}   (ready in ${((Date.now() - started) / 1000).toFixed(1)} s)

@@ -13,6 +13,7 @@ import pg from 'pg';
 import { BRAND_ROLES, STUDIO_ROLES, type BrandRole, type StudioRole } from '../../src/lib/auth/roles';
 import type { Box, ColorRole, LogoVariant, TypefaceRole, TypeScaleSettings } from '../../src/lib/identity/types';
 import type { FontMetrics } from '../../src/lib/type/metrics';
+import { initAssetModels } from './assets';
 
 export class Studio extends Model<InferAttributes<Studio>, InferCreationAttributes<Studio>> {
   declare id: CreationOptional<string>;
@@ -263,6 +264,7 @@ export function initModels(sequelize: Sequelize): void {
   BrandMember.belongsTo(Brand, { foreignKey: 'brandId', as: 'brand' });
   Brand.hasMany(Invitation, { foreignKey: 'brandId', as: 'invitations' });
   Invitation.belongsTo(Brand, { foreignKey: 'brandId', as: 'brand' });
+  initAssetModels(sequelize);
 }
 
 /** A Sequelize instance on PostgreSQL through pg, with the models bound. */

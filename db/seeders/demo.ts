@@ -4,6 +4,7 @@ import { QueryTypes, type Sequelize } from 'sequelize';
 import { authOptions, type AuthSettings } from '../../src/lib/auth/auth-options';
 import type { BrandRole } from '../../src/lib/auth/roles';
 import { Brand, BrandMember, Studio, StudioMember } from '../models';
+import { seedIdentity } from './identity';
 
 export const DEMO_PASSWORD = 'plumbline-demo';
 
@@ -27,7 +28,7 @@ export const DEMO_BRANDS: { name: string; slug: string; roles: Partial<Record<(t
 ];
 
 /** Create the demo people, studio, brands and memberships that are missing; leave existing ones alone. */
-export async function seedDemo(sequelize: Sequelize, settings: AuthSettings): Promise<{ created: boolean }> {
+export async function seedDemo(sequelize: Sequelize, settings: AuthSettings, filesDir: string): Promise<{ created: boolean }> {
   const options = authOptions(settings);
   const auth = betterAuth(options);
   const ids: Record<string, string> = {};
@@ -74,6 +75,7 @@ export async function seedDemo(sequelize: Sequelize, settings: AuthSettings): Pr
           transaction,
         });
       }
+      await seedIdentity(brand, filesDir, transaction);
     }
   });
   return { created };

@@ -11,11 +11,11 @@ import { projectRoot } from './settings';
 export const outDir = () => process.env.PLUMBLINE_OUT_DIR ?? join(projectRoot, 'dist');
 
 /** Run migrations and seed the demo against `settings.databaseUrl`. */
-export async function prepareDatabase(settings: AuthSettings, opts: { seed?: boolean } = {}): Promise<{ migrations: string[] }> {
+export async function prepareDatabase(settings: AuthSettings, opts: { filesDir: string; seed?: boolean }): Promise<{ migrations: string[] }> {
   const sequelize = connect(settings.databaseUrl);
   try {
     const migrations = await migrateAll(sequelize, settings);
-    if (opts.seed !== false) await seedDemo(sequelize, settings);
+    if (opts.seed !== false) await seedDemo(sequelize, settings, opts.filesDir);
     return { migrations };
   } finally {
     await sequelize.close();

@@ -21,9 +21,9 @@ export async function setup(project: TestProject): Promise<void> {
   const secret = 'test-secret-that-is-long-enough-for-better-auth';
   // A generous sign-in limit: the suite signs in many people from one address; the limiter has its own test.
   const signInLimit = 10_000;
-  await prepareDatabase({ databaseUrl: cluster.url, siteUrl, secret, signInLimit });
-  if (process.env.PLUMBLINE_TEST_SKIP_BUILD !== '1') buildApp();
   const filesDir = join(clusterDir, 'files');
+  await prepareDatabase({ databaseUrl: cluster.url, siteUrl, secret, signInLimit }, { filesDir });
+  if (process.env.PLUMBLINE_TEST_SKIP_BUILD !== '1') buildApp();
   server = await startServer({ host: '127.0.0.1', port, databaseUrl: cluster.url, siteUrl, secret, signInLimit, filesDir }, { quiet: true });
   project.provide('baseUrl', siteUrl);
   project.provide('databaseUrl', cluster.url);
