@@ -60,13 +60,13 @@ export function parseWith<T extends z.ZodType>(schema: T, value: unknown, where 
 const MAX_JSON_BYTES = 1_000_000;
 
 /** Read a JSON request body through a schema: malformed JSON, wrong type or unknown fields → 400. */
-export async function readJson<T extends z.ZodType>(request: Request, schema: T): Promise<z.infer<T>> {
+export async function readJson<T extends z.ZodType>(request: Request, schema: T, maxBytes = MAX_JSON_BYTES): Promise<z.infer<T>> {
   const type = request.headers.get('content-type') ?? '';
   if (!type.includes('application/json')) {
     throw new ApiError(415, 'unsupported_media_type', 'Send the request body as JSON (Content-Type: application/json).');
   }
   const text = await request.text();
-  if (text.length > MAX_JSON_BYTES) throw new ApiError(413, 'too_large', 'The request body is too large.');
+  if (Buffer.byteLength(text) > maxBytes) throw new ApiError(413, 'too_large', 'The request body is too large.');
   let value: unknown;
   try {
     value = JSON.parse(text);

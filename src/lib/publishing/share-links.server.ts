@@ -1,0 +1,132 @@
+// Share links: a random token in the URL (only its hash is stored), optional expiry, password and downloads.
+import { createHmac, randomBytes, scrypt as scryptCb, timingSafeEqual } from 'node:crypto';
+import { promisify } from 'node:util';
+import { AUTH_SECRET, SITE_URL } from 'astro:env/server';
+import { Brand, GuidelineVersion, ShareLink } from '../../../db/models';
+import { audit } from '../audit.server';
+import type { Caller } from '../auth/access.server';
+import { hashToken } from '../brands/brands.server';
+import { sequelize } from '../db.server';
+import { ApiError } from '../http/api';
+
+const scrypt = promisify(scryptCb) as (password: string, salt: Buffer, keylen: number) => Promise<Buffer>;
+
+export const SHARE_COOKIE = 'plumbline_share';
+/** Password attempts allowed per link and address in a quarter of an hour. */
+export const PASSWORD_ATTEMPTS = 5;
+export const PASSWORD_WINDOW_SECONDS = 15 * 60;
+
+export type LinkState = 'active' | 'expired' | 'revoked';
+
+export interface ShareLinkView {
+  id: string;
+  label: string | null;
+  url?: string;
+  version: number | null;
+  allowDownloads: boolean;
+  hasPassword: boolean;
+  expiresAt: string | null;
+  revokedAt: string | null;
+  lastUsedAt: string | null;
+  useCount: number;
+  state: LinkState;
+  createdAt: string;
+}
+
+export const linkState = (l: ShareLink, now = new Date()): LinkState =>
+  l.revokedAt ? 'revoked' : l.expiresAt && l.expiresAt <= now ? 'expired' : 'active';
+
+const view = (l: ShareLink): ShareLinkView => ({
+  id: l.id,
+  label: l.label,
+  version: l.versionNumber,
+  allowDownloads: l.allowDownloads,
+  hasPassword: l.passwordHash !== null,
+  expiresAt: l.expiresAt?.toISOString() ?? null,
+  revokedAt: l.revokedAt?.toISOString() ?? null,
+  lastUsedAt: l.lastUsedAt?.toISOString() ?? null,
+  useCount: l.useCount,
+  state: linkState(l),
+  createdAt: l.createdAt.toISOString(),
+});
+
+async function hashPassword(password: string): Promise<string> {
+  const salt = randomBytes(16);
+  const hash = await scrypt(password, salt, 32);
+  return `scrypt$${salt.toString('base64url')}$${hash.toString('base64url')}`;
+}
+
+/** Whether a password matches a stored scrypt hash, in constant time. */
+export async function passwordMatches(password: string, stored: string): Promise<boolean> {
+  const [, salt, hash] = stored.split('$');
+  const candidate = await scrypt(password, Buffer.from(salt, 'base64url'), 32);
+  return timingSafeEqual(candidate, Buffer.from(hash, 'base64url'));
+}
+
+export async function createShareLink(
+  caller: Caller,
+  brand: Brand,
+  body: { expiresAt?: string; password?: string; allowDownloads?: boolean; version?: number; label?: string },
+): Promise<ShareLinkView> {
+  if (body.expiresAt && new Date(body.expiresAt) <= new Date()) throw new ApiError(400, 'invalid_input', 'The expiry date is in the past.', { path: 'expiresAt' });
+  if (body.version !== undefined && !(await GuidelineVersion.findOne({ where: { brandId: brand.id, number: body.version } }))) {
+    throw new ApiError(400, 'invalid_input', `Version ${body.version} has not been published.`, { path: 'version' });
+  }
+  // 192 random bits: far past guessing, and only its SHA-256 is kept.
+  const token = randomBytes(24).toString('base64url');
+  const link = await sequelize.transaction(async (t) => {
+    const row = await ShareLink.create(
+      {
+        brandId: brand.id,
+        tokenHash: hashToken(token),
+        label: body.label ?? null,
+        versionNumber: body.version ?? null,
+        allowDownloads: body.allowDownloads ?? false,
+        passwordHash: body.password ? await hashPassword(body.password) : null,
+        expiresAt: body.expiresAt ? new Date(body.expiresAt) : null,
+        revokedAt: null,
+        lastUsedAt: null,
+        createdById: caller.id,
+      },
+      { transaction: t },
+    );
+    await audit({ actorId: caller.id, action: 'shareLink.create', targetType: 'shareLink', targetId: row.id, brandId: brand.id, studioId: brand.studioId, details: { allowDownloads: row.allowDownloads, expiresAt: body.expiresAt ?? null, version: row.versionNumber, password: !!body.password } }, t);
+    return row;
+  });
+  return { ...view(link), url: `${SITE_URL}/s/${token}` };
+}
+
+export async function listShareLinks(brand: Brand): Promise<ShareLinkView[]> {
+  return (await ShareLink.findAll({ where: { brandId: brand.id }, order: [['createdAt', 'DESC']] })).map(view);
+}
+
+export async function revokeShareLink(caller: Caller, brand: Brand, linkId: string): Promise<void> {
+  const link = await ShareLink.findOne({ where: { id: linkId, brandId: brand.id } });
+  if (!link) throw new ApiError(404, 'not_found', 'That share link was not found.');
+  if (link.revokedAt) return;
+  await sequelize.transaction(async (t) => {
+    await link.update({ revokedAt: new Date() }, { transaction: t });
+    await audit({ actorId: caller.id, action: 'shareLink.revoke', targetType: 'shareLink', targetId: link.id, brandId: brand.id, studioId: brand.studioId, details: {} }, t);
+  });
+}
+
+/** The link a token opens, or null when no link has that token. */
+export const linkForToken = (token: string) => (/^[A-Za-z0-9_-]{20,100}$/.test(token) ? ShareLink.findOne({ where: { tokenHash: hashToken(token) } }) : null);
+
+/** The cookie value for an opened link: the token plus a signature proving any password was given. */
+export const shareCookieValue = (token: string) => `${token}.${createHmac('sha256', AUTH_SECRET).update(`share:${token}`).digest('base64url')}`;
+
+/** The token inside a share cookie whose signature is ours, or null. */
+export function tokenFromCookie(value: string | undefined): string | null {
+  if (!value) return null;
+  const [token, sig] = value.split('.');
+  if (!token || !sig) return null;
+  const expected = shareCookieValue(token).split('.')[1];
+  return expected.length === sig.length && timingSafeEqual(Buffer.from(expected), Buffer.from(sig)) ? token : null;
+}
+
+/** Count a visit through a link. */
+export async function recordUse(link: ShareLink): Promise<void> {
+  await ShareLink.increment('useCount', { where: { id: link.id } });
+  await ShareLink.update({ lastUsedAt: new Date() }, { where: { id: link.id } });
+}

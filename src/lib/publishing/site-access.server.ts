@@ -1,0 +1,63 @@
+// Who may read a published guideline site: members by role, or a visitor holding that brand's share link.
+import type { AstroGlobal } from 'astro';
+import { Brand, type GuidelineVersion } from '../../../db/models';
+import { roleOn } from '../auth/access.server';
+import { can } from '../auth/policy';
+import type { BrandRole } from '../auth/roles';
+import { findVersion } from './versions.server';
+
+export interface SiteAccess {
+  brand: Brand;
+  version: GuidelineVersion;
+  /** The member's role, or null for a share-link visitor. */
+  role: BrandRole | null;
+  viaShareLink: string | null;
+  canDownload: boolean;
+  /** Editors see notes meant for them (e.g. a font shown in its fallback for want of a licence). */
+  isEditor: boolean;
+}
+
+const page = (status: number, title: string, message: string) =>
+  new Response(
+    `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1"><title>${title}</title>` +
+      `<style>body{font-family:system-ui,sans-serif;background:#f8f6f2;color:#211e1a;display:grid;place-items:center;min-height:100vh;margin:0}main{max-width:32rem;padding:2rem}h1{font-size:1.6rem}p{color:#57514a;line-height:1.5}a{color:#4b3a8c}</style></head>` +
+      `<body><main><h1>${title}</h1><p>${message}</p></main></body></html>`,
+    { status, headers: { 'content-type': 'text/html; charset=utf-8', 'cache-control': 'no-store' } },
+  );
+
+export const notFoundPage = () => page(404, 'Nothing here', 'This guideline site does not exist, or you do not have access to it.');
+
+/** The version a visitor may read at /b/:slug[/v/:number], or the response to send instead. */
+export async function siteAccess(Astro: AstroGlobal, slug: string, number: number | null): Promise<SiteAccess | Response> {
+  const brand = await Brand.findOne({ where: { slug } });
+  const { user, shareGrant } = Astro.locals;
+  const role = brand && user ? await roleOn(user.id, brand) : null;
+  const share = brand && shareGrant?.brandId === brand.id ? shareGrant : null;
+
+  if (!brand || (!role && !share)) {
+    if (!user && !share) return Astro.redirect(`/sign-in?next=${encodeURIComponent(Astro.url.pathname)}`);
+    return notFoundPage();
+  }
+  if (role && !can(role, 'version.read')) return notFoundPage();
+  // A link pinned to one version opens that version only.
+  const wanted = !role && share?.version != null ? (number === null || number === share.version ? share.version : -1) : number;
+  if (wanted === -1) return notFoundPage();
+  const version = await findVersion(brand.id, wanted);
+  if (!version) {
+    return page(404, 'Not published yet', number === null ? 'This brand has no published guidelines yet. The studio will share a link once the first version is out.' : `Version ${number} does not exist.`);
+  }
+  return {
+    brand,
+    version,
+    role,
+    viaShareLink: role ? null : share!.linkId,
+    canDownload: role ? can(role, 'asset.download') : share!.allowDownloads,
+    isEditor: role ? can(role, 'draft.edit') : false,
+  };
+}
+
+/** The clear page for a link that no longer works. */
+export const goneLinkPage = (state: 'expired' | 'revoked') =>
+  page(410, 'This link no longer works', state === 'expired' ? 'The share link has expired. Ask the brand team for a new one.' : 'The share link was withdrawn by the brand team. Ask them for a new one.');
+
+export const simplePage = page;

@@ -1,0 +1,19 @@
+// A version's identity carries no file URLs of its own: they are made at view time from the site's address,
+// so a renamed brand slug never breaks an old version.
+import type { Identity } from '../identity/types';
+
+/** Base path of one published version. */
+export const versionPath = (slug: string, number: number) => `/b/${slug}/v/${number}`;
+
+/** The identity with file URLs pointing at the version's own copies; unlicensed fonts get no URL. */
+export function withVersionUrls(identity: Identity, slug: string, number: number): Identity {
+  const base = `${versionPath(slug, number)}/files`;
+  return {
+    ...identity,
+    logos: identity.logos.map((l) => {
+      const url = `${base}/${l.id}`;
+      return { ...l, files: { original: url, black: `${url}?variant=black`, white: `${url}?variant=white`, reversed: `${url}?variant=reversed` } };
+    }),
+    typefaces: identity.typefaces.map((f) => ({ ...f, fileUrl: f.licence.confirmed ? `${base}/${f.id}` : '' })),
+  };
+}

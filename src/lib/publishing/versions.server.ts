@@ -1,0 +1,137 @@
+// Publishing: one transaction turns the draft and the identity into a numbered, dated, immutable version.
+import { readFile } from 'node:fs/promises';
+import { QueryTypes } from 'sequelize';
+import { join } from 'node:path';
+import { Brand, BrandLogo, BrandTypeface, GuidelineDraft, GuidelineVersion, type VersionFile } from '../../../db/models';
+import { audit } from '../audit.server';
+import type { Caller } from '../auth/access.server';
+import { sequelize } from '../db.server';
+import { ApiError } from '../http/api';
+import { loadIdentity } from '../identity/identity.server';
+import type { Identity } from '../identity/types';
+import { notifyPublished } from '../notices/publish.server';
+import { storage } from '../storage/index.server';
+import { newKey } from '../storage/storage';
+import { shippedFont } from '../type/shipped-fonts';
+import { changeSummary, compareSnapshots, type Snapshot } from './diff';
+
+export interface VersionView {
+  number: number;
+  publishedAt: string;
+  note: string;
+  author: { id: string | null; name: string | null };
+  draftRevision: number;
+}
+
+/** Copy every file the identity refers to, so later edits or deletions cannot reach this version. */
+async function copyFiles(brand: Brand, identity: Identity): Promise<Record<string, VersionFile>> {
+  const files: Record<string, VersionFile> = {};
+  const logos = await BrandLogo.findAll({ where: { brandId: brand.id }, attributes: ['id', 'storageKey', 'format'] });
+  for (const logo of logos) {
+    const bytes = await storage.get(logo.storageKey);
+    if (!bytes) continue;
+    const key = newKey(brand.id, 'version', logo.format);
+    await storage.put(key, bytes, logo.format === 'svg' ? 'image/svg+xml' : 'image/png');
+    files[logo.id] = { key, contentType: logo.format === 'svg' ? 'image/svg+xml' : 'image/png' };
+  }
+  const licensed = new Set(identity.typefaces.filter((f) => f.licence.confirmed).map((f) => f.id));
+  const faces = await BrandTypeface.findAll({ where: { brandId: brand.id } });
+  for (const face of faces) {
+    if (!licensed.has(face.id)) continue; // a font without a confirmed licence is never served
+    const bytes = face.source === 'shipped' ? await readFile(join(process.cwd(), shippedFont(face.shippedKey ?? '')!.file)) : face.storageKey ? await storage.get(face.storageKey) : null;
+    if (!bytes) continue;
+    const key = newKey(brand.id, 'version', face.format);
+    await storage.put(key, bytes, `font/${face.format}`);
+    files[face.id] = { key, contentType: `font/${face.format}` };
+  }
+  return files;
+}
+
+/** Publish the current draft as the next version. */
+export async function publishVersion(caller: Caller, brand: Brand, note: string): Promise<VersionView> {
+  const identity = await loadIdentity(brand);
+  const files = await copyFiles(brand, identity);
+  let previous: GuidelineVersion | null = null;
+  let version: GuidelineVersion;
+  try {
+    version = await sequelize.transaction(async (t) => {
+      // One publisher at a time per brand, so numbers never collide.
+      await sequelize.query('SELECT pg_advisory_xact_lock(hashtext(:key))', { replacements: { key: `publish:${brand.id}` }, transaction: t });
+      const draft = await GuidelineDraft.findByPk(brand.id, { transaction: t });
+      if (!draft || draft.doc.content.length === 0) {
+        throw new ApiError(409, 'empty_draft', 'There is nothing to publish yet: add at least one block to the guidelines first.');
+      }
+      previous = await GuidelineVersion.findOne({ where: { brandId: brand.id }, order: [['number', 'DESC']], transaction: t });
+      const created = await GuidelineVersion.create(
+        {
+          brandId: brand.id,
+          number: (previous?.number ?? 0) + 1,
+          note,
+          draftRevision: draft.revision,
+          snapshot: { doc: draft.doc, identity },
+          files,
+          publishedById: caller.id,
+        },
+        { transaction: t },
+      );
+      await audit({ actorId: caller.id, action: 'version.publish', targetType: 'version', targetId: created.id, brandId: brand.id, studioId: brand.studioId, details: { number: created.number, note, draftRevision: draft.revision } }, t);
+      return created;
+    });
+  } catch (err) {
+    await Promise.all(Object.values(files).map((f) => storage.delete(f.key)));
+    throw err;
+  }
+  const prev = previous as GuidelineVersion | null;
+  const summary = prev ? changeSummary(compareSnapshots(prev.snapshot as Snapshot, version.snapshot as Snapshot)) : ['First published version'];
+  await notifyPublished({
+    brandId: brand.id,
+    brandName: brand.name,
+    slug: brand.slug,
+    versionNumber: version.number,
+    note,
+    publishedBy: { id: caller.id, name: caller.name },
+    summary,
+  }).catch((err) => console.error('[publish] notice failed', err));
+  return { number: version.number, publishedAt: version.publishedAt.toISOString(), note, author: { id: caller.id, name: caller.name }, draftRevision: version.draftRevision };
+}
+
+/** Every version of a brand, newest first, with its author's name. */
+export async function listVersions(brand: Brand): Promise<VersionView[]> {
+  const rows = await sequelize.query<{ number: number; published_at: Date; note: string; published_by_id: string | null; name: string | null; draft_revision: number }>(
+    `SELECT v.number, v.published_at, v.note, v.published_by_id, u.name, v.draft_revision
+       FROM guideline_versions v LEFT JOIN "user" u ON u.id = v.published_by_id
+      WHERE v.brand_id = :brandId ORDER BY v.number DESC`,
+    { replacements: { brandId: brand.id }, type: QueryTypes.SELECT },
+  );
+  return rows.map((r) => ({
+    number: r.number,
+    publishedAt: new Date(r.published_at).toISOString(),
+    note: r.note,
+    author: { id: r.published_by_id, name: r.name },
+    draftRevision: r.draft_revision,
+  }));
+}
+
+/** One version by number (latest when number is null), or null. */
+export async function findVersion(brandId: string, number: number | null): Promise<GuidelineVersion | null> {
+  return number === null
+    ? GuidelineVersion.findOne({ where: { brandId }, order: [['number', 'DESC']] })
+    : GuidelineVersion.findOne({ where: { brandId, number } });
+}
+
+/** What changed from version `from` to version `to` ("draft" compares against the working draft). */
+export async function versionChanges(brand: Brand, from: number, to: number | 'draft') {
+  const a = await findVersion(brand.id, from);
+  if (!a) throw new ApiError(404, 'not_found', `Version ${from} was not found.`);
+  let b: Snapshot;
+  if (to === 'draft') {
+    const draft = await GuidelineDraft.findByPk(brand.id);
+    b = { doc: (draft?.doc ?? { content: [] }) as Snapshot['doc'], identity: await loadIdentity(brand) };
+  } else {
+    const v = await findVersion(brand.id, to);
+    if (!v) throw new ApiError(404, 'not_found', `Version ${to} was not found.`);
+    b = v.snapshot as Snapshot;
+  }
+  const changes = compareSnapshots(a.snapshot as Snapshot, b);
+  return { from, to, changes, summary: changeSummary(changes) };
+}

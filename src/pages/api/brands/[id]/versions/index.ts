@@ -1,0 +1,23 @@
+import { z } from 'zod';
+import { authorizeBrand } from '../../../../../lib/auth/access.server';
+import { endpoint, idParam, json, methodNotAllowed, readJson } from '../../../../../lib/http/api';
+import { listVersions, publishVersion } from '../../../../../lib/publishing/versions.server';
+
+const publishBody = z.strictObject({
+  note: z.string({ error: 'Say in a line what this version changes.' }).trim().min(1, 'Say in a line what this version changes.').max(2000),
+});
+
+/** Every published version, newest first, with its author and note. */
+export const GET = endpoint(async ({ locals, params }) => {
+  const { brand } = await authorizeBrand(locals, idParam(params.id), 'version.read');
+  return json({ versions: await listVersions(brand) });
+});
+
+/** Publish the working draft and the identity as the next numbered version. */
+export const POST = endpoint(async ({ locals, params, request }) => {
+  const { caller, brand } = await authorizeBrand(locals, idParam(params.id), 'version.publish');
+  const { note } = await readJson(request, publishBody);
+  return json({ version: await publishVersion(caller, brand, note) }, 201);
+});
+
+export const ALL = methodNotAllowed;

@@ -1,0 +1,14 @@
+// Versions and share links.
+import { only, type Route } from './route';
+
+const b = (f: { brandId: string }) => `/api/brands/${f.brandId}`;
+const everyone = only(200, ['owner', 'editor', 'reviewer', 'partner', 'viewer']);
+
+export default [
+  { method: 'GET', file: 'brands/[id]/versions/index.ts', path: (f) => `${b(f)}/versions`, expect: everyone },
+  { method: 'POST', file: 'brands/[id]/versions/index.ts', path: (f) => `${b(f)}/versions`, body: () => ({ note: 'Matrix publish' }), expect: only(201, ['owner', 'editor']) },
+  { method: 'GET', file: 'brands/[id]/versions/compare.ts', path: (f) => `${b(f)}/versions/compare?from=1&to=draft`, expect: only(200, ['owner', 'editor', 'reviewer']) },
+  { method: 'GET', file: 'brands/[id]/share-links/index.ts', path: (f) => `${b(f)}/share-links`, expect: only(200, ['owner']) },
+  { method: 'POST', file: 'brands/[id]/share-links/index.ts', path: (f) => `${b(f)}/share-links`, body: () => ({ allowDownloads: true }), expect: only(201, ['owner']) },
+  { method: 'DELETE', file: 'brands/[id]/share-links/[linkId].ts', path: (f) => `${b(f)}/share-links/${f.shareLinkId}`, expect: only(204, ['owner']) },
+] satisfies Route[];
