@@ -24,7 +24,7 @@ export default defineConfig({
   server: { host: '127.0.0.1', port: 4321 },
   vite: {
     plugins: [tailwindcss()],
-    ssr: { external: ['sharp', 'fontkit', 'pg', 'pg-hstore', 'sequelize', 'isomorphic-dompurify'] },
+    ssr: { external: ['sharp', 'fontkit', 'pg', 'pg-hstore', 'sequelize', 'isomorphic-dompurify', 'nodemailer'] },
   },
   env: {
     // Every setting is read at run time, so one build serves any port, database or site URL.
@@ -33,7 +33,16 @@ export default defineConfig({
       SITE_URL: envField.string({ context: 'server', access: 'secret', default: 'http://127.0.0.1:4321' }),
       AUTH_SECRET: envField.string({ context: 'server', access: 'secret' }),
       FILES_DIR: envField.string({ context: 'server', access: 'secret', default: '.data/files' }),
+      CHROMIUM_PATH: envField.string({ context: 'server', access: 'secret', default: '/usr/bin/chromium' }),
       AUTH_SIGN_IN_LIMIT: envField.number({ context: 'server', access: 'secret', default: 5 }),
+      // E-mail (src/lib/mail): an SMTP relay; without SMTP_HOST nothing is sent. MAIL_CAPTURE_DIR is set only
+      // when the local fake server keeps the messages, and turns on the sent-mail page.
+      SMTP_HOST: envField.string({ context: 'server', access: 'secret', optional: true }),
+      SMTP_PORT: envField.number({ context: 'server', access: 'secret', default: 587 }),
+      SMTP_USER: envField.string({ context: 'server', access: 'secret', optional: true }),
+      SMTP_PASSWORD: envField.string({ context: 'server', access: 'secret', optional: true }),
+      MAIL_FROM: envField.string({ context: 'server', access: 'secret', default: 'Plumbline <mail@plumbline.invalid>' }),
+      MAIL_CAPTURE_DIR: envField.string({ context: 'server', access: 'secret', optional: true }),
     },
   },
 });

@@ -1,8 +1,10 @@
 // `npm start`: PostgreSQL (installed if missing), migrations, demo, build, serve, and the sign-ins printed.
 import { join } from 'node:path';
 import { DEMO_PASSWORD, DEMO_PEOPLE } from '../db/seeders/demo';
+import { publishDemo } from './lib/demo-publish';
 import { buildApp, prepareDatabase, startServer } from './lib/prepare';
 import { startCluster } from './lib/postgres';
+import { startFakeSmtp } from '../src/lib/mail/fake-smtp';
 import { authSecret, dataDir, host, pgPort, port, siteUrl } from './lib/settings';
 
 const started = Date.now();
@@ -23,8 +25,24 @@ if (process.env.PLUMBLINE_SKIP_BUILD !== '1') {
   buildApp();
 }
 
+// E-mail: a real relay when SMTP_HOST is set, otherwise the local fake, whose messages the sent-mail page shows.
+let mail: { smtpHost: string; smtpPort: number; captureDir?: string };
+if (process.env.SMTP_HOST) {
+  mail = { smtpHost: process.env.SMTP_HOST, smtpPort: Number(process.env.SMTP_PORT ?? 587) };
+} else {
+  const fake = await startFakeSmtp({ dir: join(dataDir, 'mail'), port: Number(process.env.PLUMBLINE_SMTP_PORT ?? 0) });
+  mail = { smtpHost: fake.host, smtpPort: fake.port, captureDir: fake.dir };
+  step(`Local mail catcher on ${fake.host}:${fake.port} (messages in ${fake.dir}; read them at ${siteUrl}/app/mail)`);
+}
+
 step('Starting the server');
-const server = await startServer({ host, port, databaseUrl, siteUrl, secret, signInLimit, filesDir });
+const server = await startServer({ host, port, databaseUrl, siteUrl, secret, signInLimit, filesDir, mail });
+let shareUrl: string | null = null;
+try {
+  shareUrl = await publishDemo(siteUrl, dataDir);
+} catch (err) {
+  console.warn(`  (the demo version could not be published: ${(err as Error).message})`);
+}
 const width = Math.max(...DEMO_PEOPLE.map((p) => p.email.length));
 console.log(`
 Plumbline is running at ${siteUrl}   (ready in ${((Date.now() - started) / 1000).toFixed(1)} s)
@@ -32,7 +50,7 @@ Plumbline is running at ${siteUrl}   (ready in ${((Date.now() - started) / 1000)
 Demo sign-ins (password for all: ${DEMO_PASSWORD})
 ${DEMO_PEOPLE.map((p) => `  ${p.email.padEnd(width)}  ${p.says}`).join('\n')}
 
-Ctrl-C stops the server; \`npm run db:stop\` stops PostgreSQL.
+${shareUrl ? `Demo share link (no account needed): ${shareUrl}\n\n` : ''}Ctrl-C stops the server; \`npm run db:stop\` stops PostgreSQL.
 `);
 
 const stop = () => server.kill('SIGTERM');

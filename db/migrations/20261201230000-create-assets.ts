@@ -23,6 +23,7 @@ export async function up({ context: qi }: MigrationParams<QueryInterface>): Prom
     byte_size: { type: DataTypes.INTEGER, allowNull: false },
     width: { type: DataTypes.DOUBLE, allowNull: true },
     height: { type: DataTypes.DOUBLE, allowNull: true },
+    drawn_bounds: { type: DataTypes.JSONB, allowNull: true },
     original_filename: { type: DataTypes.STRING(255), allowNull: false },
     tags: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
     description: { type: DataTypes.TEXT, allowNull: true },

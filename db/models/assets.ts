@@ -1,5 +1,6 @@
 // Models of the asset shelf: uploaded originals, the index of generated renditions, and the download log.
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import type { Box } from '../../src/lib/logo/geometry';
 import type { AssetFormat, AssetKind, AssetState } from '../../src/lib/assets/kinds';
 
 export class Asset extends Model<InferAttributes<Asset>, InferCreationAttributes<Asset>> {
@@ -15,6 +16,8 @@ export class Asset extends Model<InferAttributes<Asset>, InferCreationAttributes
   declare byteSize: number;
   declare width: number | null;
   declare height: number | null;
+  /** What a logo draws, as fractions of its canvas (for clear-space avatars). */
+  declare drawnBounds: Box | null;
   declare originalFilename: string;
   declare tags: CreationOptional<string[]>;
   declare description: string | null;
@@ -68,6 +71,7 @@ export function initAssetModels(sequelize: Sequelize): void {
       byteSize: { type: DataTypes.INTEGER, allowNull: false },
       width: { type: DataTypes.DOUBLE, allowNull: true },
       height: { type: DataTypes.DOUBLE, allowNull: true },
+      drawnBounds: { type: DataTypes.JSONB, allowNull: true },
       originalFilename: { type: DataTypes.STRING(255), allowNull: false },
       tags: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
       description: { type: DataTypes.TEXT, allowNull: true },

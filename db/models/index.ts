@@ -14,6 +14,8 @@ import { BRAND_ROLES, STUDIO_ROLES, type BrandRole, type StudioRole } from '../.
 import type { Box, ColorRole, LogoVariant, TypefaceRole, TypeScaleSettings } from '../../src/lib/identity/types';
 import type { FontMetrics } from '../../src/lib/type/metrics';
 import { initAssetModels } from './assets';
+import { initCollaborationModels } from './collaboration';
+import { initPublishingModels } from './publishing';
 
 export class Studio extends Model<InferAttributes<Studio>, InferCreationAttributes<Studio>> {
   declare id: CreationOptional<string>;
@@ -128,6 +130,15 @@ export class BrandTypeface extends Model<InferAttributes<BrandTypeface>, InferCr
   declare licenceConfirmedAt: Date | null;
   declare licenceConfirmedById: string | null;
   declare licenceNote: string | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+export class GuidelineDraft extends Model<InferAttributes<GuidelineDraft>, InferCreationAttributes<GuidelineDraft>> {
+  declare brandId: string;
+  declare revision: number;
+  declare doc: { type: 'doc'; content: unknown[] };
+  declare updatedById: string | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -256,6 +267,17 @@ export function initModels(sequelize: Sequelize): void {
     { ...common, tableName: 'brand_typefaces' },
   );
 
+  GuidelineDraft.init(
+    {
+      brandId: { type: DataTypes.UUID, primaryKey: true },
+      revision: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+      doc: { type: DataTypes.JSONB, allowNull: false },
+      updatedById: { type: DataTypes.TEXT, allowNull: true },
+      ...timestamps,
+    },
+    { ...common, tableName: 'guideline_drafts' },
+  );
+
   Studio.hasMany(StudioMember, { foreignKey: 'studioId', as: 'members' });
   StudioMember.belongsTo(Studio, { foreignKey: 'studioId', as: 'studio' });
   Studio.hasMany(Brand, { foreignKey: 'studioId', as: 'brands' });
@@ -265,6 +287,8 @@ export function initModels(sequelize: Sequelize): void {
   Brand.hasMany(Invitation, { foreignKey: 'brandId', as: 'invitations' });
   Invitation.belongsTo(Brand, { foreignKey: 'brandId', as: 'brand' });
   initAssetModels(sequelize);
+  initCollaborationModels(sequelize);
+  initPublishingModels(sequelize);
 }
 
 /** A Sequelize instance on PostgreSQL through pg, with the models bound. */
@@ -278,3 +302,4 @@ export function connect(databaseUrl: string, opts: { logging?: boolean } = {}): 
   initModels(sequelize);
   return sequelize;
 }
+export * from './publishing';

@@ -5,6 +5,7 @@ import { authOptions, type AuthSettings } from '../../src/lib/auth/auth-options'
 import type { BrandRole } from '../../src/lib/auth/roles';
 import { Brand, BrandMember, Studio, StudioMember } from '../models';
 import { seedIdentity } from './identity';
+import { seedCollaboration } from './collaboration';
 
 export const DEMO_PASSWORD = 'plumbline-demo';
 
@@ -78,5 +79,6 @@ export async function seedDemo(sequelize: Sequelize, settings: AuthSettings, fil
       await seedIdentity(brand, filesDir, transaction);
     }
   });
+  await seedCollaboration(sequelize, { designer: ids.designer, editor: ids.editor, reviewer: ids.reviewer });
   return { created };
 }

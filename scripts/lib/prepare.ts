@@ -40,6 +40,8 @@ export interface ServerEnv {
   secret: string;
   signInLimit?: number;
   filesDir?: string;
+  /** E-mail: the SMTP relay and, when the local fake keeps the messages, its folder (src/lib/mail). */
+  mail?: { smtpHost: string; smtpPort: number; from?: string; captureDir?: string };
 }
 
 /** Start the built server and resolve once it answers HTTP. */
@@ -58,6 +60,14 @@ export async function startServer(env: ServerEnv, opts: { quiet?: boolean } = {}
       AUTH_SECRET: env.secret,
       ...(env.signInLimit ? { AUTH_SIGN_IN_LIMIT: String(env.signInLimit) } : {}),
       ...(env.filesDir ? { FILES_DIR: env.filesDir } : {}),
+      ...(env.mail
+        ? {
+            SMTP_HOST: env.mail.smtpHost,
+            SMTP_PORT: String(env.mail.smtpPort),
+            ...(env.mail.from ? { MAIL_FROM: env.mail.from } : {}),
+            ...(env.mail.captureDir ? { MAIL_CAPTURE_DIR: env.mail.captureDir } : {}),
+          }
+        : {}),
     },
   });
   const url = `http://${env.host}:${env.port}/`;

@@ -1,6 +1,7 @@
 // People and brands for integration tests, created through the public API like a real studio would.
 import { Client, signUpFresh } from '../support/client';
 import type { BrandRole } from '../../src/lib/auth/roles';
+import { makeClientWork } from './client-fixture';
 
 /** A small logo of our own: a circle mark with a margin, for fixtures. */
 export const FIXTURE_SVG = '<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 120 60"><circle cx="30" cy="30" r="20" fill="#1d2a44"/><rect x="60" y="20" width="40" height="20" fill="#c8553d"/></svg>';
@@ -38,6 +39,21 @@ export interface Fixture {
   colorId: string;
   logoId: string;
   typefaceId: string;
+  /** An approved SVG asset on the brand's shelf. */
+  assetId: string;
+  /** A share link of the brand (version 1 is published from a one-section draft). */
+  shareLinkId: string;
+  /** Client work (tests/integration/client-fixture.ts): a pending invitation, a sent brief, a sent board, a review, a comment. */
+  invitationId: string;
+  invitationToken: string;
+  briefId: string;
+  briefToken: string;
+  boardId: string;
+  boardItemId: string;
+  boardImageId: string;
+  boardToken: string;
+  reviewId: string;
+  commentId: string;
 }
 
 /** A brand owned by the cast's owner with every other role filled, one colour, one logo and one typeface. */
@@ -62,6 +78,16 @@ export async function makeBrand(cast: Cast, name = 'Fixture Brand'): Promise<Fix
   const color = await owner.post(`/api/brands/${brandId}/colors`, { name: 'Ink', value: '#1d2a44' });
   const typeface = await owner.post(`/api/brands/${brandId}/typefaces`, { shipped: 'dm-sans', role: 'body' });
   const logo = await owner.upload(`/api/brands/${brandId}/logos`, 'mark.svg', FIXTURE_SVG, 'image/svg+xml');
-  for (const r of [color, typeface, logo]) if (r.status !== 201) throw new Error(`fixture answered ${r.status}: ${JSON.stringify(r.body)}`);
-  return { brandId, targetMemberId, colorId: color.body.color.id, logoId: logo.body.logo.id, typefaceId: typeface.body.typeface.id };
+  const asset = await owner.upload(`/api/brands/${brandId}/assets`, 'shelf-mark.svg', FIXTURE_SVG, 'image/svg+xml');
+  for (const r of [color, typeface, logo, asset]) if (r.status !== 201) throw new Error(`fixture answered ${r.status}: ${JSON.stringify(r.body)}`);
+  const assetId: string = asset.body.assets[0].id;
+  const approved = await owner.patch(`/api/brands/${brandId}/assets/${assetId}`, { state: 'approved' });
+  if (approved.status !== 200) throw new Error(`asset approval answered ${approved.status}: ${JSON.stringify(approved.body)}`);
+  const draft = { type: 'doc', content: [{ type: 'sectionHeading', attrs: { id: 'intro', title: 'Introduction', eyebrow: '', intro: '' } }] };
+  await owner.request('PUT', `/api/brands/${brandId}/guideline`, { baseRevision: 0, doc: draft });
+  const published = await owner.post(`/api/brands/${brandId}/versions`, { note: 'First version' });
+  const link = await owner.post(`/api/brands/${brandId}/share-links`, {});
+  for (const r of [published, link]) if (r.status !== 201) throw new Error(`fixture answered ${r.status}: ${JSON.stringify(r.body)}`);
+  const client = await makeClientWork(owner, brandId, 'intro');
+  return { brandId, targetMemberId, colorId: color.body.color.id, logoId: logo.body.logo.id, typefaceId: typeface.body.typeface.id, assetId, shareLinkId: link.body.shareLink.id, ...client };
 }

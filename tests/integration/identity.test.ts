@@ -89,7 +89,7 @@ describe('logos', () => {
   test('drawn bounds ignore the transparent margin; clear space follows the unit and multiple', async () => {
     const r = await designer.upload(api('/logos'), 'block.svg', MARGIN_SVG, 'image/svg+xml', { variant: 'primary' });
     expect(r.status).toBe(201);
-    const { bounds, canvas, clearSpace } = r.body.logo;
+    const { bounds, canvas } = r.body.logo;
     expect(canvas).toEqual({ x: 0, y: 0, width: 200, height: 100 });
     expect(bounds.x).toBeCloseTo(50, 0);
     expect(bounds.width).toBeCloseTo(100, 0);

@@ -65,6 +65,11 @@ export class Client {
   patch = <T = any>(path: string, body?: unknown) => this.request<T>('PATCH', path, body ?? {});
   delete = <T = any>(path: string) => this.request<T>('DELETE', path);
 
+  /** The Cookie header this client would send. */
+  cookieHeader(): string {
+    return [...this.cookies].map(([k, v]) => `${k}=${v}`).join('; ');
+  }
+
   get signedIn(): boolean {
     return [...this.cookies.keys()].some((k) => k.includes('session_token'));
   }

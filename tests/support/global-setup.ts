@@ -7,9 +7,11 @@ import { join } from 'node:path';
 import type { TestProject } from 'vitest/node';
 import { buildApp, prepareDatabase, startServer } from '../../scripts/lib/prepare';
 import { dropCluster, freePort, startCluster } from '../../scripts/lib/postgres';
+import { startFakeSmtp, type FakeSmtp } from '../../src/lib/mail/fake-smtp';
 
 let server: ChildProcess | undefined;
 let clusterDir: string | undefined;
+let smtp: FakeSmtp | undefined;
 
 export async function setup(project: TestProject): Promise<void> {
   // The suite builds into its own folder, so it never disturbs a running `npm start`.
@@ -24,9 +26,13 @@ export async function setup(project: TestProject): Promise<void> {
   const filesDir = join(clusterDir, 'files');
   await prepareDatabase({ databaseUrl: cluster.url, siteUrl, secret, signInLimit }, { filesDir });
   if (process.env.PLUMBLINE_TEST_SKIP_BUILD !== '1') buildApp();
-  server = await startServer({ host: '127.0.0.1', port, databaseUrl: cluster.url, siteUrl, secret, signInLimit, filesDir }, { quiet: true });
+  // The local fake SMTP server keeps every message the app sends as JSON in mailDir (src/lib/mail/fake-smtp.ts).
+  smtp = await startFakeSmtp({ dir: join(clusterDir, 'mail') });
+  const mail = { smtpHost: smtp.host, smtpPort: smtp.port, captureDir: smtp.dir };
+  server = await startServer({ host: '127.0.0.1', port, databaseUrl: cluster.url, siteUrl, secret, signInLimit, filesDir, mail }, { quiet: true });
   project.provide('baseUrl', siteUrl);
   project.provide('databaseUrl', cluster.url);
+  project.provide('mailDir', smtp.dir);
 }
 
 export async function teardown(): Promise<void> {
@@ -34,7 +40,9 @@ export async function teardown(): Promise<void> {
     const exited = new Promise((r) => server!.once('exit', r));
     server.kill('SIGTERM');
     await Promise.race([exited, new Promise((r) => setTimeout(r, 5000))]);
+    if (server.exitCode === null) server.kill('SIGKILL');
   }
+  await smtp?.close();
   if (clusterDir) dropCluster(clusterDir);
 }
 
@@ -42,5 +50,6 @@ declare module 'vitest' {
   export interface ProvidedContext {
     baseUrl: string;
     databaseUrl: string;
+    mailDir: string;
   }
 }

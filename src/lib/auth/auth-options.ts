@@ -19,13 +19,16 @@ export const PASSWORD_MAX = 128;
 /** better-auth options: e-mail and password, sessions and rate limits in PostgreSQL, one origin. */
 export function authOptions(settings: AuthSettings): BetterAuthOptions {
   const secure = settings.siteUrl.startsWith('https://');
+  const pool = new pg.Pool({ connectionString: settings.databaseUrl, max: 5 });
+  // An idle connection dropped by the server (restart, shutdown) must not take the process down.
+  pool.on('error', (err) => console.error('[auth] database connection lost:', err.message));
   return {
     appName: 'Plumbline',
     baseURL: settings.siteUrl,
     basePath: '/api/auth',
     secret: settings.secret,
     trustedOrigins: [settings.siteUrl],
-    database: new pg.Pool({ connectionString: settings.databaseUrl, max: 5 }),
+    database: pool,
     emailAndPassword: {
       enabled: true,
       minPasswordLength: PASSWORD_MIN,

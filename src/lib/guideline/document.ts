@@ -1,5 +1,5 @@
 // The guideline document: ProseMirror JSON made of registry blocks and rich text, with the limits the server enforces.
-import { z } from 'zod';
+import * as z from 'zod';
 import { BLOCKS, blockDefinition, type BlockAttrs, type BlockType } from './blocks';
 import {
   blockquoteSchema,

@@ -9,7 +9,7 @@ import { sequelize } from '../db.server';
 import { ApiError } from '../http/api';
 import type { Identity } from '../identity/types';
 import { validateGuideline, type GuidelineDoc } from './document';
-import { instantiateTemplate, templateSchema } from './templates';
+import { instantiateTemplate } from './templates';
 
 export const TEMPLATES = ['essentials', 'brand-book'] as const;
 export type TemplateName = (typeof TEMPLATES)[number];

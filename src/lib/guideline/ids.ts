@@ -1,5 +1,5 @@
 // Stable ids: block ids anchor review comments, so they are generated once and never reused.
-import { z } from 'zod';
+import * as z from 'zod';
 
 /** Longest id accepted for a block or an identity reference. */
 export const ID_MAX = 100;

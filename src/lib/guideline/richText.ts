@@ -1,5 +1,5 @@
 // Rich text inside guidelines: the editor's paragraphs, headings, lists and quotes, with bold, italic and safe links.
-import { z } from 'zod';
+import * as z from 'zod';
 import { blockIdSchema } from './ids';
 import { isSafeHref, MAX_HREF } from './links';
 

@@ -1,4 +1,7 @@
 // Told when a version is published, so followers can be e-mailed the note and the what-changed summary.
+import { QueryTypes } from 'sequelize';
+import { sequelize } from '../db.server';
+import { sendTemplate, siteLink } from '../mail/mail.server';
 
 export interface PublishedNotice {
   brandId: string;
@@ -11,7 +14,37 @@ export interface PublishedNotice {
   summary: string[];
 }
 
-/** Called after the publishing transaction commits. */
-export async function notifyPublished(_notice: PublishedNotice): Promise<void> {
-  // Filled by the e-mail work: followers of the brand receive the notice.
+/** Called after the publishing transaction commits: one e-mail per follower who is still a member (never raises). */
+export async function notifyPublished(notice: PublishedNotice): Promise<{ notified: string[]; failed: string[] }> {
+  const notified: string[] = [];
+  const failed: string[] = [];
+  try {
+    const followers = await sequelize.query<{ email: string; name: string }>(
+      `SELECT u.email, u.name FROM brand_follows f
+         JOIN brand_members m ON m.brand_id = f.brand_id AND m.user_id = f.user_id
+         JOIN "user" u ON u.id = f.user_id
+        WHERE f.brand_id = :brandId ORDER BY u.email`,
+      { replacements: { brandId: notice.brandId }, type: QueryTypes.SELECT },
+    );
+    for (const f of followers) {
+      const outcome = await sendTemplate(
+        f.email,
+        'published',
+        {
+          brandName: notice.brandName,
+          versionNumber: notice.versionNumber,
+          publisherName: notice.publishedBy.name,
+          note: notice.note,
+          summary: notice.summary.slice(0, 50),
+          link: siteLink(`/b/${notice.slug}`),
+          followLink: siteLink(`/app/brands/${notice.brandId}/client#follow`),
+        },
+        notice.brandId,
+      );
+      (outcome.sent ? notified : failed).push(f.email);
+    }
+  } catch (err) {
+    console.error('[notices] publish notices failed', err);
+  }
+  return { notified, failed };
 }

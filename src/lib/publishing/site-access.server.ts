@@ -1,9 +1,10 @@
 // Who may read a published guideline site: members by role, or a visitor holding that brand's share link.
-import type { AstroGlobal } from 'astro';
+import type { APIContext } from 'astro';
 import { Brand, type GuidelineVersion } from '../../../db/models';
 import { roleOn } from '../auth/access.server';
 import { can } from '../auth/policy';
 import type { BrandRole } from '../auth/roles';
+import { versionFromPass, PRINT_COOKIE } from './print-grant.server';
 import { findVersion } from './versions.server';
 
 export interface SiteAccess {
@@ -28,12 +29,18 @@ const page = (status: number, title: string, message: string) =>
 export const notFoundPage = () => page(404, 'Nothing here', 'This guideline site does not exist, or you do not have access to it.');
 
 /** The version a visitor may read at /b/:slug[/v/:number], or the response to send instead. */
-export async function siteAccess(Astro: AstroGlobal, slug: string, number: number | null): Promise<SiteAccess | Response> {
+export async function siteAccess(Astro: Pick<APIContext, 'locals' | 'url' | 'redirect' | 'cookies'>, slug: string, number: number | null): Promise<SiteAccess | Response> {
   const brand = await Brand.findOne({ where: { slug } });
   const { user, shareGrant } = Astro.locals;
   const role = brand && user ? await roleOn(user.id, brand) : null;
   const share = brand && shareGrant?.brandId === brand.id ? shareGrant : null;
 
+  // Our PDF renderer reads the print page with a signed pass for exactly one version.
+  const passVersion = brand && !role && !share ? versionFromPass(Astro.cookies.get(PRINT_COOKIE)?.value) : null;
+  if (passVersion) {
+    const version = await findVersion(brand!.id, number);
+    if (version && version.id === passVersion) return { brand: brand!, version, role: null, viaShareLink: null, canDownload: false, isEditor: false };
+  }
   if (!brand || (!role && !share)) {
     if (!user && !share) return Astro.redirect(`/sign-in?next=${encodeURIComponent(Astro.url.pathname)}`);
     return notFoundPage();

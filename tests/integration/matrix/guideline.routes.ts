@@ -7,14 +7,14 @@ export default [
     method: 'PUT',
     file: 'brands/[id]/guideline/index.ts',
     path: (f) => `/api/brands/${f.brandId}/guideline`,
-    body: () => ({ baseRevision: 0, doc: { type: 'doc', content: [] } }),
+    body: () => ({ baseRevision: 1, doc: { type: 'doc', content: [] } }),
     expect: only(200, ['owner', 'editor']),
   },
   {
     method: 'POST',
     file: 'brands/[id]/guideline/template.ts',
     path: (f) => `/api/brands/${f.brandId}/guideline/template`,
-    body: () => ({ template: 'essentials', baseRevision: 0 }),
+    body: () => ({ template: 'essentials', baseRevision: 1 }),
     expect: only(200, ['owner', 'editor']),
   },
 ] satisfies Route[];

@@ -1,5 +1,5 @@
 // A boxed remark: a neutral note or a caution the reader must not miss.
-import { z } from 'zod';
+import * as z from 'zod';
 import { defineBlock, text } from './define';
 
 export const CALLOUT_TONES = ['note', 'caution'] as const;

@@ -1,5 +1,5 @@
 // The clear-space diagram: the logo, its drawn bounds and the protected area from the identity.
-import { z } from 'zod';
+import * as z from 'zod';
 import { refIdSchema } from '../ids';
 import { defineBlock, text } from './define';
 

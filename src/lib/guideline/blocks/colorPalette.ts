@@ -1,5 +1,5 @@
 // Chosen colours with every value a reader may need to copy, for screen and for print.
-import { z } from 'zod';
+import * as z from 'zod';
 import { refIdSchema } from '../ids';
 import { defineBlock, distinctList, text } from './define';
 

@@ -1,5 +1,5 @@
 // Text-on-ground pairs with their WCAG 2.2 contrast ratio and verdicts.
-import { z } from 'zod';
+import * as z from 'zod';
 import { refIdSchema } from '../ids';
 import { defineBlock, distinctList, text } from './define';
 

@@ -1,5 +1,5 @@
 // One place that turns a block's fields into its attribute schema, defaults and registry entry.
-import { z } from 'zod';
+import * as z from 'zod';
 import { blockIdSchema } from '../ids';
 
 export const BLOCK_GROUPS = {

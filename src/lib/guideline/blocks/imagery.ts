@@ -1,5 +1,5 @@
 // Photographs with a do or don't verdict; src is an asset id (assets arrive later) or a plain web address.
-import { z } from 'zod';
+import * as z from 'zod';
 import { refIdSchema } from '../ids';
 import { defineBlock, text } from './define';
 

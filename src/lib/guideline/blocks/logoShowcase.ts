@@ -1,5 +1,5 @@
 // Chosen logo variants, each on light, dark and brand-colour grounds.
-import { z } from 'zod';
+import * as z from 'zod';
 import { refIdSchema } from '../ids';
 import { defineBlock, distinctList, text } from './define';
 

@@ -1,5 +1,5 @@
 // The smallest a logo may appear: drawn at its screen minimum, with the print minimum beside it.
-import { z } from 'zod';
+import * as z from 'zod';
 import { refIdSchema } from '../ids';
 import { defineBlock, text } from './define';
 

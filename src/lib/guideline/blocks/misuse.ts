@@ -1,5 +1,5 @@
 // Wrong uses of the logo, each generated from the real file, so readers see the very mistake.
-import { z } from 'zod';
+import * as z from 'zod';
 import { refIdSchema } from '../ids';
 import { defineBlock, distinctList, text } from './define';
 

@@ -1,5 +1,5 @@
 // A repeat built from the brand mark; the defaults stay quiet (sparse, small, faint) so it supports, not shouts.
-import { z } from 'zod';
+import * as z from 'zod';
 import { refIdSchema } from '../ids';
 import { defineBlock } from './define';
 

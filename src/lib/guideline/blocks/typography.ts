@@ -1,5 +1,5 @@
 // The brand's typefaces by role, a specimen, and the type scale set in the real fonts.
-import { z } from 'zod';
+import * as z from 'zod';
 import { TYPEFACE_ROLES } from '../../identity/types';
 import { defineBlock, distinctList, text } from './define';
 

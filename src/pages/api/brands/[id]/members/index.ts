@@ -2,6 +2,7 @@ import { authorizeBrand } from '../../../../../lib/auth/access.server';
 import { addMember, listMembers } from '../../../../../lib/brands/brands.server';
 import { addMemberBody } from '../../../../../lib/brands/schemas';
 import { endpoint, idParam, json, methodNotAllowed, readJson } from '../../../../../lib/http/api';
+import { mailInvitation } from '../../../../../lib/invitations/invitations.server';
 
 /** The brand's members and pending invitations. */
 export const GET = endpoint(async ({ locals, params }) => {
@@ -15,7 +16,9 @@ export const POST = endpoint(async ({ locals, params, request }) => {
   const body = await readJson(request, addMemberBody);
   const result = await addMember(caller, brand, body.email, body.role);
   if (result.kind === 'member') return json({ member: result.member }, 201);
-  return json({ invitation: result.invitation }, 201);
+  // The invitation is saved either way; a failed e-mail is reported so the owner can resend it.
+  const mail = await mailInvitation(brand, caller, result.invitation, result.token);
+  return json({ invitation: result.invitation, mailed: mail.sent, ...(mail.problem ? { mailProblem: mail.problem } : {}) }, 201);
 });
 
 export const ALL = methodNotAllowed;

@@ -7,7 +7,7 @@ const VARIANTS = new Set(['black', 'white', 'reversed']);
 
 /** A file of a published version (its own copy of a logo or a licensed font), recoloured for logo variants. */
 export const GET: APIRoute = async (context) => {
-  const access = await siteAccess(context as never, context.params.slug!, Number(context.params.number));
+  const access = await siteAccess(context, context.params.slug!, Number(context.params.number));
   if (access instanceof Response) return new Response('Not found', { status: 404 });
   const file = access.version.files[context.params.fileId ?? ''];
   if (!file) return new Response('Not found', { status: 404 });

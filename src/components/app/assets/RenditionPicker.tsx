@@ -1,0 +1,114 @@
+// Pick a rendition of one asset (format, width, background, variant or a ready-made preset) and get its link.
+import { useState } from 'react';
+import { PRINT_CAUTION } from '../../../lib/cautions';
+import { MAX_WIDTH, MIN_WIDTH, PRESET_INFO, RENDITION_PRESETS, type RenditionPreset } from '../../../lib/assets/kinds';
+import type { ShelfAsset } from './AssetShelf';
+
+type Format = 'png' | 'jpg' | 'webp' | 'svg' | 'tiff';
+type Variant = 'original' | 'black' | 'white' | 'reversed' | 'one-colour';
+
+export function RenditionPicker({ asset, brandColors }: { asset: ShelfAsset; brandColors: { name: string; hex: string }[] }) {
+  const [preset, setPreset] = useState<RenditionPreset | ''>('');
+  const [format, setFormat] = useState<Format>(asset.format === 'svg' ? 'svg' : 'png');
+  const [width, setWidth] = useState('1024');
+  const [background, setBackground] = useState('transparent');
+  const [variant, setVariant] = useState<Variant>('original');
+  const [color, setColor] = useState(brandColors[0]?.hex ?? '#000000');
+
+  if (!asset.renderable) {
+    return (
+      <div className="rounded-md bg-paper p-3 text-sm">
+        <p>{asset.format.toUpperCase()} files are handed out as uploaded.</p>
+        <a className="btn-primary mt-2 px-3 py-1.5" href={`${asset.files.original}?download=1`}>Download the original</a>
+      </div>
+    );
+  }
+
+  const n = Number(width);
+  const widthOk = Number.isInteger(n) && n >= MIN_WIDTH && n <= MAX_WIDTH;
+  const q = new URLSearchParams();
+  if (preset) {
+    q.set('preset', preset);
+    if ((preset === 'social-avatar' || preset === 'print') && widthOk) q.set('width', String(n));
+    if (preset !== 'print' && background !== 'transparent') q.set('background', background);
+  } else {
+    q.set('format', format);
+    if (format !== 'svg' && widthOk) q.set('width', String(n));
+    if (background !== 'transparent' || format === 'jpg' || format === 'tiff') q.set('background', background === 'transparent' ? '#ffffff' : background);
+  }
+  if (asset.kind === 'logo' && variant !== 'original') {
+    q.set('variant', variant);
+    if (variant === 'one-colour' || variant === 'reversed') q.set('color', color);
+  }
+  q.set('download', '1');
+  const href = `${asset.files.original}?${q}`;
+  const print = preset === 'print' || format === 'tiff';
+  const needsWidth = preset === '' ? format !== 'svg' : preset === 'social-avatar' || preset === 'print';
+  const id = (s: string) => `${s}-${asset.id}`;
+
+  return (
+    <form className="space-y-3 rounded-md bg-paper p-3 text-sm" onSubmit={(e) => e.preventDefault()} aria-label={`Rendition of ${asset.name}`}>
+      <div className="grid grid-cols-2 gap-3">
+        <div className="col-span-2">
+          <label className="label" htmlFor={id('preset')}>Ready-made</label>
+          <select id={id('preset')} className="field py-1.5 text-sm" value={preset} onChange={(e) => setPreset(e.target.value as RenditionPreset | '')}>
+            <option value="">None: choose format and width</option>
+            {RENDITION_PRESETS.map((p) => <option key={p} value={p}>{PRESET_INFO[p].label}</option>)}
+          </select>
+          {preset && <p className="hint">{PRESET_INFO[preset].hint}</p>}
+        </div>
+        {!preset && (
+          <div>
+            <label className="label" htmlFor={id('format')}>Format</label>
+            <select id={id('format')} className="field py-1.5 text-sm" value={format} onChange={(e) => setFormat(e.target.value as Format)}>
+              {asset.format === 'svg' && <option value="svg">SVG (vector)</option>}
+              <option value="png">PNG</option>
+              <option value="jpg">JPEG</option>
+              <option value="webp">WebP</option>
+              <option value="tiff">TIFF, CMYK for print</option>
+            </select>
+          </div>
+        )}
+        {needsWidth && (
+          <div>
+            <label className="label" htmlFor={id('width')}>Width (px)</label>
+            <input id={id('width')} className="field py-1.5 text-sm" inputMode="numeric" value={width} onChange={(e) => setWidth(e.target.value)} aria-invalid={!widthOk} aria-describedby={id('width-hint')} />
+            <p id={id('width-hint')} className={widthOk ? 'hint' : 'error-text'}>{MIN_WIDTH}–{MAX_WIDTH} px</p>
+          </div>
+        )}
+        <div>
+          <label className="label" htmlFor={id('bg')}>Background</label>
+          <select id={id('bg')} className="field py-1.5 text-sm" value={background} onChange={(e) => setBackground(e.target.value)}>
+            <option value="transparent">Transparent</option>
+            <option value="#ffffff">White</option>
+            <option value="#000000">Black</option>
+            {brandColors.map((c) => <option key={c.hex + c.name} value={c.hex}>{c.name} {c.hex}</option>)}
+          </select>
+        </div>
+        {asset.kind === 'logo' && (
+          <div>
+            <label className="label" htmlFor={id('variant')}>Colour version</label>
+            <select id={id('variant')} className="field py-1.5 text-sm" value={variant} onChange={(e) => setVariant(e.target.value as Variant)}>
+              <option value="original">As designed</option>
+              <option value="black">All black</option>
+              <option value="white">All white</option>
+              <option value="reversed">White on a colour field</option>
+              <option value="one-colour">One brand colour</option>
+            </select>
+          </div>
+        )}
+        {asset.kind === 'logo' && (variant === 'one-colour' || variant === 'reversed') && (
+          <div>
+            <label className="label" htmlFor={id('ink')}>{variant === 'reversed' ? 'Field colour' : 'Ink'}</label>
+            <select id={id('ink')} className="field py-1.5 text-sm" value={color} onChange={(e) => setColor(e.target.value)}>
+              {[...brandColors, { name: 'Black', hex: '#000000' }].map((c) => <option key={c.hex + c.name} value={c.hex}>{c.name} {c.hex}</option>)}
+            </select>
+          </div>
+        )}
+      </div>
+      {print && <p className="rounded bg-warn-wash p-2 text-warn">{PRINT_CAUTION}</p>}
+      <a className={`btn-primary px-3 py-1.5 ${needsWidth && !widthOk ? 'pointer-events-none opacity-60' : ''}`} href={href} aria-disabled={needsWidth && !widthOk}>Download</a>
+      <p className="break-all font-mono text-xs text-ink-faint">{href.replace('&download=1', '').replace('?download=1', '')}</p>
+    </form>
+  );
+}

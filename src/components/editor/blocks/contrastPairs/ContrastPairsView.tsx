@@ -1,0 +1,48 @@
+// Settings of the contrast pairs: add, change and remove text-on-ground pairs.
+import type { ReactNodeViewProps } from '@tiptap/react';
+import type { ContrastPair, ContrastPairsAttrs } from '../../../../lib/guideline/blocks';
+import { suggestedPairs } from '../../../../lib/guideline/templates';
+import { colorsInOrder } from '../../../../lib/guideline/identity';
+import { BlockFrame } from '../BlockFrame';
+import { ColorSelect, TextInput } from '../controls';
+import { useIdentity } from '../../IdentityContext';
+
+export function ContrastPairsView(props: ReactNodeViewProps) {
+  const identity = useIdentity();
+  const a = props.node.attrs as ContrastPairsAttrs;
+  const set = (patch: Partial<ContrastPairsAttrs>) => props.updateAttributes(patch);
+  const change = (i: number, patch: Partial<ContrastPair>) => set({ pairs: a.pairs.map((p, j) => (j === i ? { ...p, ...patch } : p)) });
+  const colors = colorsInOrder(identity);
+  const add = () => {
+    const taken = new Set(a.pairs.map((p) => `${p.foreground}/${p.background}`));
+    const next = suggestedPairs(identity).find((p) => !taken.has(`${p.foreground}/${p.background}`));
+    if (next) set({ pairs: [...a.pairs, next] });
+    else if (colors.length >= 2) set({ pairs: [...a.pairs, { foreground: colors[0].id, background: colors[1].id }] });
+  };
+  return (
+    <BlockFrame
+      props={props}
+      startOpen={a.pairs.length === 0}
+      settings={
+        <>
+          {a.pairs.map((pair, i) => (
+            <div key={i} className="grid items-end gap-3 sm:grid-cols-[1fr_1fr_auto]">
+              <ColorSelect label={`Pair ${i + 1}: text`} identity={identity} value={pair.foreground} onChange={(v) => v && change(i, { foreground: v })} noneLabel="Choose a colour" />
+              <ColorSelect label={`Pair ${i + 1}: ground`} identity={identity} value={pair.background} onChange={(v) => v && change(i, { background: v })} noneLabel="Choose a colour" />
+              <button type="button" className="btn-danger px-3 py-2" onClick={() => set({ pairs: a.pairs.filter((_, j) => j !== i) })} aria-label={`Remove pair ${i + 1}`}>
+                Remove
+              </button>
+            </div>
+          ))}
+          <div>
+            <button type="button" className="btn-quiet" onClick={add} disabled={colors.length < 2}>
+              Add a pair
+            </button>
+            {colors.length < 2 ? <p className="hint">Add at least two colours to the identity to compare them.</p> : null}
+          </div>
+          <TextInput label="Note (optional)" value={a.note} max={500} onChange={(note) => set({ note })} />
+        </>
+      }
+    />
+  );
+}

@@ -1,0 +1,70 @@
+// The published guideline: static, semantic HTML in the brand's fonts and colours, one <section> per section heading.
+import type { CSSProperties, ReactNode } from 'react';
+import { parseBlockAttrs, type GuidelineDoc, type TopLevelNode } from '../../lib/guideline/document';
+import { brandStyle } from '../../lib/guideline/identity';
+import { outline, type OutlineEntry } from '../../lib/guideline/outline';
+import { RICH_TEXT_TYPES, type RichBlockNode } from '../../lib/guideline/richText';
+import type { Identity } from '../../lib/identity/types';
+import { BlockRenderer } from './blocks';
+import type { RenderMode } from './parts';
+import { RichBlock } from './RichText';
+
+export { outline, type OutlineEntry };
+
+function Node({ node, identity, mode }: { node: TopLevelNode; identity: Identity; mode: RenderMode }) {
+  if ((RICH_TEXT_TYPES as readonly string[]).includes(node.type)) return <RichBlock node={node as RichBlockNode} />;
+  const id = (node.attrs as { id?: string } | undefined)?.id;
+  return (
+    <div className="my-6 break-inside-avoid" data-block={node.type} data-block-id={id}>
+      <BlockRenderer type={node.type} attrs={node.attrs} identity={identity} mode={mode} />
+    </div>
+  );
+}
+
+function SectionHeader({ entry, intro }: { entry: OutlineEntry; intro: string }) {
+  return (
+    <header className="mb-6">
+      {entry.eyebrow ? <p className="text-xs font-semibold uppercase tracking-[0.16em] opacity-70">{entry.eyebrow}</p> : null}
+      <h2 id={`${entry.anchor}-title`} className="group mt-1 text-4xl font-semibold leading-tight" style={{ fontFamily: 'var(--brand-heading-font)' }}>
+        {entry.title}
+        <a href={`#${entry.anchor}`} className="ml-3 text-2xl no-underline opacity-0 group-hover:opacity-40 focus-visible:opacity-60" aria-label={`Link to the section ${entry.title}`}>
+          #
+        </a>
+      </h2>
+      {intro ? <p className="mt-3 max-w-prose text-lg leading-relaxed opacity-85">{intro}</p> : null}
+    </header>
+  );
+}
+
+/** Renders a validated guideline document for the published site ('site') or the PDF ('print'). */
+export function GuidelineDocument({ doc, identity, mode }: { doc: GuidelineDoc; identity: Identity; mode: RenderMode }) {
+  const entries = outline(doc);
+  const groups: { entry: OutlineEntry | null; intro: string; nodes: TopLevelNode[] }[] = [{ entry: null, intro: '', nodes: [] }];
+  let sectionIndex = 0;
+  for (const node of doc.content) {
+    if (node.type === 'sectionHeading') {
+      const attrs = parseBlockAttrs('sectionHeading', node.attrs);
+      groups.push({ entry: entries[sectionIndex++], intro: attrs?.intro ?? '', nodes: [] });
+    } else groups[groups.length - 1].nodes.push(node);
+  }
+  const style = { ...brandStyle(identity), fontFamily: 'var(--brand-body-font)', color: 'var(--brand-text)' } as CSSProperties;
+  const body = (nodes: TopLevelNode[]): ReactNode => nodes.map((node, i) => <Node key={(node.attrs as { id?: string } | undefined)?.id ?? i} node={node} identity={identity} mode={mode} />);
+  return (
+    <article className="guideline" data-mode={mode} style={style}>
+      {groups.map((group, i) =>
+        group.entry ? (
+          <section key={group.entry.anchor} id={group.entry.anchor} aria-labelledby={`${group.entry.anchor}-title`} data-block-id={group.entry.blockId} className={`py-10 ${mode === 'print' ? 'break-before-page' : ''}`}>
+            <SectionHeader entry={group.entry} intro={group.intro} />
+            {body(group.nodes)}
+          </section>
+        ) : group.nodes.length > 0 ? (
+          <div key={`intro-${i}`} className="py-6">
+            {body(group.nodes)}
+          </div>
+        ) : null,
+      )}
+    </article>
+  );
+}
+
+export default GuidelineDocument;

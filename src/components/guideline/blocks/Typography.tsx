@@ -1,0 +1,89 @@
+// The typefaces by role with a specimen, and the type scale set in the brand's own fonts.
+import type { TypographyAttrs } from '../../../lib/guideline/blocks';
+import { fontStack, typefaceForRole } from '../../../lib/guideline/identity';
+import type { IdentityTypeface, TypefaceRole } from '../../../lib/identity/types';
+import { EmptyHint, Missing, type BlockRenderProps } from '../parts';
+
+const ROLE_LABELS: Record<TypefaceRole, string> = { heading: 'Headings', body: 'Running text', accent: 'Accents' };
+const ALPHABET = 'ABCDEFGHIJKLMNOPQRSTUVWXYZ abcdefghijklmnopqrstuvwxyz 0123456789 & ! ? “ ” ‘ ’ —';
+const num = (n: number, places = 2) => String(Math.round(n * 10 ** places) / 10 ** places);
+
+function Face({ face, role, attrs }: { face: IdentityTypeface; role: TypefaceRole; attrs: TypographyAttrs }) {
+  const family = fontStack(face, role === 'body' ? 'serif' : 'sans-serif');
+  return (
+    <li className="rounded-xl border border-black/10 bg-white p-5 text-[#1f1f1f]" data-typeface={face.id}>
+      <p className="text-xs font-semibold uppercase tracking-wider opacity-70">{ROLE_LABELS[role]}</p>
+      <p className="mt-1 text-4xl leading-tight" style={{ fontFamily: family }}>
+        {face.family}
+      </p>
+      <p className="mt-1 text-sm opacity-80">Weights {face.weights.join(', ')}</p>
+      {attrs.showSpecimen ? (
+        <>
+          <p className="mt-4 text-2xl leading-snug" style={{ fontFamily: family }}>
+            {attrs.specimenText}
+          </p>
+          <p className="mt-3 break-words text-base leading-relaxed opacity-90" style={{ fontFamily: family }}>
+            {ALPHABET}
+          </p>
+        </>
+      ) : null}
+    </li>
+  );
+}
+
+export function TypographyBlock({ attrs, identity, editing }: BlockRenderProps<TypographyAttrs>) {
+  const scale = identity.typeScale;
+  if (attrs.roles.length === 0 && !attrs.showScale) return editing ? <EmptyHint>Choose the typefaces or the scale to show.</EmptyHint> : null;
+  return (
+    <div className="grid gap-6">
+      {attrs.roles.length > 0 ? (
+        <ul className="grid gap-4 md:grid-cols-2">
+          {attrs.roles.map((role) => {
+            const face = typefaceForRole(identity, role);
+            if (face) return <Face key={role} face={face} role={role} attrs={attrs} />;
+            return role === 'accent' && !editing ? null : (
+              <li key={role}>
+                <Missing what="typeface" detail={ROLE_LABELS[role]} />
+              </li>
+            );
+          })}
+        </ul>
+      ) : null}
+      {attrs.showScale && scale.steps.length > 0 ? (
+        <div className="overflow-x-auto rounded-xl border border-black/10 bg-white text-[#1f1f1f]">
+          <table className="w-full text-left text-sm">
+            <caption className="px-4 pt-4 text-left text-sm">
+              Type scale: {num(scale.basePx)} px base, ratio {num(scale.ratio, 3)} ({scale.ratioName.replace(/-/g, ' ')})
+              {scale.measure ? `; running text sets about ${Math.round(scale.measure.charsPerLine)} characters per line at ${scale.columnPx} px` : ''}.
+            </caption>
+            <thead className="border-b border-black/10 text-xs uppercase tracking-wider opacity-70">
+              <tr>
+                <th scope="col" className="px-4 py-2">Style</th>
+                <th scope="col" className="px-4 py-2">Size</th>
+                <th scope="col" className="px-4 py-2">Line height</th>
+                <th scope="col" className="px-4 py-2">Sample</th>
+              </tr>
+            </thead>
+            <tbody>
+              {[...scale.steps].sort((a, b) => b.step - a.step).map((step) => {
+                const face = typefaceForRole(identity, step.role);
+                return (
+                  <tr key={step.step} className="border-b border-black/5 align-baseline last:border-0" data-step={step.step}>
+                    <th scope="row" className="whitespace-nowrap px-4 py-3 font-semibold">{step.name}</th>
+                    <td className="whitespace-nowrap px-4 py-3 font-mono text-xs">
+                      {num(step.px)} px · {num(step.rem, 3)} rem · {num(step.pt)} pt
+                    </td>
+                    <td className="px-4 py-3 font-mono text-xs">{num(step.lineHeight)}</td>
+                    <td className="px-4 py-3" style={{ fontFamily: fontStack(face), fontSize: `${step.px}px`, lineHeight: step.lineHeight }}>
+                      {attrs.specimenText.split(' ').slice(0, 4).join(' ')}
+                    </td>
+                  </tr>
+                );
+              })}
+            </tbody>
+          </table>
+        </div>
+      ) : null}
+    </div>
+  );
+}

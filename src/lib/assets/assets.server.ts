@@ -1,0 +1,452 @@
+// The asset shelf: uploads that leave nothing behind when refused, states, renditions on request, bundles and the download log.
+import { createHash } from 'node:crypto';
+import { Readable } from 'node:stream';
+import { ZipArchive } from 'archiver';
+import { Op, QueryTypes, UniqueConstraintError, type WhereOptions } from 'sequelize';
+import { Asset, AssetDownload, AssetRendition } from '../../../db/models/assets';
+import type { Brand } from '../../../db/models';
+import { audit } from '../audit.server';
+import type { Caller } from '../auth/access.server';
+import { sequelize } from '../db.server';
+import { ApiError } from '../http/api';
+import { loadIdentity } from '../identity/identity.server';
+import { newKey } from '../storage/storage';
+import { storage } from '../storage/index.server';
+import type { AssetReader } from './access.server';
+import { inspectUpload, UploadRejection } from './inspect.server';
+import { canMoveState, FORMAT_INFO, PREVIEW_MAX_WIDTH, renditionFilename, type AssetKind, type AssetState, type RenditionParams, type RenditionQuery } from './kinds';
+import { cachedRendition, type Rendition } from './render.server';
+import { RenditionError, resolveRendition } from './renditions';
+import { usageNote } from './usage';
+
+export interface AssetView {
+  id: string;
+  brandId: string;
+  name: string;
+  kind: AssetKind;
+  format: string;
+  mime: string;
+  state: AssetState;
+  byteSize: number;
+  width: number | null;
+  height: number | null;
+  originalFilename: string;
+  tags: string[];
+  description: string | null;
+  usageNotes: string | null;
+  createdAt: string;
+  updatedAt: string;
+  stateChangedAt: string | null;
+  /** Whether renditions (width, format, variants) can be asked for. */
+  renderable: boolean;
+  files: { original: string; preview: string | null };
+}
+
+const RENDERABLE = new Set(['svg', 'png', 'jpeg', 'webp']);
+
+export function assetView(row: Asset): AssetView {
+  const renderable = RENDERABLE.has(row.format);
+  const file = `/api/assets/${row.id}/file`;
+  return {
+    id: row.id,
+    brandId: row.brandId,
+    name: row.name,
+    kind: row.kind,
+    format: row.format,
+    mime: row.mime,
+    state: row.state,
+    byteSize: row.byteSize,
+    width: row.width,
+    height: row.height,
+    originalFilename: row.originalFilename,
+    tags: row.tags,
+    description: row.description,
+    usageNotes: row.usageNotes,
+    createdAt: row.createdAt.toISOString(),
+    updatedAt: row.updatedAt.toISOString(),
+    stateChangedAt: row.stateChangedAt?.toISOString() ?? null,
+    renderable,
+    files: { original: file, preview: renderable ? `${file}?format=png&width=${PREVIEW_MAX_WIDTH}&preview=1` : null },
+  };
+}
+
+const brandAudit = (caller: Caller, brand: Brand, action: string, targetId: string, details: Record<string, unknown>) => ({
+  actorId: caller.id,
+  action,
+  targetType: 'asset',
+  targetId,
+  brandId: brand.id,
+  studioId: brand.studioId,
+  details,
+});
+
+const nameFrom = (filename: string) => filename.replace(/\.[a-z0-9]{1,8}$/i, '').replace(/\p{Cc}+/gu, ' ').trim().slice(0, 160) || 'Untitled asset';
+
+// ---------------------------------------------------------------- uploads
+
+export interface UploadOutcome {
+  assets: (AssetView & { duplicate: boolean; sanitised: string[] })[];
+  rejected: { filename: string; code: string; message: string }[];
+}
+
+/** Store one inspected file and its row, or nothing at all: the file is removed again when the row cannot be written. */
+async function storeOne(caller: Caller, brand: Brand, file: File, kind: AssetKind | undefined): Promise<AssetView & { duplicate: boolean; sanitised: string[] }> {
+  const inspected = await inspectUpload(file.name, Buffer.from(await file.arrayBuffer()), kind);
+  const contentHash = createHash('sha256').update(inspected.stored).digest('hex');
+  const existing = await Asset.findOne({ where: { brandId: brand.id, contentHash } });
+  if (existing) return { ...assetView(existing), duplicate: true, sanitised: [] };
+  const key = newKey(brand.id, 'asset', FORMAT_INFO[inspected.format].ext);
+  await storage.put(key, inspected.stored, inspected.mime);
+  try {
+    const row = await sequelize.transaction(async (t) => {
+      const asset = await Asset.create(
+        {
+          brandId: brand.id,
+          name: nameFrom(file.name),
+          kind: inspected.kind,
+          format: inspected.format,
+          mime: inspected.mime,
+          storageKey: key,
+          contentHash,
+          byteSize: inspected.stored.length,
+          width: inspected.width,
+          height: inspected.height,
+          drawnBounds: inspected.drawnBounds,
+          originalFilename: file.name.slice(0, 255),
+          description: null,
+          usageNotes: null,
+          uploadedById: caller.id,
+          stateChangedAt: null,
+          stateChangedById: null,
+        },
+        { transaction: t },
+      );
+      await audit(brandAudit(caller, brand, 'asset.upload', asset.id, { name: asset.name, format: asset.format, bytes: asset.byteSize, sanitised: inspected.removed }), t);
+      return asset;
+    });
+    return { ...assetView(row), duplicate: false, sanitised: inspected.removed };
+  } catch (err) {
+    await storage.delete(key); // no orphan file when the row could not be written
+    if (err instanceof UniqueConstraintError) {
+      // The same bytes arrived twice at once: the other upload won.
+      const winner = await Asset.findOne({ where: { brandId: brand.id, contentHash } });
+      if (winner) return { ...assetView(winner), duplicate: true, sanitised: [] };
+    }
+    throw err;
+  }
+}
+
+/** Upload several files; each is accepted or refused on its own. */
+export async function uploadAssets(caller: Caller, brand: Brand, files: File[], kind?: AssetKind): Promise<UploadOutcome> {
+  const outcome: UploadOutcome = { assets: [], rejected: [] };
+  for (const file of files) {
+    try {
+      outcome.assets.push(await storeOne(caller, brand, file, kind));
+    } catch (err) {
+      if (err instanceof UploadRejection) outcome.rejected.push({ filename: file.name, code: err.code, message: err.message });
+      else throw err;
+    }
+  }
+  return outcome;
+}
+
+// ---------------------------------------------------------------- reading and editing
+
+export interface AssetFilters {
+  state?: AssetState;
+  tag?: string;
+  kind?: AssetKind;
+}
+
+export async function listAssets(reader: AssetReader, filters: AssetFilters): Promise<AssetView[]> {
+  const where: WhereOptions<Asset> & Record<string, unknown> = { brandId: reader.brand.id };
+  if (reader.approvedOnly) where.state = 'approved';
+  if (filters.state) where.state = reader.approvedOnly && filters.state !== 'approved' ? '__none__' : filters.state;
+  if (filters.kind) where.kind = filters.kind;
+  if (filters.tag) where.tags = { [Op.contains]: [filters.tag] };
+  const rows = await Asset.findAll({ where, order: [['createdAt', 'DESC'], ['name', 'ASC']] });
+  return rows.map(assetView);
+}
+
+/** An asset of the brand the reader may see; drafts and retired assets are 404 for approved-only readers. */
+export async function assetFor(brandId: string, assetId: string, approvedOnly: boolean): Promise<Asset> {
+  const asset = await Asset.findOne({ where: { id: assetId, brandId } });
+  if (!asset || (approvedOnly && asset.state !== 'approved')) throw new ApiError(404, 'not_found', 'That asset was not found on this brand’s shelf.');
+  return asset;
+}
+
+export interface AssetChanges {
+  state?: AssetState;
+  tags?: string[];
+  description?: string | null;
+  usageNotes?: string | null;
+  name?: string;
+  kind?: 'logo' | 'image';
+}
+
+export async function updateAsset(caller: Caller, brand: Brand, assetId: string, body: AssetChanges): Promise<AssetView> {
+  const asset = await assetFor(brand.id, assetId, false);
+  const changes: Partial<Asset> = {};
+  if (body.state !== undefined && body.state !== asset.state) {
+    if (!canMoveState(asset.state, body.state)) {
+      throw new ApiError(409, 'invalid_transition', `A ${asset.state} asset cannot become ${body.state}; approve it first, or move it back to draft.`);
+    }
+    Object.assign(changes, { state: body.state, stateChangedAt: new Date(), stateChangedById: caller.id });
+  }
+  if (body.tags !== undefined) changes.tags = [...new Set(body.tags.map((t) => t.trim().toLowerCase()).filter(Boolean))];
+  if (body.description !== undefined) changes.description = body.description || null;
+  if (body.usageNotes !== undefined) changes.usageNotes = body.usageNotes || null;
+  if (body.name !== undefined) changes.name = body.name;
+  if (body.kind !== undefined && body.kind !== asset.kind) {
+    if (!RENDERABLE.has(asset.format)) throw new ApiError(400, 'invalid_input', `A ${asset.format.toUpperCase()} file cannot be marked as a logo or image.`, { path: 'kind' });
+    changes.kind = body.kind;
+  }
+  const before = { state: asset.state, name: asset.name };
+  await sequelize.transaction(async (t) => {
+    await asset.update(changes, { transaction: t });
+    await audit(brandAudit(caller, brand, changes.state ? 'asset.state' : 'asset.update', asset.id, { before, changes: body }), t);
+  });
+  return assetView(asset);
+}
+
+export async function deleteAsset(caller: Caller, brand: Brand, assetId: string): Promise<void> {
+  const asset = await assetFor(brand.id, assetId, false);
+  const renditions = await AssetRendition.findAll({ where: { assetId: asset.id }, attributes: ['storageKey'] });
+  await sequelize.transaction(async (t) => {
+    await asset.destroy({ transaction: t });
+    await audit(brandAudit(caller, brand, 'asset.delete', asset.id, { name: asset.name, format: asset.format }), t);
+  });
+  for (const key of [asset.storageKey, ...renditions.map((r) => r.storageKey)]) await storage.delete(key);
+}
+
+// ---------------------------------------------------------------- files and renditions
+
+/** Resolve a request for an asset, mapping refusals to 400s. */
+export function renditionParams(asset: Asset, query: RenditionQuery): RenditionParams {
+  try {
+    return resolveRendition(query, asset);
+  } catch (err) {
+    if (err instanceof RenditionError) throw new ApiError(400, err.code, err.message);
+    throw err;
+  }
+}
+
+async function originalBytes(asset: Asset): Promise<Buffer> {
+  const bytes = await storage.get(asset.storageKey);
+  if (!bytes) throw new ApiError(404, 'not_found', 'The asset’s file is missing from storage.');
+  return bytes;
+}
+
+/** The rendition from the cache, or drawn now and remembered. */
+export async function renditionOf(asset: Asset, params: RenditionParams): Promise<Rendition> {
+  return cachedRendition(
+    storage,
+    { id: asset.id, brandId: asset.brandId, format: asset.format, drawnBounds: asset.drawnBounds, bytes: () => originalBytes(asset) },
+    params,
+    async (entry) => {
+      await AssetRendition.bulkCreate(
+        [{ assetId: asset.id, paramsKey: entry.paramsKey, storageKey: entry.key, contentType: entry.mime, byteSize: entry.size }],
+        { ignoreDuplicates: true },
+      );
+    },
+  );
+}
+
+const logRow = (reader: AssetReader, kind: 'file' | 'bundle', assetId: string | null, details: Record<string, unknown>) => ({
+  brandId: reader.brand.id,
+  assetId,
+  kind,
+  userId: reader.caller?.id ?? null,
+  shareLinkId: reader.shareLinkId,
+  details,
+});
+
+/** One file download: the rendition asked for, its name, and a row in the download log. */
+export async function downloadFile(reader: AssetReader, asset: Asset, query: RenditionQuery): Promise<{ rendition: Rendition; filename: string; params: RenditionParams }> {
+  const { preview, ...wanted } = query;
+  const params = renditionParams(asset, wanted);
+  if (preview && (params.format !== 'png' || !params.width || params.width > PREVIEW_MAX_WIDTH || params.square)) {
+    throw new ApiError(400, 'invalid_input', `A preview is a PNG at most ${PREVIEW_MAX_WIDTH} px wide; download anything else without preview=1.`);
+  }
+  const rendition = await renditionOf(asset, params);
+  const filename = renditionFilename(reader.brand.slug, asset.name, params, asset.format);
+  if (preview) return { rendition, filename, params };
+  await AssetDownload.create(
+    logRow(reader, 'file', asset.id, {
+      filename,
+      format: params.format,
+      width: params.width,
+      variant: params.variant,
+      preset: query.preset ?? null,
+      colorSpace: params.colorSpace,
+      bytes: rendition.body.length,
+    }),
+  );
+  return { rendition, filename, params };
+}
+
+// ---------------------------------------------------------------- bundles
+
+/** What each logo brings into a bundle beside its original. */
+const BUNDLE_LOGO_FILES: { folder: string; query: RenditionQuery; svgOnly?: boolean }[] = [
+  { folder: 'screen', query: { format: 'png', width: 512 } },
+  { folder: 'screen', query: { format: 'png', width: 2048 } },
+  { folder: 'one-colour', query: { format: 'png', width: 512, variant: 'black' } },
+  { folder: 'one-colour', query: { format: 'png', width: 512, variant: 'white' } },
+  { folder: 'one-colour', query: { format: 'svg', variant: 'black' }, svgOnly: true },
+  { folder: 'one-colour', query: { format: 'svg', variant: 'white' }, svgOnly: true },
+  { folder: 'web-icons', query: { preset: 'favicon' } },
+  { folder: 'web-icons', query: { preset: 'apple-touch' } },
+  { folder: 'print', query: { preset: 'print', width: 2048 } },
+];
+export const MAX_BUNDLE_ASSETS = 100;
+
+export interface BundlePlan {
+  filename: string;
+  entries: number;
+  estimateBytes: number;
+  stream: ReadableStream<Uint8Array>;
+}
+
+const folderName = (s: string) => s.toLowerCase().normalize('NFKD').replace(/[^\w]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 60) || 'asset';
+
+/** A zip of approved assets (or every approved logo), with their renditions and a usage note; streamed as it is written. */
+export async function bundle(reader: AssetReader, request: { assetIds?: string[]; allLogos?: boolean }): Promise<BundlePlan> {
+  const brand = reader.brand;
+  let assets: Asset[];
+  if (request.allLogos) {
+    assets = await Asset.findAll({ where: { brandId: brand.id, state: 'approved', kind: 'logo' }, order: [['name', 'ASC']] });
+    if (!assets.length) throw new ApiError(400, 'nothing_to_bundle', 'This brand has no approved logos yet. Approve a logo on the shelf first.');
+  } else {
+    const ids = [...new Set(request.assetIds ?? [])];
+    if (!ids.length) throw new ApiError(400, 'invalid_input', 'Choose at least one asset, or ask for all logos.', { path: 'assetIds' });
+    assets = await Asset.findAll({ where: { brandId: brand.id, id: ids }, order: [['name', 'ASC']] });
+    const found = new Map(assets.map((a) => [a.id, a]));
+    for (const id of ids) {
+      const a = found.get(id);
+      if (!a || (reader.approvedOnly && a.state !== 'approved')) throw new ApiError(404, 'not_found', 'One of the chosen assets was not found on this brand’s shelf.', { assetId: id });
+      if (a.state !== 'approved') throw new ApiError(400, 'not_approved', `“${a.name}” is ${a.state}; only approved assets go into bundles.`, { assetId: id });
+    }
+  }
+  if (assets.length > MAX_BUNDLE_ASSETS) throw new ApiError(400, 'too_many_assets', `A bundle can hold at most ${MAX_BUNDLE_ASSETS} assets.`);
+
+  // Renditions first (most come from the cache), so the size estimate is honest before the first byte is sent.
+  const used = new Set<string>();
+  const plan: { path: string; source: () => Promise<Buffer>; size: number; asset: Asset }[] = [];
+  for (const asset of assets) {
+    let folder = folderName(asset.name);
+    for (let n = 2; used.has(folder); n++) folder = `${folderName(asset.name)}-${n}`;
+    used.add(folder);
+    const ext = FORMAT_INFO[asset.format].ext;
+    plan.push({ path: `${folder}/original/${folderName(asset.name)}.${ext}`, source: () => originalBytes(asset), size: asset.byteSize, asset });
+    if (asset.kind !== 'logo' || !RENDERABLE.has(asset.format)) continue;
+    for (const item of BUNDLE_LOGO_FILES) {
+      if (item.svgOnly && asset.format !== 'svg') continue;
+      const params = renditionParams(asset, item.query);
+      const made = await renditionOf(asset, params);
+      plan.push({ path: `${folder}/${item.folder}/${renditionFilename(brand.slug, asset.name, params, asset.format)}`, source: async () => made.body, size: made.body.length, asset });
+    }
+  }
+  const identity = await loadIdentity(brand);
+  const note = Buffer.from(
+    usageNote(
+      identity,
+      plan.map((p) => ({ path: p.path, name: p.asset.name, notes: p.path.includes('/original/') ? p.asset.usageNotes : null })),
+      new Date(),
+    ),
+  );
+
+  await AssetDownload.create(logRow(reader, 'bundle', null, { assetIds: assets.map((a) => a.id), allLogos: !!request.allLogos, entries: plan.length + 1 }));
+
+  const archive = new ZipArchive({ zlib: { level: 6 } });
+  (async () => {
+    try {
+      archive.append(note, { name: 'USAGE.txt' });
+      for (const entry of plan) archive.append(await entry.source(), { name: entry.path });
+      await archive.finalize();
+    } catch (err) {
+      console.error('[assets] bundle failed', err);
+      archive.destroy(err as Error);
+    }
+  })();
+  return {
+    filename: `${brand.slug}-assets.zip`,
+    entries: plan.length + 1,
+    estimateBytes: note.length + plan.reduce((s, p) => s + p.size, 0),
+    stream: Readable.toWeb(archive) as ReadableStream<Uint8Array>,
+  };
+}
+
+// ---------------------------------------------------------------- download log
+
+export interface DownloadFilters {
+  kind?: 'file' | 'bundle';
+  assetId?: string;
+  via?: 'member' | 'share-link';
+  userId?: string;
+  from?: Date;
+  to?: Date;
+  limit: number;
+}
+
+export interface DownloadEntry {
+  id: string;
+  at: string;
+  kind: 'file' | 'bundle';
+  asset: { id: string; name: string } | null;
+  who: { type: 'member'; id: string; name: string; email: string } | { type: 'share-link'; linkId: string } | { type: 'unknown' };
+  details: Record<string, unknown>;
+}
+
+export async function downloadLog(brand: Brand, filters: DownloadFilters): Promise<DownloadEntry[]> {
+  const where: Record<string | symbol, unknown> = { brandId: brand.id };
+  if (filters.kind) where.kind = filters.kind;
+  if (filters.assetId) where.assetId = filters.assetId;
+  if (filters.userId) where.userId = filters.userId;
+  if (filters.via === 'member') where.userId = { [Op.ne]: null };
+  if (filters.via === 'share-link') where.shareLinkId = { [Op.ne]: null };
+  if (filters.from || filters.to) {
+    where.createdAt = { ...(filters.from ? { [Op.gte]: filters.from } : {}), ...(filters.to ? { [Op.lt]: filters.to } : {}) };
+  }
+  const rows = await AssetDownload.findAll({ where, order: [['createdAt', 'DESC']], limit: filters.limit });
+  const assetIds = [...new Set(rows.map((r) => r.assetId).filter((v): v is string => !!v))];
+  const userIds = [...new Set(rows.map((r) => r.userId).filter((v): v is string => !!v))];
+  const assets = assetIds.length ? await Asset.findAll({ where: { id: assetIds }, attributes: ['id', 'name'] }) : [];
+  // better-auth owns "user": read names with a plain query, never through a model.
+  const users = userIds.length
+    ? await sequelize.query<{ id: string; name: string; email: string }>('SELECT id, name, email FROM "user" WHERE id IN (:ids)', { replacements: { ids: userIds }, type: QueryTypes.SELECT })
+    : [];
+  const assetName = new Map(assets.map((a) => [a.id, a.name]));
+  const person = new Map(users.map((u) => [u.id, u]));
+  return rows.map((r) => {
+    const u = r.userId ? person.get(r.userId) : undefined;
+    return {
+      id: r.id,
+      at: r.createdAt.toISOString(),
+      kind: r.kind,
+      asset: r.assetId ? { id: r.assetId, name: assetName.get(r.assetId) ?? '(deleted)' } : null,
+      who: u ? { type: 'member', id: u.id, name: u.name, email: u.email } : r.shareLinkId ? { type: 'share-link', linkId: r.shareLinkId } : { type: 'unknown' },
+      details: r.details,
+    };
+  });
+}
+
+/** The log as CSV rows, header first. */
+export function downloadLogRows(entries: DownloadEntry[]): unknown[][] {
+  return [
+    ['when', 'kind', 'asset', 'who', 'email', 'share_link', 'file', 'format', 'width', 'variant', 'entries'],
+    ...entries.map((e) => [
+      e.at,
+      e.kind,
+      e.asset?.name ?? (e.kind === 'bundle' ? `${((e.details.assetIds as string[]) ?? []).length} assets` : ''),
+      e.who.type === 'member' ? e.who.name : e.who.type === 'share-link' ? 'share link' : '',
+      e.who.type === 'member' ? e.who.email : '',
+      e.who.type === 'share-link' ? e.who.linkId : '',
+      e.details.filename ?? '',
+      e.details.format ?? '',
+      e.details.width ?? '',
+      e.details.variant ?? '',
+      e.details.entries ?? '',
+    ]),
+  ];
+}

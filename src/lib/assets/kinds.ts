@@ -1,0 +1,172 @@
+// What the asset shelf accepts, the states an asset moves through, and the renditions it can be asked for.
+// Browser-safe: the shelf island imports the same lists the server validates with.
+import { z } from 'zod';
+
+export const ASSET_FORMATS = ['svg', 'png', 'jpeg', 'webp', 'pdf', 'woff2', 'woff', 'ttf', 'otf', 'zip'] as const;
+export type AssetFormat = (typeof ASSET_FORMATS)[number];
+
+/** What an asset is for: logos get every rendition, images get web sizes, the rest are served as uploaded. */
+export const ASSET_KINDS = ['logo', 'image', 'document', 'font', 'archive'] as const;
+export type AssetKind = (typeof ASSET_KINDS)[number];
+
+export const ASSET_STATES = ['draft', 'approved', 'retired'] as const;
+export type AssetState = (typeof ASSET_STATES)[number];
+
+export const STATE_LABELS: Record<AssetState, { label: string; summary: string }> = {
+  draft: { label: 'Draft', summary: 'visible to the studio and reviewers only' },
+  approved: { label: 'Approved', summary: 'on the shelf for partners and download-enabled share links' },
+  retired: { label: 'Retired', summary: 'kept for the record, no longer handed out' },
+};
+
+/** Allowed moves: draft → approved → retired, retired → approved again, and back to draft from anywhere. */
+export function canMoveState(from: AssetState, to: AssetState): boolean {
+  if (from === to) return true;
+  if (to === 'draft') return true;
+  if (to === 'approved') return from === 'draft' || from === 'retired';
+  return from === 'approved';
+}
+
+export const FORMAT_INFO: Record<AssetFormat, { mime: string; ext: string; kind: AssetKind; label: string }> = {
+  svg: { mime: 'image/svg+xml', ext: 'svg', kind: 'logo', label: 'SVG' },
+  png: { mime: 'image/png', ext: 'png', kind: 'image', label: 'PNG' },
+  jpeg: { mime: 'image/jpeg', ext: 'jpg', kind: 'image', label: 'JPEG' },
+  webp: { mime: 'image/webp', ext: 'webp', kind: 'image', label: 'WebP' },
+  pdf: { mime: 'application/pdf', ext: 'pdf', kind: 'document', label: 'PDF' },
+  woff2: { mime: 'font/woff2', ext: 'woff2', kind: 'font', label: 'WOFF2' },
+  woff: { mime: 'font/woff', ext: 'woff', kind: 'font', label: 'WOFF' },
+  ttf: { mime: 'font/ttf', ext: 'ttf', kind: 'font', label: 'TrueType' },
+  otf: { mime: 'font/otf', ext: 'otf', kind: 'font', label: 'OpenType' },
+  zip: { mime: 'application/zip', ext: 'zip', kind: 'archive', label: 'ZIP' },
+};
+
+/** Filename extensions that honestly name each format (a PNG called .svg is refused). */
+export const EXTENSIONS: Record<AssetFormat, string[]> = {
+  svg: ['svg'],
+  png: ['png'],
+  jpeg: ['jpg', 'jpeg', 'jpe'],
+  webp: ['webp'],
+  pdf: ['pdf'],
+  woff2: ['woff2'],
+  woff: ['woff'],
+  ttf: ['ttf'],
+  otf: ['otf'],
+  zip: ['zip'],
+};
+
+export const ACCEPT_ATTRIBUTE = Object.values(EXTENSIONS).flat().map((e) => `.${e}`).join(',');
+
+export const MAX_ASSET_BYTES = 25 * 1024 * 1024;
+export const MAX_FILES_PER_UPLOAD = 20;
+/** Images above this many pixels are refused before they are decoded (decompression bombs). */
+export const MAX_IMAGE_PIXELS = 60_000_000;
+
+export const RENDITION_FORMATS = ['original', 'svg', 'png', 'jpg', 'webp', 'ico', 'tiff'] as const;
+export type RenditionFormat = (typeof RENDITION_FORMATS)[number];
+export const RENDITION_VARIANTS = ['original', 'black', 'white', 'reversed', 'one-colour'] as const;
+export type RenditionVariant = (typeof RENDITION_VARIANTS)[number];
+export const RENDITION_PRESETS = ['favicon', 'apple-touch', 'app-icon-192', 'app-icon-512', 'social-avatar', 'print'] as const;
+export type RenditionPreset = (typeof RENDITION_PRESETS)[number];
+
+export const MIN_WIDTH = 16;
+export const MAX_WIDTH = 8000;
+/** Sizes inside the favicon ICO (common practice: 16 and 32 for tabs, 48 for desktop shortcuts). */
+export const FAVICON_SIZES = [16, 32, 48] as const;
+
+export const PRESET_INFO: Record<RenditionPreset, { label: string; hint: string }> = {
+  favicon: { label: 'Favicon (ICO 16/32/48)', hint: 'one .ico file holding 16, 32 and 48 px squares' },
+  'apple-touch': { label: 'Home-screen icon 180 px', hint: '180 × 180 PNG on a solid background' },
+  'app-icon-192': { label: 'App icon 192 px', hint: '192 × 192 PNG, transparent' },
+  'app-icon-512': { label: 'App icon 512 px', hint: '512 × 512 PNG, transparent' },
+  'social-avatar': { label: 'Social avatar', hint: 'a square with the clear space kept around the logo' },
+  print: { label: 'Print (CMYK TIFF)', hint: 'CMYK with an embedded profile; proof with your printer' },
+};
+
+const hexish = z.string().trim().min(1).max(60);
+
+/** The query of a file request, validated once for the endpoint, the bundle and the benchmark. */
+export const renditionQuerySchema = z.strictObject({
+  format: z.enum(RENDITION_FORMATS).optional(),
+  width: z.coerce
+    .number({ message: 'width must be a number of pixels' })
+    .int('width must be a whole number of pixels')
+    .min(MIN_WIDTH, `width must be at least ${MIN_WIDTH} px`)
+    .max(MAX_WIDTH, `width must be at most ${MAX_WIDTH} px`)
+    .optional(),
+  background: hexish.optional(),
+  variant: z.enum(RENDITION_VARIANTS).optional(),
+  color: hexish.optional(),
+  preset: z.enum(RENDITION_PRESETS).optional(),
+  colorSpace: z.enum(['rgb', 'cmyk']).optional(),
+  download: z.enum(['0', '1']).optional(),
+  /** The shelf's own thumbnails: small PNGs only, and not written to the download log. */
+  preview: z.enum(['1']).optional(),
+});
+
+/** The largest thumbnail the shelf asks for without logging a download. */
+export const PREVIEW_MAX_WIDTH = 480;
+export type RenditionQuery = z.infer<typeof renditionQuerySchema>;
+
+/** A fully resolved rendition request: what the renderer draws, and what the cache key is made of. */
+export interface RenditionParams {
+  format: Exclude<RenditionFormat, 'original'> | 'original';
+  width: number | null;
+  /** A square canvas of `width` px (icons, avatars). */
+  square: boolean;
+  /** Fraction of the square kept free on each side (icons and avatars). */
+  padding: number;
+  /** '#rrggbb' or null for transparent. */
+  background: string | null;
+  variant: RenditionVariant;
+  /** Ink for one-colour, field colour for reversed. */
+  color: string | null;
+  colorSpace: 'rgb' | 'cmyk';
+  /** Only for ICO: the sizes inside. */
+  sizes: number[] | null;
+}
+
+/** The twelve renditions the shelf offers for every logo (the benchmark and the bundle draw from this list). */
+export const STANDARD_RENDITIONS: { name: string; query: RenditionQuery }[] = [
+  { name: 'png-512', query: { format: 'png', width: 512 } },
+  { name: 'png-2048', query: { format: 'png', width: 2048 } },
+  { name: 'jpg-1024-white', query: { format: 'jpg', width: 1024, background: '#ffffff' } },
+  { name: 'webp-1024', query: { format: 'webp', width: 1024 } },
+  { name: 'black-512', query: { format: 'png', width: 512, variant: 'black' } },
+  { name: 'white-512', query: { format: 'png', width: 512, variant: 'white' } },
+  { name: 'favicon', query: { preset: 'favicon' } },
+  { name: 'apple-touch-180', query: { preset: 'apple-touch' } },
+  { name: 'app-icon-192', query: { preset: 'app-icon-192' } },
+  { name: 'app-icon-512', query: { preset: 'app-icon-512' } },
+  { name: 'social-avatar-800', query: { preset: 'social-avatar', width: 800 } },
+  { name: 'print-cmyk-2048', query: { preset: 'print', width: 2048 } },
+];
+
+/** The file extension and media type a rendition is served with. */
+export function renditionType(format: RenditionParams['format'], original: AssetFormat): { ext: string; mime: string } {
+  switch (format) {
+    case 'original':
+      return { ext: FORMAT_INFO[original].ext, mime: FORMAT_INFO[original].mime };
+    case 'svg':
+      return { ext: 'svg', mime: 'image/svg+xml' };
+    case 'png':
+      return { ext: 'png', mime: 'image/png' };
+    case 'jpg':
+      return { ext: 'jpg', mime: 'image/jpeg' };
+    case 'webp':
+      return { ext: 'webp', mime: 'image/webp' };
+    case 'ico':
+      return { ext: 'ico', mime: 'image/x-icon' };
+    case 'tiff':
+      return { ext: 'tif', mime: 'image/tiff' };
+  }
+}
+
+/** A readable download name: brand-asset-variant-width.ext, safe for every file system. */
+export function renditionFilename(brandSlug: string, assetName: string, params: RenditionParams, original: AssetFormat): string {
+  const slug = (s: string) => s.toLowerCase().normalize('NFKD').replace(/[^\w]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 60) || 'asset';
+  const parts = [slug(brandSlug), slug(assetName)];
+  if (params.variant !== 'original') parts.push(params.variant);
+  if (params.format === 'ico') parts.push('favicon');
+  else if (params.width) parts.push(params.square ? `${params.width}x${params.width}` : `${params.width}w`);
+  if (params.colorSpace === 'cmyk') parts.push('cmyk');
+  return `${parts.join('-')}.${renditionType(params.format, original).ext}`;
+}

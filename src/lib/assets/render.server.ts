@@ -1,0 +1,192 @@
+// Draws one rendition of a logo or image with sharp, and caches it under a key made of the asset and its parameters.
+// No astro:env here: the benchmark and the app share this code, each with its own store.
+import { createHash } from 'node:crypto';
+import sharp, { type Sharp } from 'sharp';
+import { encode as encodeIco } from 'sharp-ico';
+import { recolorSvg } from '../logo/recolor';
+import { toSanitizedSvg } from '../logo/sanitize';
+import type { Box } from '../logo/geometry';
+import type { FileStorage } from '../storage/storage';
+import { MAX_IMAGE_PIXELS, renditionType, type AssetFormat, type RenditionParams } from './kinds';
+import { paramsText } from './renditions';
+
+export interface RenditionSource {
+  id: string;
+  brandId: string;
+  bytes: Buffer;
+  format: AssetFormat;
+  /** Drawn (non-transparent) area as fractions of the canvas; null for the whole canvas. */
+  drawnBounds: Box | null;
+}
+
+export interface Rendition {
+  body: Buffer;
+  mime: string;
+  ext: string;
+}
+
+const TRANSPARENT = { r: 0, g: 0, b: 0, alpha: 0 };
+/** Default width of a raster drawn from an SVG when none is asked for. */
+const DEFAULT_SVG_WIDTH = 1024;
+/** Clear space of an avatar: a quarter of the logo's drawn height on each side (the identity's default unit, common practice). */
+const CLEAR_SPACE_OF_HEIGHT = 0.25;
+
+const rgba = (hex: string | null) => (hex ? hex : TRANSPARENT);
+
+const svgMemo = new Map<string, { text: string; width: number; height: number }>();
+
+/** The SVG text with the variant painted in, plus its intrinsic size; memoised, as sanitising costs more than drawing small icons. */
+function svgFor(bytes: Buffer, params: RenditionParams): { text: string; width: number; height: number } {
+  const memoKey = `${createHash('sha1').update(bytes).digest('hex')}|${params.variant}|${params.color ?? ''}`;
+  const known = svgMemo.get(memoKey);
+  if (known) return known;
+  const clean = toSanitizedSvg(bytes.toString('utf8'));
+  const text = params.variant === 'original' ? clean.svg : recolorSvg(clean.svg, params.variant, params.color ?? undefined);
+  const made = { text, width: clean.width, height: clean.height };
+  svgMemo.set(memoKey, made);
+  if (svgMemo.size > 200) svgMemo.delete(svgMemo.keys().next().value!);
+  return made;
+}
+
+/** A one-ink raster from a raster logo: its alpha kept, every pixel filled with the ink (reversed: white on a field). */
+async function recolouredRaster(bytes: Buffer, params: RenditionParams): Promise<Buffer> {
+  const img = sharp(bytes, { limitInputPixels: MAX_IMAGE_PIXELS });
+  const { width = 1, height = 1 } = await img.metadata();
+  const ink = params.variant === 'black' ? '#000000' : params.variant === 'one-colour' ? params.color! : '#ffffff';
+  const alpha = await sharp(bytes, { limitInputPixels: MAX_IMAGE_PIXELS }).ensureAlpha().extractChannel(3).toBuffer();
+  const marks = await sharp({ create: { width, height, channels: 3, background: ink } }).joinChannel(alpha).png().toBuffer();
+  if (params.variant !== 'reversed') return marks;
+  return sharp({ create: { width, height, channels: 4, background: params.color ?? '#000000' } }).composite([{ input: marks }]).png().toBuffer();
+}
+
+/**
+ * A sharp pipeline that draws the source so that `drawWidth` px covers `box` (fractions of the canvas, or all of it):
+ * SVGs at the density that gives that width directly, rasters from their pixels.
+ */
+async function drawn(source: RenditionSource, params: RenditionParams, contentWidth: number | null, box: Box | null): Promise<{ img: Sharp; width: number; height: number }> {
+  const crop = box ?? { x: 0, y: 0, width: 1, height: 1 };
+  if (source.format === 'svg') {
+    const svg = svgFor(source.bytes, params);
+    const canvasWidth = (contentWidth ?? DEFAULT_SVG_WIDTH) / crop.width;
+    const density = Math.min(100_000, Math.max(1, (72 * canvasWidth) / svg.width));
+    let img = sharp(Buffer.from(svg.text), { density, limitInputPixels: MAX_IMAGE_PIXELS });
+    // Floor, so a crop never reaches past what libvips draws; the final resize sets the exact size.
+    const w = Math.max(1, Math.floor((svg.width * density) / 72));
+    const h = Math.max(1, Math.floor((svg.height * density) / 72));
+    if (box) {
+      const left = Math.min(w - 1, Math.floor(box.x * w));
+      const top = Math.min(h - 1, Math.floor(box.y * h));
+      const width = Math.max(1, Math.min(w - left, Math.ceil(box.width * w)));
+      const height = Math.max(1, Math.min(h - top, Math.ceil(box.height * h)));
+      img = img.extract({ left, top, width, height });
+      return { img, width, height };
+    }
+    return { img, width: w, height: h };
+  }
+  const bytes = params.variant === 'original' ? source.bytes : await recolouredRaster(source.bytes, params);
+  let img = sharp(bytes, { limitInputPixels: MAX_IMAGE_PIXELS });
+  const meta = await img.metadata();
+  const w = meta.width ?? 1;
+  const h = meta.height ?? 1;
+  if (box) {
+    const left = Math.min(w - 1, Math.floor(box.x * w));
+    const top = Math.min(h - 1, Math.floor(box.y * h));
+    const width = Math.max(1, Math.min(w - left, Math.ceil(box.width * w)));
+    const height = Math.max(1, Math.min(h - top, Math.ceil(box.height * h)));
+    img = img.extract({ left, top, width, height });
+    return { img, width, height };
+  }
+  return { img, width: w, height: h };
+}
+
+/** A square of `size` px with the drawing centred inside `inner` px (or inside its clear space). */
+async function square(source: RenditionSource, params: RenditionParams, size: number): Promise<Sharp> {
+  const clearSpace = params.padding < 0;
+  const box = clearSpace ? source.drawnBounds : null;
+  // The aspect of what is drawn decides the content box: first a cheap look at the proportions.
+  const probe = await drawn(source, params, 64, box);
+  const aspect = probe.width / probe.height;
+  let cw: number;
+  let ch: number;
+  if (clearSpace) {
+    const margin = CLEAR_SPACE_OF_HEIGHT;
+    const scale = size / Math.max(aspect + 2 * margin, 1 + 2 * margin);
+    cw = Math.max(1, Math.round(aspect * scale));
+    ch = Math.max(1, Math.round(scale));
+  } else {
+    const inner = Math.max(1, Math.round(size * (1 - 2 * params.padding)));
+    cw = aspect >= 1 ? inner : Math.max(1, Math.round(inner * aspect));
+    ch = aspect >= 1 ? Math.max(1, Math.round(inner / aspect)) : inner;
+  }
+  const { img } = await drawn(source, params, cw, box);
+  const left = Math.floor((size - cw) / 2);
+  const top = Math.floor((size - ch) / 2);
+  const background = rgba(params.background);
+  return img
+    .resize({ width: cw, height: ch, fit: 'fill' })
+    .extend({ left, right: size - cw - left, top, bottom: size - ch - top, background });
+}
+
+/** The pipeline's output format, with the CMYK profile embedded for print. */
+function encodeAs(img: Sharp, params: RenditionParams): Sharp {
+  if (params.background) img = img.flatten({ background: params.background });
+  if (params.colorSpace === 'cmyk') img = img.withIccProfile('cmyk');
+  switch (params.format) {
+    case 'jpg':
+      return img.jpeg({ quality: 90 });
+    case 'webp':
+      return img.webp({ quality: 90 });
+    case 'tiff':
+      return img.tiff({ compression: 'lzw' });
+    default:
+      return img.png();
+  }
+}
+
+/** Draw one rendition (no cache). */
+export async function renderRendition(source: RenditionSource, params: RenditionParams): Promise<Rendition> {
+  const type = renditionType(params.format, source.format);
+  if (params.format === 'original') return { body: source.bytes, ...type };
+  if (params.format === 'svg') {
+    let text = svgFor(source.bytes, params).text;
+    if (params.background) {
+      const { viewBox } = toSanitizedSvg(text);
+      text = text.replace(/^(<svg\b[^>]*>)/i, `$1<rect data-role="background" x="${viewBox.x}" y="${viewBox.y}" width="${viewBox.width}" height="${viewBox.height}" fill="${params.background}"/>`);
+    }
+    return { body: Buffer.from(text), ...type };
+  }
+  if (params.format === 'ico') {
+    const pngs = await Promise.all((params.sizes ?? []).map(async (s) => (await square(source, { ...params, format: 'png' }, s)).png().toBuffer()));
+    return { body: encodeIco(pngs), ...type };
+  }
+  if (params.square) return { body: await encodeAs(await square(source, params, params.width!), params).toBuffer(), ...type };
+  const { img, width } = await drawn(source, params, params.width, null);
+  const target = params.width ?? width;
+  return { body: await encodeAs(img.resize({ width: target }), params).toBuffer(), ...type };
+}
+
+/** Where a rendition is kept: a key derived from the asset and the parameters, in the storage's own key shape. */
+export function renditionKey(source: { id: string; brandId: string }, params: RenditionParams): { key: string; paramsKey: string } {
+  const hash = createHash('sha256').update(`${source.id}\n${paramsText(params)}`).digest('hex');
+  const uuidish = `${hash.slice(0, 8)}-${hash.slice(8, 12)}-${hash.slice(12, 16)}-${hash.slice(16, 20)}-${hash.slice(20, 32)}`;
+  const ext = renditionType(params.format, 'png').ext;
+  return { key: `${source.brandId}/rendition/${uuidish}.${ext}`, paramsKey: hash };
+}
+
+/** A rendition from the store when it was made before, otherwise drawn and stored; `onStored` indexes new ones. */
+export async function cachedRendition(
+  store: FileStorage,
+  source: Omit<RenditionSource, 'bytes'> & { bytes: () => Promise<Buffer> },
+  params: RenditionParams,
+  onStored?: (entry: { key: string; paramsKey: string; mime: string; size: number }) => Promise<void>,
+): Promise<Rendition & { cached: boolean }> {
+  const type = renditionType(params.format, source.format);
+  if (params.format === 'original') return { body: await source.bytes(), ...type, cached: true };
+  const { key, paramsKey } = renditionKey(source, params);
+  const hit = await store.get(key);
+  if (hit) return { body: hit, ...type, cached: true };
+  const made = await renderRendition({ ...source, bytes: await source.bytes() }, params);
+  await store.put(key, made.body, made.mime);
+  await onStored?.({ key, paramsKey, mime: made.mime, size: made.body.length });
+  return { ...made, cached: false };
+}

@@ -1,0 +1,88 @@
+// Turns a file request (format, width, preset, variant…) into one fully resolved rendition, or a plain-worded refusal.
+import { parseColor } from '../color/parse';
+import { FAVICON_SIZES, type AssetFormat, type AssetKind, type RenditionParams, type RenditionQuery } from './kinds';
+
+export class RenditionError extends Error {
+  constructor(
+    readonly code: string,
+    message: string,
+  ) {
+    super(message);
+  }
+}
+
+const RASTER_SOURCES: AssetFormat[] = ['svg', 'png', 'jpeg', 'webp'];
+
+/** '#rrggbb' for a typed colour, null for "transparent", or a refusal naming the field. */
+function colour(value: string | undefined, field: string): string | null | undefined {
+  if (value === undefined) return undefined;
+  if (/^(transparent|none)$/i.test(value.trim())) return null;
+  const parsed = parseColor(value);
+  if (!parsed.ok) throw new RenditionError('invalid_color', `${field}: ${parsed.error.message}`);
+  return parsed.color.hex.slice(0, 7).toLowerCase();
+}
+
+/** Resolve a request against an asset; presets fix sizes, the rest is checked for sense (no SVG from a photo, no transparent JPEG). */
+export function resolveRendition(query: RenditionQuery, asset: { kind: AssetKind; format: AssetFormat }): RenditionParams {
+  const background = colour(query.background, 'background');
+  const color = colour(query.color, 'color') ?? null;
+  const variant = query.variant ?? 'original';
+  const wantsWork = query.preset || query.width || (query.format && query.format !== 'original') || variant !== 'original' || query.colorSpace;
+  const base: RenditionParams = { format: 'original', width: null, square: false, padding: 0, background: null, variant, color, colorSpace: 'rgb', sizes: null };
+  if (!wantsWork) {
+    if (background !== undefined) throw new RenditionError('invalid_input', 'A background needs a rendered format (png, jpg, webp or tiff).');
+    return base;
+  }
+  if (query.format === 'original') throw new RenditionError('invalid_input', 'The original file is served as uploaded: drop width, variant and preset, or choose another format.');
+  if (!RASTER_SOURCES.includes(asset.format)) {
+    throw new RenditionError('no_renditions', `A ${asset.format.toUpperCase()} file is served as uploaded; renditions are made from logos and images only.`);
+  }
+  if (variant !== 'original' && asset.kind !== 'logo') {
+    throw new RenditionError('invalid_input', 'Black, white, reversed and one-colour versions are made from logos only.');
+  }
+  if (variant === 'one-colour' && !color) throw new RenditionError('invalid_input', 'A one-colour version needs its ink: add color=#rrggbb.');
+
+  let params: RenditionParams;
+  switch (query.preset) {
+    case 'favicon':
+      params = { ...base, format: 'ico', square: true, padding: 0, sizes: [...FAVICON_SIZES], background: background ?? null };
+      break;
+    case 'apple-touch':
+      // Home-screen icons are shown on an opaque tile (common practice): white unless a background is chosen.
+      params = { ...base, format: 'png', width: 180, square: true, padding: 0.1, background: background ?? '#ffffff' };
+      break;
+    case 'app-icon-192':
+    case 'app-icon-512':
+      params = { ...base, format: 'png', width: query.preset === 'app-icon-192' ? 192 : 512, square: true, padding: 0.05, background: background ?? null };
+      break;
+    case 'social-avatar':
+      // padding -1 marks "the logo's clear space" rather than a fixed fraction.
+      params = { ...base, format: query.format === 'jpg' ? 'jpg' : 'png', width: query.width ?? 800, square: true, padding: -1, background: background ?? '#ffffff' };
+      break;
+    case 'print':
+      params = { ...base, format: query.format === 'jpg' ? 'jpg' : 'tiff', width: query.width ?? 2048, colorSpace: 'cmyk', background: background ?? '#ffffff' };
+      break;
+    default: {
+      const format = query.format ?? 'png';
+      if (format === 'svg') {
+        if (asset.format !== 'svg') throw new RenditionError('svg_from_raster', 'An SVG can only be made from an SVG original; this asset is a raster image.');
+        if (query.width || query.colorSpace) throw new RenditionError('invalid_input', 'An SVG scales to any size: drop width and colorSpace.');
+        return { ...base, format: 'svg', background: background ?? null };
+      }
+      if (format === 'ico') return resolveRendition({ ...query, preset: 'favicon' }, asset);
+      const opaque = format === 'jpg' || format === 'tiff';
+      if (opaque && background === null) throw new RenditionError('invalid_input', `${format.toUpperCase()} has no transparency: choose a background colour.`);
+      params = { ...base, format, width: query.width ?? null, background: opaque ? (background ?? '#ffffff') : (background ?? null), colorSpace: query.colorSpace ?? (format === 'tiff' ? 'cmyk' : 'rgb') };
+    }
+  }
+  if (params.colorSpace === 'cmyk' && params.format !== 'jpg' && params.format !== 'tiff') {
+    throw new RenditionError('invalid_input', 'CMYK is for print files: choose format=tiff or format=jpg.');
+  }
+  return params;
+}
+
+/** The canonical text of resolved parameters, the part of the cache key that is not the asset. */
+export function paramsText(params: RenditionParams): string {
+  const keys = Object.keys(params).sort() as (keyof RenditionParams)[];
+  return JSON.stringify(keys.map((k) => [k, params[k]]));
+}

@@ -1,0 +1,46 @@
+// Request shapes of the asset routes, checked once at the boundary.
+import { z } from 'zod';
+import { ASSET_KINDS, ASSET_STATES } from './kinds';
+
+const text = (max: number) => z.string().trim().max(max, `at most ${max} characters`);
+
+export const assetPatchSchema = z.strictObject({
+  state: z.enum(ASSET_STATES).optional(),
+  tags: z.array(text(40).min(1, 'a tag cannot be empty')).max(30, 'at most 30 tags').optional(),
+  description: text(2000).nullable().optional(),
+  usageNotes: text(2000).nullable().optional(),
+  name: text(160).min(1, 'a name is needed').optional(),
+  kind: z.enum(['logo', 'image']).optional(),
+});
+
+export const assetListQuerySchema = z.strictObject({
+  state: z.enum(ASSET_STATES).optional(),
+  tag: text(40).min(1).optional(),
+  kind: z.enum(ASSET_KINDS).optional(),
+});
+
+export const uploadFieldsSchema = z.strictObject({ kind: z.enum(['logo', 'image']).optional() });
+
+export const bundleSchema = z
+  .strictObject({
+    assetIds: z.array(z.uuid('each asset id must be a uuid')).max(100, 'at most 100 assets').optional(),
+    allLogos: z.boolean().optional(),
+  })
+  .refine((b) => b.allLogos === true || (b.assetIds?.length ?? 0) > 0, { message: 'choose assetIds or set allLogos to true', path: ['assetIds'] });
+
+const day = z.iso.date('use a date like 2026-12-01').transform((d) => new Date(`${d}T00:00:00Z`));
+
+export const downloadLogQuerySchema = z.strictObject({
+  kind: z.enum(['file', 'bundle']).optional(),
+  assetId: z.uuid().optional(),
+  userId: text(100).min(1).optional(),
+  via: z.enum(['member', 'share-link']).optional(),
+  from: day.optional(),
+  /** Inclusive: downloads on this day count. */
+  to: day.transform((d) => new Date(d.getTime() + 86_400_000)).optional(),
+  limit: z.coerce.number().int().min(1).max(5000).default(500),
+  format: z.enum(['json', 'csv']).default('json'),
+});
+
+/** A URL's query as a plain object for a schema (repeated keys: the last wins). */
+export const queryObject = (url: URL) => Object.fromEntries(url.searchParams.entries());

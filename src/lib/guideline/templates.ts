@@ -1,0 +1,129 @@
+// Starter templates: documents whose identity references are placeholders, resolved against one brand's identity.
+import * as z from 'zod';
+import type { ColorRole, Identity } from '../identity/types';
+import { COLOR_ROLES } from '../identity/types';
+import { validateGuideline, type GuidelineDoc } from './document';
+import { newBlockId } from './ids';
+import { colorForRole, colorsInOrder, extremes, logosInOrder, markLogo, primaryLogo } from './identity';
+import type { ContrastPair } from './blocks/contrastPairs';
+
+/**
+ * Placeholders: colour fields take "$all" (in a list) or a role ("$primary", "$text", "$background", …);
+ * logo fields take "$all", "$primary" or "$mark"; contrast pairs take "$suggested". Anything unresolvable
+ * becomes null (single) or is dropped (lists), so the block shows its empty state.
+ */
+export const templateSchema = z.strictObject({
+  name: z.string().min(1).max(120),
+  description: z.string().max(500),
+  doc: z.strictObject({ type: z.literal('doc'), content: z.array(z.looseObject({ type: z.string() })).max(2000) }),
+});
+export type GuidelineTemplate = z.output<typeof templateSchema>;
+
+export class TemplateError extends Error {
+  constructor(
+    readonly path: string,
+    message: string,
+  ) {
+    super(`${path}: ${message}`);
+  }
+}
+
+const COLOR_KEY = /(colou?rIds?|^foreground|^background)$/i;
+const LOGO_KEY = /logoIds?$/i;
+
+/** Pairs worth checking first: text on the ground, each key colour on the lightest colour, the lightest on the primary. */
+export function suggestedPairs(identity: Identity): ContrastPair[] {
+  const { lightest } = extremes(identity);
+  const text = colorForRole(identity, 'text');
+  const ground = colorForRole(identity, 'background');
+  const primary = colorForRole(identity, 'primary');
+  const candidates: [string | undefined, string | undefined][] = [[text?.id, ground?.id]];
+  for (const c of colorsInOrder(identity)) {
+    if (c.role === 'primary' || c.role === 'secondary' || c.role === 'accent') candidates.push([c.id, lightest?.id]);
+  }
+  candidates.push([lightest?.id, primary?.id]);
+  const seen = new Set<string>();
+  const pairs: ContrastPair[] = [];
+  for (const [foreground, background] of candidates) {
+    if (!foreground || !background || foreground === background || seen.has(`${foreground}/${background}`)) continue;
+    seen.add(`${foreground}/${background}`);
+    pairs.push({ foreground, background });
+  }
+  return pairs.slice(0, 8);
+}
+
+function resolveColor(identity: Identity, token: string, path: string): string | null {
+  const role = token.slice(1);
+  if (!(COLOR_ROLES as readonly string[]).includes(role)) {
+    throw new TemplateError(path, `Unknown colour placeholder "${token}"; use "$all" or one of ${COLOR_ROLES.map((r) => `$${r}`).join(', ')}.`);
+  }
+  return colorForRole(identity, role as ColorRole)?.id ?? null;
+}
+
+function resolveLogo(identity: Identity, token: string, path: string): string | null {
+  if (token === '$primary') return primaryLogo(identity)?.id ?? null;
+  if (token === '$mark') return markLogo(identity)?.id ?? null;
+  throw new TemplateError(path, `Unknown logo placeholder "${token}"; use "$all", "$primary" or "$mark".`);
+}
+
+function resolveValue(identity: Identity, key: string, value: unknown, path: string): unknown {
+  if (key === 'pairs' && value === '$suggested') return suggestedPairs(identity);
+  const isColor = COLOR_KEY.test(key);
+  const isLogo = LOGO_KEY.test(key);
+  if (Array.isArray(value)) {
+    if (!isColor && !isLogo) return value.map((item, i) => resolveValue(identity, key, item, `${path}.${i}`));
+    const out: unknown[] = [];
+    value.forEach((item, i) => {
+      if (item === '$all') out.push(...(isColor ? colorsInOrder(identity) : logosInOrder(identity)).map((x) => x.id));
+      else {
+        const resolved = resolveValue(identity, key, item, `${path}.${i}`);
+        if (resolved !== null) out.push(resolved);
+      }
+    });
+    return [...new Set(out)];
+  }
+  if (typeof value === 'string' && value.startsWith('$')) {
+    if (isColor) return resolveColor(identity, value, path);
+    if (isLogo) return resolveLogo(identity, value, path);
+    throw new TemplateError(path, `"${value}" is a placeholder, but "${key}" takes no identity reference.`);
+  }
+  if (value && typeof value === 'object') {
+    const obj = value as Record<string, unknown>;
+    const resolved = Object.fromEntries(Object.entries(obj).map(([k, v]) => [k, resolveValue(identity, k, v, `${path}.${k}`)]));
+    // A contrast pair with a side that did not resolve is dropped by the caller.
+    return 'foreground' in obj && (resolved.foreground === null || resolved.background === null) ? null : resolved;
+  }
+  return value;
+}
+
+/** Resolves a template's placeholders against an identity, gives every block a fresh id, and validates the result. */
+export function instantiateTemplate(template: unknown, identity: Identity): GuidelineDoc {
+  const parsed = templateSchema.safeParse(template);
+  if (!parsed.success) {
+    const issue = parsed.error.issues[0];
+    throw new TemplateError(issue.path.join('.') || '(template)', issue.message);
+  }
+  const content = parsed.data.doc.content.map((node, i) => {
+    const attrs = (node.attrs ?? {}) as Record<string, unknown>;
+    const resolved = Object.fromEntries(
+      Object.entries(attrs).map(([key, value]) => {
+        const out = resolveValue(identity, key, value, `doc.content.${i}.attrs.${key}`);
+        return [key, Array.isArray(out) ? out.filter((x) => x !== null) : out];
+      }),
+    );
+    return { ...node, attrs: { ...resolved, id: newBlockId() } };
+  });
+  const result = validateGuideline({ type: 'doc', content });
+  if (!result.ok) throw new TemplateError(result.error.path, result.error.message);
+  return result.doc;
+}
+
+/** Attributes for a newly inserted block: its registry starter resolved against the identity. */
+export function starterAttrs(starter: Record<string, unknown>, identity: Identity): Record<string, unknown> {
+  return Object.fromEntries(
+    Object.entries(starter).map(([key, value]) => {
+      const out = resolveValue(identity, key, value, key);
+      return [key, Array.isArray(out) ? out.filter((x) => x !== null) : out];
+    }),
+  );
+}

@@ -1,0 +1,17 @@
+// Link tokens for people without an account: 32 random bytes in the link, only the SHA-256 hash stored.
+import { randomBytes } from 'node:crypto';
+import { hashToken } from '../brands/brands.server';
+
+export { hashToken };
+
+/** A fresh token and the hash to store. */
+export function newToken(): { token: string; hash: string } {
+  const token = randomBytes(32).toString('base64url');
+  return { token, hash: hashToken(token) };
+}
+
+/** Whether a path segment could be one of our tokens (43 base64url characters); anything else names nothing. */
+export const looksLikeToken = (value: string | undefined): value is string => !!value && /^[A-Za-z0-9_-]{43}$/.test(value);
+
+/** A date as people read it in an e-mail, e.g. "14 December 2026". */
+export const longDate = (d: Date) => d.toLocaleDateString('en-GB', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });

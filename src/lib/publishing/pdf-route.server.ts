@@ -1,0 +1,53 @@
+// The PDF address of a version: the file when ready, otherwise a progress page (or JSON) that waits for it.
+import type { APIContext } from 'astro';
+import { simplePage, siteAccess } from './site-access.server';
+import { PAPER_SIZES, versionPdf, type PaperSize } from './pdf.server';
+
+/** Answer GET …/guideline.pdf?size=a4|letter for the version `number` (latest when null). */
+export async function pdfResponse(context: APIContext, number: number | null): Promise<Response> {
+  const access = await siteAccess(context, context.params.slug!, number);
+  if (access instanceof Response) return access;
+  const size = (context.url.searchParams.get('size') ?? 'a4').toLowerCase();
+  if (!PAPER_SIZES.includes(size as PaperSize)) {
+    return Response.json({ error: { code: 'invalid_input', message: 'Choose a paper size: a4 or letter.' } }, { status: 400 });
+  }
+  const wantsJson = (context.request.headers.get('accept') ?? '').includes('application/json');
+  let result;
+  try {
+    result = await versionPdf(access.version, size as PaperSize);
+  } catch (err) {
+    return Response.json({ error: { code: 'pdf_unavailable', message: (err as Error).message } }, { status: 503 });
+  }
+  if ('pdf' in result) {
+    return new Response(new Uint8Array(result.pdf), {
+      headers: {
+        'content-type': 'application/pdf',
+        'content-disposition': `inline; filename="${access.brand.slug}-guidelines-v${access.version.number}-${size}.pdf"`,
+        'cache-control': 'private, max-age=3600',
+      },
+    });
+  }
+  const { status } = result;
+  if (wantsJson) return Response.json(status, { status: status.state === 'failed' ? 500 : 202 });
+  if (status.state === 'failed') return simplePage(500, 'The PDF could not be made', `Plumbline could not print this version: ${status.error ?? 'unknown error'}. Try again in a minute.`);
+  return new Response(progressPage(access.brand.name, access.version.number, size), {
+    status: 202,
+    headers: { 'content-type': 'text/html; charset=utf-8', 'cache-control': 'no-store' },
+  });
+}
+
+const progressPage = (brand: string, number: number, size: string) => `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1">
+<title>Preparing the PDF</title><style>body{font-family:system-ui,sans-serif;background:#f8f6f2;color:#211e1a;display:grid;place-items:center;min-height:100vh;margin:0}main{max-width:30rem;padding:2rem}progress{width:100%;height:.6rem}p{color:#57514a}</style></head>
+<body><main><h1>Preparing the PDF</h1><p>${brand.replace(/[<&"]/g, '')} guidelines, version ${number}, ${size.toUpperCase()} paper. This takes a few seconds the first time; after that it is ready at once.</p>
+<progress id="bar" max="100" value="5" aria-label="Progress"></progress><p id="state" role="status">Queued…</p></main>
+<script>
+const tick = async () => {
+  const r = await fetch(location.href, { headers: { accept: 'application/json' } });
+  if (r.headers.get('content-type')?.includes('application/pdf')) { location.reload(); return; }
+  const s = await r.json();
+  document.getElementById('bar').value = Math.max(5, s.progress || 0);
+  document.getElementById('state').textContent = s.state === 'failed' ? 'It failed: ' + (s.error || 'unknown error') : s.state === 'rendering' ? 'Printing…' : 'Queued…';
+  if (s.state !== 'failed') setTimeout(tick, 700);
+};
+setTimeout(tick, 500);
+</script></body></html>`;

@@ -1,0 +1,16 @@
+// Request bodies of the review and comment routes.
+import { z } from 'zod';
+import { blockIdSchema } from '../guideline/ids';
+
+export const requestReviewBody = z.strictObject({ message: z.string().max(2000).optional(), reviewerIds: z.array(z.string().min(1).max(100)).min(1).max(50).optional() });
+export const decideReviewBody = z.strictObject({
+  outcome: z.enum(['approved', 'changes_requested'], { error: 'Choose “approve” or “request changes”.' }),
+  note: z.string().max(4000).optional(),
+});
+export const addCommentBody = z.strictObject({
+  blockId: blockIdSchema.optional(),
+  parentId: z.uuid().optional(),
+  reviewId: z.uuid().optional(),
+  body: z.string().trim().min(1, { error: 'Write the comment first.' }).max(4000, { error: 'A comment may hold 4,000 characters.' }),
+});
+export const resolveCommentBody = z.strictObject({ resolved: z.boolean() });

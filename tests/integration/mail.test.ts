@@ -1,0 +1,93 @@
+// E-mail end to end: what the fake SMTP server captured, parsed by mailparser (the reference parser), and the sent-mail list.
+import { simpleParser } from 'mailparser';
+import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { renderMail, renderTemplate } from '../../src/lib/mail/templates';
+import { baseUrl, Client, signUpFresh } from '../support/client';
+import { closeDb } from '../support/db';
+import { lastMailTo, linkIn, mailTo } from '../support/mailbox';
+import { unique } from './matrix/route';
+
+let owner: Client;
+let ownerEmail: string;
+let brandId: string;
+beforeAll(async () => {
+  ({ client: owner, email: ownerEmail } = await signUpFresh('mailer'));
+  brandId = (await owner.post('/api/brands', { name: 'Saltmarsh Ceramics' })).body.brand.id;
+});
+afterAll(closeDb);
+
+describe('templates', () => {
+  test('values are HTML-escaped in the HTML part and left as typed in the text part', () => {
+    expect(renderTemplate('<p>{{name}}</p>', { name: 'Tom & <Jerry>' }, 'html')).toBe('<p>Tom &amp; &lt;Jerry&gt;</p>');
+    expect(renderTemplate('{{name}}', { name: 'Tom & <Jerry>' }, 'text')).toBe('Tom & <Jerry>');
+  });
+  test('a list section repeats per item; a section without {{.}} shows once', () => {
+    expect(renderTemplate('{{#xs}}Changes:{{/xs}}{{#xs}} [{{.}}]{{/xs}}{{^ys}} none{{/ys}}', { xs: ['a', 'b'], ys: [] }, 'text')).toBe('Changes: [a] [b] none');
+  });
+  test('every template renders a subject, a text part and an HTML part holding the link', () => {
+    for (const name of ['invitation', 'brief-request', 'brief-submitted', 'board-request', 'board-decision', 'review-request', 'review-decision', 'published']) {
+      const m = renderMail(name, { link: 'http://127.0.0.1/x/abc', brandName: 'B', summary: ['one'] });
+      expect(m.subject.length, name).toBeGreaterThan(5);
+      expect(m.text, name).toContain('http://127.0.0.1/x/abc');
+      expect(m.html, name).toContain('href="http://127.0.0.1/x/abc"');
+    }
+  });
+});
+
+describe('sending through the fake', () => {
+  test('an invitation reaches the invited address with a From header that parses as an RFC 5322 mailbox', async () => {
+    const invitee = unique();
+    const r = await owner.post(`/api/brands/${brandId}/members`, { email: invitee, role: 'reviewer' });
+    expect(r.status).toBe(201);
+    expect(r.body.mailed).toBe(true);
+    const mail = lastMailTo(invitee);
+    expect(mail.envelope.to).toEqual([invitee]);
+    expect(mail.to).toEqual([invitee]);
+    expect(mail.subject).toBe(`Test mailer invited you to Saltmarsh Ceramics on Plumbline`);
+    // RFC 2606: .invalid is reserved and never resolves, so the default sender cannot reach anyone by accident.
+    expect(mail.from).toBe('mail@plumbline.invalid');
+    expect(mail.brandId).toBe(brandId);
+    expect(mail.html).toContain('Accept the invitation');
+  });
+
+  test('the captured HTML and text agree with mailparser reading a message we build the same way', async () => {
+    // mailparser is the reference: a multipart/alternative message with both parts must come back as both.
+    const m = renderMail('invitation', { brandName: 'Q & A', link: 'http://127.0.0.1/invite/x', email: 'a@b.example' });
+    const raw = `From: a@b.example\r\nTo: c@d.example\r\nSubject: ${m.subject}\r\nMIME-Version: 1.0\r\nContent-Type: multipart/alternative; boundary=zz\r\n\r\n--zz\r\nContent-Type: text/plain; charset=utf-8\r\n\r\n${m.text}\r\n--zz\r\nContent-Type: text/html; charset=utf-8\r\n\r\n${m.html}\r\n--zz--\r\n`;
+    const parsed = await simpleParser(raw);
+    expect(parsed.subject).toBe(m.subject);
+    expect(parsed.text).toContain('Q & A');
+    expect(parsed.html).toContain('Q &amp; A');
+  });
+
+  test('the link in the e-mail is on the configured site and works when followed', async () => {
+    const invitee = unique();
+    await owner.post(`/api/brands/${brandId}/members`, { email: invitee, role: 'viewer' });
+    const { url } = linkIn(lastMailTo(invitee), '/invite/');
+    expect(url.startsWith(baseUrl())).toBe(true);
+    const page = await fetch(url);
+    expect(page.status).toBe(200);
+    expect(await page.text()).toContain('Join Saltmarsh Ceramics as viewer');
+  });
+});
+
+describe('the sent-mail list', () => {
+  test('an owner sees their brands’ mail; a stranger sees none of it; anonymous is refused', async () => {
+    const invitee = unique();
+    await owner.post(`/api/brands/${brandId}/members`, { email: invitee, role: 'viewer' });
+    const mine = await owner.get('/api/mail');
+    expect(mine.status).toBe(200);
+    expect(mine.body.messages.some((m: { envelope: { to: string[] } }) => m.envelope.to.includes(invitee))).toBe(true);
+    const { client: stranger } = await signUpFresh('stranger');
+    const theirs = await stranger.get('/api/mail');
+    expect(theirs.body.messages.some((m: { brandId: string }) => m.brandId === brandId)).toBe(false);
+    expect((await new Client().get('/api/mail')).status).toBe(401);
+    expect(mailTo(ownerEmail).length).toBe(0);
+  });
+
+  test('the sent-mail page shows the captured subject to the owner', async () => {
+    const page = await owner.get('/app/mail');
+    expect(page.status).toBe(200);
+    expect(page.body).toContain('invited you to Saltmarsh Ceramics');
+  });
+});

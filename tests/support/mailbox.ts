@@ -1,0 +1,20 @@
+// Reading what the local fake SMTP server kept (src/lib/mail/fake-smtp.ts), from the test process.
+import { inject } from 'vitest';
+import { listCaptured, type CapturedMail } from '../../src/lib/mail/captured';
+
+/** Every message to `address`, newest first. The app awaits the SMTP reply, so a message exists once its request returned. */
+export const mailTo = (address: string): CapturedMail[] => listCaptured(inject('mailDir'), { to: address });
+
+/** The newest message to `address`, or a clear failure. */
+export function lastMailTo(address: string): CapturedMail {
+  const [mail] = mailTo(address);
+  if (!mail) throw new Error(`no e-mail was captured for ${address}`);
+  return mail;
+}
+
+/** The first link in a message's plain text under `path` (e.g. "/invite/"), and the token after it. */
+export function linkIn(mail: CapturedMail, path: string): { url: string; token: string } {
+  const m = mail.text.match(new RegExp(`https?://[^\\s]+${path.replace(/\//g, '\\/')}([A-Za-z0-9_-]+)`));
+  if (!m) throw new Error(`no ${path} link in "${mail.subject}"`);
+  return { url: m[0], token: m[1] };
+}
