@@ -303,3 +303,4 @@ export function connect(databaseUrl: string, opts: { logging?: boolean } = {}): 
   return sequelize;
 }
 export * from './publishing';
+export * from './assets';

@@ -75,6 +75,13 @@ export async function seedCollaboration(sequelize: Sequelize, people: { designer
       );
       await log('review.request', 'review', review.id, people.editor, { revision });
       await log('review.decide', 'review', review.id, people.reviewer, { outcome: 'changes_requested', revision });
+    }
+
+    // Comments need a draft with blocks; the demo draft may be written after the first seed, so this step repeats until it can run.
+    const review = await ReviewRequest.findOne({ where: { brandId: brand.id }, order: [['createdAt', 'ASC']], transaction });
+    const draft = await GuidelineDraft.findByPk(brand.id, { transaction });
+    const revision = draft?.revision ?? 0;
+    if (review && !(await ReviewComment.count({ where: { brandId: brand.id }, transaction }))) {
       const blocks = (draft?.doc.content ?? []).map((n) => (n as { attrs?: { id?: unknown } }).attrs?.id).filter((x): x is string => typeof x === 'string');
       if (blocks.length) {
         const anchor = blocks[Math.min(1, blocks.length - 1)];
@@ -88,6 +95,10 @@ export async function seedCollaboration(sequelize: Sequelize, people: { designer
       }
     }
 
+    // Timestamps set by Sequelize are "now"; backdate the story so the dates read in order.
+    await sequelize.query(`UPDATE briefs SET created_at = now() - interval '14 days' WHERE brand_id = :b AND created_at > now() - interval '1 hour'`, { replacements: { b: brand.id }, transaction });
+    await sequelize.query(`UPDATE mood_boards SET created_at = now() - interval '11 days' WHERE brand_id = :b AND created_at > now() - interval '1 hour'`, { replacements: { b: brand.id }, transaction });
+    await sequelize.query(`UPDATE review_requests SET created_at = now() - interval '3 days' WHERE brand_id = :b AND created_at > now() - interval '1 hour'`, { replacements: { b: brand.id }, transaction });
     await BrandFollow.findOrCreate({ where: { brandId: brand.id, userId: people.designer }, defaults: { brandId: brand.id, userId: people.designer }, transaction });
   });
 }

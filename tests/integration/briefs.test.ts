@@ -70,7 +70,7 @@ describe('answering without an account', () => {
     const early = await anon.post(`${url()}/submit`, {});
     expect(early.status).toBe(400);
     expect(early.body.error.code).toBe('answers_missing');
-    expect(early.body.error.message).toContain('Which three values');
+    expect(early.body.error.message).toContain('If the brand walked into a room');
     expect(early.body.error.details.map((d: { path: string }) => d.path)).toEqual(expect.arrayContaining(['personality', 'timeline']));
     await anon.request('PUT', url(), { answers: { personality: 'Cheerful mechanic', timeline: 'Before the spring rides', deliverables: ['Logo and mark', 'Signage'], competitors: ['=HYPERLINK("x")'] } });
     const r = await anon.post(`${url()}/submit`, {});

@@ -3,14 +3,14 @@ import { createHash } from 'node:crypto';
 import { readFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import sharp from 'sharp';
-import { Brand, BrandColor, BrandLogo, BrandTypeface } from '../../../db/models';
+import { Asset, Brand, BrandColor, BrandLogo, BrandTypeface } from '../../../db/models';
 import { audit } from '../audit.server';
 import type { Caller } from '../auth/access.server';
 import { colorValues, parseColor } from '../color';
 import { iccCmyk } from '../color/print.server';
 import { sequelize } from '../db.server';
 import { ApiError } from '../http/api';
-import { clearSpace, minimumSize, recolorSvg, sanitizeSvg, type RecolorMode } from '../logo';
+import { clearSpace, minimumSize, recolorSvg, reverseOnGround, sanitizeSvg, type RecolorMode } from '../logo';
 import { drawnBounds } from '../logo/bounds.server';
 import { thinnestStroke } from '../logo/stroke.server';
 import { newKey } from '../storage/storage';
@@ -280,13 +280,16 @@ export async function deleteLogo(caller: Caller, brand: Brand, logoId: string): 
 export type LogoFileVariant = 'original' | Exclude<RecolorMode, 'one-colour'> | 'one-colour';
 
 /** The logo's bytes, recoloured when asked: SVGs by repainting, PNGs by keeping the alpha and filling the ink. */
-export async function logoFile(brand: Brand, logoId: string, variant: LogoFileVariant, ink?: string): Promise<{ body: Buffer; contentType: string; filename: string }> {
+export async function logoFile(brand: Brand, logoId: string, variant: LogoFileVariant, ink?: string, on?: string): Promise<{ body: Buffer; contentType: string; filename: string }> {
   const logo = await logoOf(brand, logoId);
   const bytes = await storage.get(logo.storageKey);
   if (!bytes) throw new ApiError(404, 'not_found', 'The logo file is missing from storage.');
   const filename = `${brand.slug}-${logo.variant}${variant === 'original' ? '' : `-${variant}`}.${logo.format}`;
   if (variant === 'original') return { body: bytes, contentType: logo.format === 'svg' ? 'image/svg+xml' : 'image/png', filename };
   const inkHex = variant === 'one-colour' ? hexOf(ink ?? '') : undefined;
+  if (logo.format === 'svg' && variant === 'white' && on) {
+    return { body: Buffer.from(reverseOnGround(bytes.toString('utf8'), on)), contentType: 'image/svg+xml', filename };
+  }
   if (logo.format === 'svg') {
     return { body: Buffer.from(recolorSvg(bytes.toString('utf8'), variant, inkHex ?? ink)), contentType: 'image/svg+xml', filename };
   }
@@ -499,10 +502,11 @@ export async function setTypeScale(caller: Caller, brand: Brand, settings: TypeS
 // ---------------------------------------------------------------- the whole identity
 
 export async function loadIdentity(brand: Brand): Promise<Identity> {
-  const [colors, logos, faces] = await Promise.all([
+  const [colors, logos, faces, approved] = await Promise.all([
     BrandColor.findAll({ where: { brandId: brand.id }, order: [['position', 'ASC'], ['createdAt', 'ASC']] }),
     BrandLogo.findAll({ where: { brandId: brand.id }, order: [['position', 'ASC'], ['createdAt', 'ASC']] }),
     BrandTypeface.findAll({ where: { brandId: brand.id }, order: [['createdAt', 'ASC']] }),
+    Asset.findAll({ where: { brandId: brand.id, state: 'approved' }, order: [['name', 'ASC']], attributes: ['id', 'name', 'kind', 'format'] }),
   ]);
   const settings: TypeScaleSettings = { ...DEFAULT_TYPE_SCALE, ...(brand.typeScale ?? {}) };
   const body = faces.find((f) => f.role === 'body') ?? faces[0];
@@ -516,6 +520,7 @@ export async function loadIdentity(brand: Brand): Promise<Identity> {
   }
   return {
     brand: { id: brand.id, name: brand.name, slug: brand.slug },
+    assets: approved.map((a) => ({ id: a.id, name: a.name, kind: a.kind, format: a.format, url: `/api/assets/${a.id}/file?format=original` })),
     colors: await Promise.all(colors.map(colorView)),
     logos: logos.map(logoView),
     typefaces: faces.map(typefaceView),

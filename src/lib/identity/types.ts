@@ -99,8 +99,20 @@ export interface TypeScaleStep {
   role: TypefaceRole;
 }
 
+/** An approved file of the asset shelf, as the downloads block lists it. */
+export interface IdentityAsset {
+  id: string;
+  name: string;
+  kind: string;
+  format: string;
+  /** Where readers with download rights fetch the original. */
+  url: string;
+}
+
 export interface Identity {
   brand: { id: string; name: string; slug: string };
+  /** Approved shelf files at the time the identity was read (absent in versions published before the shelf). */
+  assets?: IdentityAsset[];
   colors: IdentityColor[];
   logos: IdentityLogo[];
   typefaces: IdentityTypeface[];

@@ -5,5 +5,5 @@ export { MAX_SVG_UNITS, parseViewBox, svgLengthPx, type Box } from './geometry';
 export { sanitizeSvg, toSanitizedSvg, MAX_SVG_BYTES, type SanitizeResult, type SanitizedSvg } from './sanitize';
 export { clearSpace, type ClearSpace } from './clear-space';
 export { minimumSize, MIN_STROKE_PRINT_PT, MIN_STROKE_SCREEN_PX, type MinimumSize } from './minimum-size';
-export { recolorSvg, type RecolorMode } from './recolor';
+export { recolorSvg, reverseOnGround, type RecolorMode } from './recolor';
 export { TRADEMARK_CAUTION } from '../cautions';

@@ -51,7 +51,7 @@ export function BlockFrame({ props, settings, preview, startOpen }: { props: Rea
           ) : null}
           <ToolButton label={`Move ${label} up`} onClick={() => moveBlock(editor, index(), -1)}>↑</ToolButton>
           <ToolButton label={`Move ${label} down`} onClick={() => moveBlock(editor, index(), 1)}>↓</ToolButton>
-          <ToolButton label={`Duplicate ${label}`} onClick={() => duplicateBlock(editor, index())}>⧉</ToolButton>
+          <ToolButton label={`Duplicate ${label}`} onClick={() => duplicateBlock(editor, index())}><svg width="14" height="14" viewBox="0 0 14 14" aria-hidden="true" fill="none" stroke="currentColor" strokeWidth="1.4"><rect x="4.5" y="4.5" width="8" height="8" rx="1.5" /><path d="M9.5 2.5v-.5a1 1 0 0 0-1-1h-6a1 1 0 0 0-1 1v6a1 1 0 0 0 1 1h.5" /></svg></ToolButton>
           <ToolButton label={`Remove ${label}`} onClick={() => deleteBlock(editor, index())} danger>✕</ToolButton>
         </div>
       </div>

@@ -14,7 +14,7 @@ function Row({ label, value, mode, hint }: { label: string; value: string; mode:
     <div className="flex items-baseline justify-between gap-2 border-t border-black/10 py-1.5 first:border-0">
       <dt className="text-xs font-semibold uppercase tracking-wider opacity-70">
         {label}
-        {hint ? <span className="ml-1 font-normal normal-case tracking-normal opacity-80">({hint})</span> : null}
+        {hint ? <span className="ml-1 font-normal normal-case tracking-normal">({hint})</span> : null}
       </dt>
       <dd className="flex items-baseline gap-1 font-mono text-sm">
         <span data-value={label}>{value}</span>

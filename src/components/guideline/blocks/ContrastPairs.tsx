@@ -35,6 +35,7 @@ export function ContrastPairsBlock({ attrs, identity, editing }: BlockRenderProp
                 className="flex h-20 items-center justify-center rounded-lg text-2xl font-semibold"
                 style={{ color: safeHex(fg.hex, '#000000'), backgroundColor: safeHex(bg.hex, '#ffffff'), fontFamily: 'var(--brand-heading-font)' }}
                 aria-hidden="true"
+                data-sample="contrast"
               >
                 Aa
               </div>

@@ -6,6 +6,7 @@ import { logoFile } from '../../../../../../lib/identity/identity.server';
 const query = z.strictObject({
   variant: z.enum(['original', 'black', 'white', 'reversed', 'one-colour']).default('original'),
   color: z.string().max(100).optional(),
+  on: z.string().regex(/^#[0-9a-fA-F]{6}$/, 'on must be a six-digit hex colour').optional(),
   download: z.enum(['1']).optional(),
 });
 
@@ -13,7 +14,7 @@ const query = z.strictObject({
 export const GET = endpoint(async ({ locals, params, url }) => {
   const { brand } = await authorizeBrand(locals, idParam(params.id), 'draft.read');
   const q = parseWith(query, Object.fromEntries(url.searchParams), 'query');
-  const file = await logoFile(brand, idParam(params.logoId, 'That logo'), q.variant, q.color);
+  const file = await logoFile(brand, idParam(params.logoId, 'That logo'), q.variant, q.color, q.on);
   return fileResponse(file.body, file.contentType, file.filename, { inline: q.download !== '1' });
 });
 

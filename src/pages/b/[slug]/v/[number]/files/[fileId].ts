@@ -1,5 +1,5 @@
 import type { APIRoute } from 'astro';
-import { recolorSvg } from '../../../../../../lib/logo';
+import { recolorSvg, reverseOnGround } from '../../../../../../lib/logo';
 import { siteAccess } from '../../../../../../lib/publishing/site-access.server';
 import { storage } from '../../../../../../lib/storage/index.server';
 
@@ -14,8 +14,10 @@ export const GET: APIRoute = async (context) => {
   let body = await storage.get(file.key);
   if (!body) return new Response('Not found', { status: 404 });
   const variant = context.url.searchParams.get('variant');
+  const on = context.url.searchParams.get('on');
   if (variant && VARIANTS.has(variant) && file.contentType === 'image/svg+xml') {
-    body = Buffer.from(recolorSvg(body.toString('utf8'), variant as 'black' | 'white' | 'reversed'));
+    const svg = body.toString('utf8');
+    body = Buffer.from(variant === 'white' && on && /^#[0-9a-f]{6}$/i.test(on) ? reverseOnGround(svg, on) : recolorSvg(svg, variant as 'black' | 'white' | 'reversed'));
   }
   return new Response(new Uint8Array(body), {
     headers: {
