@@ -4,7 +4,7 @@ import astro from 'eslint-plugin-astro';
 import tseslint from 'typescript-eslint';
 
 export default tseslint.config(
-  { ignores: ['dist/', 'dist-test/', '.astro/', '.data/', 'node_modules/', 'coverage/'] },
+  { ignores: ['dist/', 'dist-test/', 'dist-bench/', '.astro/', '.data/', 'node_modules/', 'coverage/'] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   ...astro.configs.recommended,

@@ -2,6 +2,7 @@
 import { readdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
+import { stopBenchServer } from './support/server';
 
 const here = import.meta.dirname;
 const only = process.argv[2];
@@ -11,3 +12,4 @@ for (const file of readdirSync(here).filter((f) => f.endsWith('.bench.ts')).sort
   const mod = await import(pathToFileURL(join(here, file)).href);
   await mod.default();
 }
+await stopBenchServer();

@@ -40,6 +40,8 @@ const server = await startServer({ host, port, databaseUrl, siteUrl, secret, sig
 let shareUrl: string | null = null;
 try {
   shareUrl = await publishDemo(siteUrl, dataDir);
+  // The demo review anchors its comments to the published draft's blocks: seed again now that they exist.
+  await prepareDatabase({ databaseUrl, siteUrl, secret, signInLimit }, { filesDir });
 } catch (err) {
   console.warn(`  (the demo version could not be published: ${(err as Error).message})`);
 }
