@@ -15,19 +15,59 @@ async function call(siteUrl: string, cookie: string, method: string, path: strin
   return json;
 }
 
-/** Make sure the first demo brand is published; returns the demo share link URL. */
-export async function publishDemo(siteUrl: string, dataDir: string): Promise<string | null> {
-  const signIn = await fetch(`${siteUrl}/api/auth/sign-in/email`, {
+async function signIn(siteUrl: string, email: string, retry = true): Promise<string> {
+  const res = await fetch(`${siteUrl}/api/auth/sign-in/email`, {
     method: 'POST',
     headers: { 'content-type': 'application/json', origin: siteUrl },
-    body: JSON.stringify({ email: DEMO_PEOPLE[0].email, password: DEMO_PASSWORD }),
+    body: JSON.stringify({ email, password: DEMO_PASSWORD }),
   });
-  if (!signIn.ok) throw new Error(`demo sign-in answered ${signIn.status}`);
-  const cookie = signIn.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
+  // Restarted several times within a minute: the sign-in limiter answers 429; wait it out once.
+  if (res.status === 429 && retry) {
+    const wait = Math.min(60, Number(res.headers.get('x-retry-after') ?? 30));
+    console.log(`  (sign-in limit reached from a recent start; waiting ${wait} s)`);
+    await new Promise((r) => setTimeout(r, wait * 1000));
+    return signIn(siteUrl, email, false);
+  }
+  if (!res.ok) throw new Error(`demo sign-in answered ${res.status}`);
+  return res.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
+}
+
+/** The demo shelf: both logos approved, an older mark kept as a draft, and a partner's first downloads. */
+async function stockShelf(siteUrl: string, cookie: string, brandId: string): Promise<void> {
+  const base = `/api/brands/${brandId}`;
+  if ((await call(siteUrl, cookie, 'GET', `${base}/assets`)).assets.length > 0) return;
+  const form = new FormData();
+  for (const file of ['larchmere-lockup.svg', 'larchmere-mark.svg']) {
+    form.append('file', new Blob([readFileSync(join(import.meta.dirname, '../../db/seeders/files', file))], { type: 'image/svg+xml' }), file);
+  }
+  const older = readFileSync(join(import.meta.dirname, '../../db/seeders/files/larchmere-mark.svg'), 'utf8').replace('#c8553d', '#8a6a4f');
+  form.append('file', new Blob([older], { type: 'image/svg+xml' }), 'larchmere-mark-earlier.svg');
+  const res = await fetch(siteUrl + `${base}/assets`, { method: 'POST', headers: { origin: siteUrl, cookie }, body: form });
+  if (!res.ok) throw new Error(`demo upload answered ${res.status}`);
+  const { assets } = await res.json();
+  const notes: Record<string, { tags: string[]; usageNotes: string }> = {
+    'larchmere-lockup.svg': { tags: ['primary'], usageNotes: 'The primary lockup. Use on Steam, Crema or white; reversed on Roast or Char.' },
+    'larchmere-mark.svg': { tags: ['icon'], usageNotes: 'The tree mark on its own: app icons, stamps, cup sleeves.' },
+  };
+  for (const asset of assets as { id: string; originalFilename: string }[]) {
+    const note = notes[asset.originalFilename];
+    if (note) await call(siteUrl, cookie, 'PATCH', `${base}/assets/${asset.id}`, { state: 'approved', ...note });
+  }
+  // The print partner's first visit, so the owner's download log has something to show.
+  const partner = await signIn(siteUrl, DEMO_PEOPLE[3].email);
+  const lockup = (assets as { id: string; originalFilename: string }[]).find((a) => a.originalFilename === 'larchmere-lockup.svg')!;
+  for (const query of ['format=png&width=1024', 'preset=favicon']) await (await fetch(`${siteUrl}/api/assets/${lockup.id}/file?${query}`, { headers: { cookie: partner } })).arrayBuffer();
+  await (await fetch(`${siteUrl}${base}/bundles`, { method: 'POST', headers: { cookie: partner, origin: siteUrl, 'content-type': 'application/json' }, body: JSON.stringify({ allLogos: true }) })).arrayBuffer();
+}
+
+/** Make sure the first demo brand is published and stocked; returns the demo share link URL. */
+export async function publishDemo(siteUrl: string, dataDir: string): Promise<string | null> {
+  const cookie = await signIn(siteUrl, DEMO_PEOPLE[0].email);
   const { brands } = await call(siteUrl, cookie, 'GET', '/api/brands');
   const brand = brands.find((b: { slug: string }) => b.slug === DEMO_BRANDS[0].slug);
   if (!brand) return null;
   const base = `/api/brands/${brand.id}`;
+  await stockShelf(siteUrl, cookie, brand.id);
   const { versions } = await call(siteUrl, cookie, 'GET', `${base}/versions`);
   const linkFile = join(dataDir, 'demo-share-link.txt');
   if (versions.length === 0) {

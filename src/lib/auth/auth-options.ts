@@ -35,7 +35,8 @@ export function authOptions(settings: AuthSettings): BetterAuthOptions {
       maxPasswordLength: PASSWORD_MAX,
       autoSignIn: true,
     },
-    session: { expiresIn: 60 * 60 * 24 * 14, updateAge: 60 * 60 * 24 },
+    // Signed session data rides in a cookie for a minute, so most requests need no session query.
+    session: { expiresIn: 60 * 60 * 24 * 14, updateAge: 60 * 60 * 24, cookieCache: { enabled: true, maxAge: 60 } },
     rateLimit: {
       enabled: true,
       storage: 'database',

@@ -1,7 +1,7 @@
 // Rendering a published version to HTML, once per version and audience: a version never changes.
 import { createElement } from 'react';
 import { renderToStaticMarkup } from 'react-dom/server';
-import type { GuidelineVersion } from '../../../db/models';
+import { GuidelineVersion } from '../../../db/models';
 import GuidelineDocument from '../../components/guideline/GuidelineDocument';
 import type { GuidelineDoc } from '../guideline/document';
 import { outline, type OutlineEntry } from '../guideline/outline';
@@ -24,11 +24,13 @@ const MAX_CACHED = 200;
  * The version's document as HTML for one slug and mode. The cache key holds everything the HTML depends on;
  * access is checked by the caller before this is ever reached, so the cache cannot leak a page.
  */
-export function renderVersion(version: GuidelineVersion, slug: string, mode: 'site' | 'print'): RenderedVersion {
+export async function renderVersion(version: GuidelineVersion, slug: string, mode: 'site' | 'print'): Promise<RenderedVersion> {
   const key = `${version.id}:${slug}:${mode}`;
   const hit = cache.get(key);
   if (hit) return hit;
-  const snapshot = version.snapshot as { doc: GuidelineDoc; identity: Identity };
+  // The snapshot is read only here, on a cache miss: the hot path never parses it.
+  const row = version.snapshot ? version : await GuidelineVersion.findByPk(version.id, { attributes: ['snapshot'] });
+  const snapshot = row!.snapshot as { doc: GuidelineDoc; identity: Identity };
   const identity = withVersionUrls(snapshot.identity, slug, version.number);
   const html = renderToStaticMarkup(createElement(GuidelineDocument, { doc: snapshot.doc, identity, mode }));
   const rendered = { html, outline: outline(snapshot.doc), identity, etag: `"v${version.id.slice(0, 8)}-${version.number}-${mode}-${RENDER_EPOCH}"` };

@@ -112,23 +112,32 @@ export async function listVersions(brand: Brand): Promise<VersionView[]> {
   }));
 }
 
-/** One version by number (latest when number is null), or null. */
-export async function findVersion(brandId: string, number: number | null): Promise<GuidelineVersion | null> {
+/** A version's columns without its snapshot: enough to check access and draw the page frame. */
+const LIGHT = ['id', 'brandId', 'number', 'note', 'draftRevision', 'files', 'publishedById', 'publishedAt'] as const;
+
+/** One version by number (latest when number is null), or null; the snapshot only when asked for. */
+export async function findVersion(brandId: string, number: number | null, opts: { snapshot?: boolean } = {}): Promise<GuidelineVersion | null> {
+  const attributes = opts.snapshot ? undefined : [...LIGHT];
   return number === null
-    ? GuidelineVersion.findOne({ where: { brandId }, order: [['number', 'DESC']] })
-    : GuidelineVersion.findOne({ where: { brandId, number } });
+    ? GuidelineVersion.findOne({ where: { brandId }, order: [['number', 'DESC']], attributes })
+    : GuidelineVersion.findOne({ where: { brandId, number }, attributes });
+}
+
+/** The newest version number of a brand, or null. */
+export async function latestNumber(brandId: string): Promise<number | null> {
+  return (await GuidelineVersion.max<number, GuidelineVersion>('number', { where: { brandId } })) ?? null;
 }
 
 /** What changed from version `from` to version `to` ("draft" compares against the working draft). */
 export async function versionChanges(brand: Brand, from: number, to: number | 'draft') {
-  const a = await findVersion(brand.id, from);
+  const a = await findVersion(brand.id, from, { snapshot: true });
   if (!a) throw new ApiError(404, 'not_found', `Version ${from} was not found.`);
   let b: Snapshot;
   if (to === 'draft') {
     const draft = await GuidelineDraft.findByPk(brand.id);
     b = { doc: (draft?.doc ?? { content: [] }) as Snapshot['doc'], identity: await loadIdentity(brand) };
   } else {
-    const v = await findVersion(brand.id, to);
+    const v = await findVersion(brand.id, to, { snapshot: true });
     if (!v) throw new ApiError(404, 'not_found', `Version ${to} was not found.`);
     b = v.snapshot as Snapshot;
   }
