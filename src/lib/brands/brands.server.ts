@@ -2,6 +2,7 @@
 import { createHash, randomBytes } from 'node:crypto';
 import { Op, QueryTypes, type Transaction } from 'sequelize';
 import { Brand, BrandLogo, BrandMember, BrandTypeface, Invitation, Studio, StudioMember } from '../../../db/models';
+import { siteCache } from '../publishing/site-cache';
 import { storage } from '../storage/index.server';
 import { audit } from '../audit.server';
 import type { Caller } from '../auth/access.server';
@@ -68,6 +69,7 @@ export async function updateBrand(caller: Caller, brand: Brand, changes: { name?
     }
     const before = { name: brand.name, slug: brand.slug };
     await brand.update(changes, { transaction: t });
+    siteCache.forget();
     await audit({ actorId: caller.id, action: 'brand.update', targetType: 'brand', targetId: brand.id, brandId: brand.id, studioId: brand.studioId, details: { before, after: changes } }, t);
     return brand;
   });
@@ -83,6 +85,7 @@ export async function deleteBrand(caller: Caller, brand: Brand): Promise<void> {
     await audit({ actorId: caller.id, action: 'brand.delete', targetType: 'brand', targetId: brand.id, studioId: brand.studioId, details: { name: brand.name, slug: brand.slug } }, t);
     await brand.destroy({ transaction: t });
   });
+  siteCache.forget();
   await Promise.all(files.map((key) => storage.delete(key)));
 }
 
@@ -150,6 +153,7 @@ export async function addMember(caller: Caller, brand: Brand, email: string, rol
       const existing = await BrandMember.findOne({ where: { brandId: brand.id, userId: user.id }, transaction: t });
       if (existing) throw new ApiError(409, 'already_member', `${email} is already a member of this brand (${existing.role}).`);
       const member = await BrandMember.create({ brandId: brand.id, userId: user.id, role }, { transaction: t });
+      siteCache.forget();
       await audit({ actorId: caller.id, action: 'member.add', targetType: 'member', targetId: member.id, brandId: brand.id, studioId: brand.studioId, details: { email, role } }, t);
       return { kind: 'member', member: { id: member.id, userId: user.id, name: user.name, email: user.email, role, addedAt: member.createdAt.toISOString() } };
     }
@@ -206,6 +210,7 @@ export async function updateMember(caller: Caller, brand: Brand, memberId: strin
     if (role !== 'owner') await keepAnOwner(brand, member, t);
     const before = member.role;
     await member.update({ role }, { transaction: t });
+    siteCache.forget();
     await audit({ actorId: caller.id, action: 'member.role', targetType: 'member', targetId: member.id, brandId: brand.id, studioId: brand.studioId, details: { userId: member.userId, before, after: role } }, t);
     return member;
   });
@@ -217,6 +222,7 @@ export async function removeMember(caller: Caller, brand: Brand, memberId: strin
     const member = await memberOf(brand, memberId, t);
     await keepAnOwner(brand, member, t);
     await member.destroy({ transaction: t });
+    siteCache.forget();
     await audit({ actorId: caller.id, action: 'member.remove', targetType: 'member', targetId: member.id, brandId: brand.id, studioId: brand.studioId, details: { userId: member.userId, role: member.role } }, t);
   });
 }

@@ -2,6 +2,7 @@
 import { Op } from 'sequelize';
 import { Brand, BrandMember, Invitation } from '../../../db/models';
 import { audit } from '../audit.server';
+import { siteCache } from '../publishing/site-cache';
 import type { Caller } from '../auth/access.server';
 import { ROLE_LABELS, type BrandRole } from '../auth/roles';
 import type { InvitationView } from '../brands/brands.server';
@@ -114,6 +115,7 @@ export async function acceptInvitation(caller: Caller, token: string): Promise<{
     const brand = (await Brand.findByPk(inv.brandId, { transaction: t }))!;
     const existing = await BrandMember.findOne({ where: { brandId: brand.id, userId: caller.id }, transaction: t });
     if (!existing) await BrandMember.create({ brandId: brand.id, userId: caller.id, role: inv.role }, { transaction: t });
+    siteCache.forget();
     await inv.update({ acceptedAt: new Date() }, { transaction: t });
     // Other open invitations of the same address to this brand are settled by joining.
     await Invitation.update({ revokedAt: new Date() }, { where: { brandId: brand.id, email: inv.email, acceptedAt: null, revokedAt: null, id: { [Op.ne]: inv.id } }, transaction: t });

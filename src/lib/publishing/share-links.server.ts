@@ -8,6 +8,7 @@ import type { Caller } from '../auth/access.server';
 import { hashToken } from '../brands/brands.server';
 import { sequelize } from '../db.server';
 import { ApiError } from '../http/api';
+import { shareGrants } from './grant-cache';
 
 const scrypt = promisify(scryptCb) as (password: string, salt: Buffer, keylen: number) => Promise<Buffer>;
 
@@ -106,6 +107,7 @@ export async function revokeShareLink(caller: Caller, brand: Brand, linkId: stri
   if (link.revokedAt) return;
   await sequelize.transaction(async (t) => {
     await link.update({ revokedAt: new Date() }, { transaction: t });
+    shareGrants.clear();
     await audit({ actorId: caller.id, action: 'shareLink.revoke', targetType: 'shareLink', targetId: link.id, brandId: brand.id, studioId: brand.studioId, details: {} }, t);
   });
 }

@@ -6,6 +6,17 @@ import { can } from '../auth/policy';
 import type { BrandRole } from '../auth/roles';
 import { versionFromPass, PRINT_COOKIE } from './print-grant.server';
 import { findVersion } from './versions.server';
+import { siteCache } from './site-cache';
+import type { TtlCache } from '../http/ttl-cache';
+
+/** A cached answer, or the lookup's (cached for next time). */
+async function remembered<V>(cache: TtlCache<V>, key: string, lookup: () => Promise<V>): Promise<V> {
+  const hit = cache.get(key);
+  if (hit !== undefined) return hit;
+  const value = await lookup();
+  cache.set(key, value);
+  return value;
+}
 
 export interface SiteAccess {
   brand: Brand;
@@ -30,9 +41,9 @@ export const notFoundPage = () => page(404, 'Nothing here', 'This guideline site
 
 /** The version a visitor may read at /b/:slug[/v/:number], or the response to send instead. */
 export async function siteAccess(Astro: Pick<APIContext, 'locals' | 'url' | 'redirect' | 'cookies'>, slug: string, number: number | null): Promise<SiteAccess | Response> {
-  const brand = await Brand.findOne({ where: { slug } });
   const { user, shareGrant } = Astro.locals;
-  const role = brand && user ? await roleOn(user.id, brand) : null;
+  const brand = await remembered(siteCache.brands, slug, () => Brand.findOne({ where: { slug } }));
+  const role = brand && user ? await remembered(siteCache.roles, `${user.id}:${brand.id}`, () => roleOn(user.id, brand)) : null;
   const share = brand && shareGrant?.brandId === brand.id ? shareGrant : null;
 
   // Our PDF renderer reads the print page with a signed pass for exactly one version.
@@ -49,7 +60,7 @@ export async function siteAccess(Astro: Pick<APIContext, 'locals' | 'url' | 'red
   // A link pinned to one version opens that version only.
   const wanted = !role && share?.version != null ? (number === null || number === share.version ? share.version : -1) : number;
   if (wanted === -1) return notFoundPage();
-  const version = await findVersion(brand.id, wanted);
+  const version = await remembered(siteCache.versions, `${brand.id}:${wanted ?? 'latest'}`, () => findVersion(brand.id, wanted));
   if (!version) {
     return page(404, 'Not published yet', number === null ? 'This brand has no published guidelines yet. The studio will share a link once the first version is out.' : `Version ${number} does not exist.`);
   }

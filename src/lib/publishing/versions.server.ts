@@ -14,6 +14,7 @@ import { storage } from '../storage/index.server';
 import { newKey } from '../storage/storage';
 import { shippedFont } from '../type/shipped-fonts';
 import { changeSummary, compareSnapshots, type Snapshot } from './diff';
+import { siteCache } from './site-cache';
 
 export interface VersionView {
   number: number;
@@ -81,6 +82,7 @@ export async function publishVersion(caller: Caller, brand: Brand, note: string)
     await Promise.all(Object.values(files).map((f) => storage.delete(f.key)));
     throw err;
   }
+  siteCache.forget();
   const prev = previous as GuidelineVersion | null;
   const summary = prev ? changeSummary(compareSnapshots(prev.snapshot as Snapshot, version.snapshot as Snapshot)) : ['First published version'];
   await notifyPublished({

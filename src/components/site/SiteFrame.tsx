@@ -1,0 +1,119 @@
+// The frame of a published guideline site as one React tree: it wears the brand (fonts, colours, logo) and
+// Plumbline recedes to the footer. Rendered to a string on the server, by the Astro layout and by the cached
+// page path alike.
+import type { OutlineEntry } from '../../lib/guideline/outline';
+import { brandStyle, markLogo, primaryLogo } from '../../lib/guideline/identity';
+import type { Identity } from '../../lib/identity/types';
+import { versionPath } from '../../lib/publishing/snapshot-urls';
+
+export interface SiteFrameProps {
+  identity: Identity;
+  slug: string;
+  version: { number: number; publishedAt: Date; note: string };
+  latest: boolean;
+  outline: OutlineEntry[];
+  isEditor: boolean;
+  viaShareLink: boolean;
+  canDownload: boolean;
+  title?: string;
+  /** The app's stylesheet. */
+  cssHref: string;
+  /** The page's own content, already rendered by us (escaped React output or an Astro slot). */
+  bodyHtml: string;
+}
+
+const FRAME_CSS = `.site-root { font-family: var(--brand-body-font); color: var(--brand-text); }
+.site-root h1, .site-root h2, .site-root h3 { font-family: var(--brand-heading-font); }
+@media print {
+  .site-chrome { display: none !important; }
+  .site-main { margin: 0 !important; max-width: none !important; }
+  section { break-inside: avoid-page; }
+  * { -webkit-print-color-adjust: exact; print-color-adjust: exact; }
+}`;
+
+const COPY_SCRIPT = `document.addEventListener('click', async (e) => {
+  const b = e.target.closest && e.target.closest('[data-copy]');
+  if (!b) return;
+  try { await navigator.clipboard.writeText(b.dataset.copy); const t = b.textContent; b.textContent = 'Copied'; setTimeout(() => (b.textContent = t), 1200); } catch { b.textContent = 'Select and copy'; }
+});`;
+
+const fontFormat = (format: string) => (format === 'WOFF2' ? 'woff2' : format === 'WOFF' ? 'woff' : 'opentype');
+
+export function SiteFrame({ identity, slug, version, latest, outline, isEditor, viaShareLink, canDownload, title, cssHref, bodyHtml }: SiteFrameProps) {
+  const style = Object.fromEntries(Object.entries(brandStyle(identity)));
+  const fontFaces = identity.typefaces
+    .filter((f) => f.fileUrl)
+    .map((f) => `@font-face { font-family: "${f.family.replace(/["\\<>]/g, '')}"; src: url("${f.fileUrl}") format("${fontFormat(f.metrics.format)}"); font-weight: ${f.metrics.weight.min} ${f.metrics.weight.max}; font-display: swap; }`)
+    .join('\n');
+  const unlicensed = identity.typefaces.filter((f) => !f.licence.confirmed);
+  const logo = primaryLogo(identity);
+  const icon = markLogo(identity) ?? logo;
+  const date = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric' }).format(new Date(version.publishedAt));
+  const base = `/b/${slug}`;
+  const pdf = `${versionPath(slug, version.number)}/guideline.pdf`;
+  return (
+    <html lang="en">
+      <head>
+        <meta charSet="utf-8" />
+        <meta name="viewport" content="width=device-width, initial-scale=1" />
+        <meta name="robots" content="noindex" />
+        <link rel="icon" href={icon ? icon.files.original : '/favicon.svg'} />
+        <title>{`${title ? `${title} · ` : ''}${identity.brand.name} brand guidelines`}</title>
+        <link rel="stylesheet" href={cssHref} />
+        <style dangerouslySetInnerHTML={{ __html: `${fontFaces}\n${FRAME_CSS}` }} />
+      </head>
+      <body className="site-root bg-white" style={style}>
+        <a href="#content" className="sr-only focus:not-sr-only focus:absolute focus:left-4 focus:top-4 focus:z-10 focus:bg-white focus:px-3 focus:py-2">Skip to content</a>
+        <header className="site-chrome border-b border-black/10">
+          <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-4 px-6 py-4">
+            <a href={base} className="flex items-center gap-3 text-inherit no-underline">
+              {logo ? <img src={logo.files.original} alt={`${identity.brand.name} logo`} className="h-10 w-auto" /> : <span className="text-xl font-bold">{identity.brand.name}</span>}
+              <span className="sr-only">{identity.brand.name} guidelines home</span>
+            </a>
+            <div className="ml-auto flex flex-wrap items-center gap-3 text-sm">
+              <a href={`${base}/versions`} className="rounded-full border border-black/15 px-3 py-1 font-semibold hover:bg-black/5" title={version.note}>
+                Version {version.number} · {date}{latest ? ' · current' : ''}
+              </a>
+              {canDownload && <a href={`${base}/downloads`} className="font-semibold underline-offset-2 hover:underline">Downloads</a>}
+              <a href={`${pdf}?size=a4`} className="font-semibold underline-offset-2 hover:underline">PDF (A4)</a>
+              <a href={`${pdf}?size=letter`} className="font-semibold underline-offset-2 hover:underline">PDF (Letter)</a>
+            </div>
+          </div>
+          {!latest && (
+            <p className="bg-amber-50 px-6 py-2 text-center text-sm text-amber-900">
+              You are reading an earlier version. <a className="font-semibold underline" href={base}>Go to the current guidelines</a>.
+            </p>
+          )}
+          {isEditor && unlicensed.length > 0 && (
+            <p className="bg-amber-50 px-6 py-2 text-center text-sm text-amber-900">
+              For editors: {unlicensed.map((f) => f.family).join(', ')} {unlicensed.length > 1 ? 'are' : 'is'} shown in the fallback stack because no web licence was confirmed. Confirm it on the Identity page, then publish again.
+            </p>
+          )}
+        </header>
+        <div className="mx-auto flex max-w-7xl gap-10 px-6">
+          {outline.length > 0 && (
+            <nav aria-label="Contents" className="site-chrome sticky top-0 hidden max-h-screen w-60 shrink-0 overflow-y-auto py-10 text-sm lg:block">
+              <p className="mb-3 text-xs font-semibold uppercase tracking-widest opacity-60">Contents</p>
+              <ol className="space-y-1.5">
+                {outline.map((e) => (
+                  <li key={e.anchor}><a href={`#${e.anchor}`} className="block rounded px-2 py-1 hover:bg-black/5">{e.title}</a></li>
+                ))}
+              </ol>
+            </nav>
+          )}
+          <main id="content" className="site-main min-w-0 flex-1 py-10" dangerouslySetInnerHTML={{ __html: bodyHtml }} />
+        </div>
+        <footer className="site-chrome mt-16 border-t border-black/10 py-6 text-center text-xs opacity-60">
+          {identity.brand.name} brand guidelines · version {version.number}{viaShareLink ? ' · shared with you by link' : ''} · published with Plumbline
+        </footer>
+        <script dangerouslySetInnerHTML={{ __html: COPY_SCRIPT }} />
+      </body>
+    </html>
+  );
+}
+
+/** The whole page as HTML, doctype included. */
+export async function siteFrameHtml(props: SiteFrameProps): Promise<string> {
+  const { renderToStaticMarkup } = await import('react-dom/server');
+  return `<!doctype html>${renderToStaticMarkup(<SiteFrame {...props} />)}`;
+}
