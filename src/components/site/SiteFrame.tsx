@@ -2,7 +2,7 @@
 // Plumbline recedes to the footer. Rendered to a string on the server, by the Astro layout and by the cached
 // page path alike.
 import type { OutlineEntry } from '../../lib/guideline/outline';
-import { brandStyle, markLogo, primaryLogo } from '../../lib/guideline/identity';
+import { brandStyle, fontFaceCss, markLogo, primaryLogo } from '../../lib/guideline/identity';
 import type { Identity } from '../../lib/identity/types';
 import { versionPath } from '../../lib/publishing/snapshot-urls';
 
@@ -37,14 +37,9 @@ const COPY_SCRIPT = `document.addEventListener('click', async (e) => {
   try { await navigator.clipboard.writeText(b.dataset.copy); const t = b.textContent; b.textContent = 'Copied'; setTimeout(() => (b.textContent = t), 1200); } catch { b.textContent = 'Select and copy'; }
 });`;
 
-const fontFormat = (format: string) => (format === 'WOFF2' ? 'woff2' : format === 'WOFF' ? 'woff' : 'opentype');
-
 export function SiteFrame({ identity, slug, version, latest, outline, isEditor, viaShareLink, canDownload, title, cssHref, bodyHtml }: SiteFrameProps) {
   const style = Object.fromEntries(Object.entries(brandStyle(identity)));
-  const fontFaces = identity.typefaces
-    .filter((f) => f.fileUrl)
-    .map((f) => `@font-face { font-family: "${f.family.replace(/["\\<>]/g, '')}"; src: url("${f.fileUrl}") format("${fontFormat(f.metrics.format)}"); font-weight: ${f.metrics.weight.min} ${f.metrics.weight.max}; font-display: swap; }`)
-    .join('\n');
+  const fontFaces = fontFaceCss(identity.typefaces);
   const unlicensed = identity.typefaces.filter((f) => !f.licence.confirmed);
   const logo = primaryLogo(identity);
   const icon = markLogo(identity) ?? logo;

@@ -68,3 +68,13 @@ export function brandStyle(identity: Identity): Record<string, string> {
   style['--brand-background'] ??= '#ffffff';
   return style;
 }
+
+const fontFormat = (format: string) => (format === 'WOFF2' ? 'woff2' : format === 'WOFF' ? 'woff' : 'opentype');
+
+/** @font-face rules for the typefaces that have a file to serve (unlicensed faces have none on published pages). */
+export function fontFaceCss(typefaces: readonly IdentityTypeface[]): string {
+  return typefaces
+    .filter((f) => f.fileUrl)
+    .map((f) => `@font-face { font-family: "${f.family.replace(/["\\<>]/g, '')}"; src: url("${f.fileUrl}") format("${fontFormat(f.metrics.format)}"); font-weight: ${f.metrics.weight.min} ${f.metrics.weight.max}; font-display: swap; }`)
+    .join('\n');
+}

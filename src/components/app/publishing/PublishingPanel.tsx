@@ -2,23 +2,12 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState, type ReactNode } from 'react';
 import { api } from '../../../lib/client/api';
+import type { ShareLinkView } from '../../../lib/publishing/share-links.server';
 import { QueryRoot } from '../QueryRoot';
 
 interface Version { number: number; publishedAt: string; note: string; author: { name: string | null } }
 interface Compare { summary: string[] }
-interface ShareLink {
-  id: string;
-  label: string | null;
-  url?: string;
-  version: number | null;
-  allowDownloads: boolean;
-  hasPassword: boolean;
-  expiresAt: string | null;
-  lastUsedAt: string | null;
-  useCount: number;
-  state: 'active' | 'expired' | 'revoked';
-  createdAt: string;
-}
+type ShareLink = ShareLinkView;
 
 const when = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit' });
 
