@@ -58,6 +58,18 @@ test('the demo editor inserts a palette block and a paragraph; both survive a re
   await page.getByRole('textbox', { name: 'Guideline document' }).waitFor();
   expect(await page.getByText('#1d4270').first().isVisible()).toBe(true);
   expect(await page.getByText('#1f3a5f').count()).toBe(0);
+
+  // A comment on the palette block, from the margin, shows in the margin under the block's name.
+  const form = page.getByRole('form', { name: 'Comment on a block' });
+  await form.getByLabel('Comment on').selectOption({ label: 'Colour palette' });
+  await form.getByLabel('Comment', { exact: true }).fill('Show the print values here too.');
+  const posted = page.waitForResponse((r) => r.url().endsWith('/comments') && r.request().method() === 'POST');
+  await form.getByRole('button', { name: 'Add comment' }).click();
+  const answer = await posted;
+  expect(answer.status(), await answer.text()).toBe(201);
+  await page.getByRole('complementary', { name: 'Review comments' }).getByText('Show the print values here too.').waitFor();
+  const margin = await page.getByRole('complementary', { name: 'Review comments' }).innerText();
+  expect(margin).toContain('On Colour palette');
   expect(errors).toEqual([]);
   await page.context().close();
 });
