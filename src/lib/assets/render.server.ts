@@ -69,34 +69,18 @@ async function drawn(source: RenditionSource, params: RenditionParams, contentWi
     const svg = svgFor(source.bytes, params);
     const canvasWidth = (contentWidth ?? DEFAULT_SVG_WIDTH) / crop.width;
     const density = Math.min(100_000, Math.max(1, (72 * canvasWidth) / svg.width));
-    let img = sharp(Buffer.from(svg.text), { density, limitInputPixels: MAX_IMAGE_PIXELS });
+    const img = sharp(Buffer.from(svg.text), { density, limitInputPixels: MAX_IMAGE_PIXELS });
     // Floor, so a crop never reaches past what libvips draws; the final resize sets the exact size.
     const w = Math.max(1, Math.floor((svg.width * density) / 72));
     const h = Math.max(1, Math.floor((svg.height * density) / 72));
-    if (box) {
-      const left = Math.min(w - 1, Math.floor(box.x * w));
-      const top = Math.min(h - 1, Math.floor(box.y * h));
-      const width = Math.max(1, Math.min(w - left, Math.ceil(box.width * w)));
-      const height = Math.max(1, Math.min(h - top, Math.ceil(box.height * h)));
-      img = img.extract({ left, top, width, height });
-      return { img, width, height };
-    }
-    return { img, width: w, height: h };
+    return cropTo(img, w, h, box);
   }
   const bytes = params.variant === 'original' ? source.bytes : await recolouredRaster(source.bytes, params);
-  let img = sharp(bytes, { limitInputPixels: MAX_IMAGE_PIXELS });
+  const img = sharp(bytes, { limitInputPixels: MAX_IMAGE_PIXELS });
   const meta = await img.metadata();
   const w = meta.width ?? 1;
   const h = meta.height ?? 1;
-  if (box) {
-    const left = Math.min(w - 1, Math.floor(box.x * w));
-    const top = Math.min(h - 1, Math.floor(box.y * h));
-    const width = Math.max(1, Math.min(w - left, Math.ceil(box.width * w)));
-    const height = Math.max(1, Math.min(h - top, Math.ceil(box.height * h)));
-    img = img.extract({ left, top, width, height });
-    return { img, width, height };
-  }
-  return { img, width: w, height: h };
+  return cropTo(img, w, h, box);
 }
 
 /** A square of `size` px with the drawing centred inside `inner` px (or inside its clear space). */
@@ -189,4 +173,14 @@ export async function cachedRendition(
   await store.put(key, made.body, made.mime);
   await onStored?.({ key, paramsKey, mime: made.mime, size: made.body.length });
   return { ...made, cached: false };
+}
+
+/** Crop a w × h drawing to a box given as fractions of it (whole pixels, never past the edge), or leave it whole. */
+function cropTo(img: Sharp, w: number, h: number, box: { x: number; y: number; width: number; height: number } | null | undefined) {
+  if (!box) return { img, width: w, height: h };
+  const left = Math.min(w - 1, Math.floor(box.x * w));
+  const top = Math.min(h - 1, Math.floor(box.y * h));
+  const width = Math.max(1, Math.min(w - left, Math.ceil(box.width * w)));
+  const height = Math.max(1, Math.min(h - top, Math.ceil(box.height * h)));
+  return { img: img.extract({ left, top, width, height }), width, height };
 }

@@ -48,8 +48,13 @@ async function copyFiles(brand: Brand, identity: Identity): Promise<Record<strin
   return files;
 }
 
+const emptyDraft = () => new ApiError(409, 'empty_draft', 'There is nothing to publish yet: add at least one block to the guidelines first.');
+
 /** Publish the current draft as the next version. */
 export async function publishVersion(caller: Caller, brand: Brand, note: string): Promise<VersionView> {
+  // Refuse an empty draft before copying any file (checked again under the lock below).
+  const current = await GuidelineDraft.findByPk(brand.id, { attributes: ['doc'] });
+  if (!current || current.doc.content.length === 0) throw emptyDraft();
   const identity = await loadIdentity(brand);
   const files = await copyFiles(brand, identity);
   let previous: GuidelineVersion | null = null;
@@ -59,9 +64,7 @@ export async function publishVersion(caller: Caller, brand: Brand, note: string)
       // One publisher at a time per brand, so numbers never collide.
       await sequelize.query('SELECT pg_advisory_xact_lock(hashtext(:key))', { replacements: { key: `publish:${brand.id}` }, transaction: t });
       const draft = await GuidelineDraft.findByPk(brand.id, { transaction: t });
-      if (!draft || draft.doc.content.length === 0) {
-        throw new ApiError(409, 'empty_draft', 'There is nothing to publish yet: add at least one block to the guidelines first.');
-      }
+      if (!draft || draft.doc.content.length === 0) throw emptyDraft();
       previous = await GuidelineVersion.findOne({ where: { brandId: brand.id }, order: [['number', 'DESC']], transaction: t });
       const created = await GuidelineVersion.create(
         {
