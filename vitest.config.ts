@@ -9,7 +9,7 @@ export default defineConfig({
       {
         test: {
           name: 'integration',
-          include: ['tests/integration/**/*.test.ts', 'tests/browser/**/*.test.ts'],
+          include: ['tests/integration/**/*.test.ts', 'tests/browser/**/*.test.ts', 'tests/hostile/**/*.test.ts'],
           globalSetup: ['tests/support/global-setup.ts'],
           testTimeout: 60_000,
           hookTimeout: 120_000,
