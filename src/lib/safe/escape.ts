@@ -66,10 +66,15 @@ const GENERIC_FAMILIES = new Set([
   'ui-serif', 'ui-sans-serif', 'ui-monospace', 'ui-rounded', '-apple-system', 'blinkmacsystemfont',
 ]);
 
-/** One font-family name for CSS: a generic family bare, any other name as an escaped CSS string. */
+/** CSS-wide keywords (CSS Cascade 5 §7.3) and `default`: a family with such a name must be quoted (CSS Fonts 4 §4.2). */
+const RESERVED = new Set(['inherit', 'initial', 'unset', 'revert', 'revert-layer', 'default']);
+
+/** One font-family name for CSS: a generic family or a plain one-word ASCII name bare, any other name as an escaped CSS string. */
 export function cssFamilyName(name: string): string {
-  const trimmed = name.trim();
-  return GENERIC_FAMILIES.has(trimmed.toLowerCase()) ? trimmed.toLowerCase() : cssString(trimmed);
+  const trimmed = String(name ?? '').trim();
+  const lower = trimmed.toLowerCase();
+  if (GENERIC_FAMILIES.has(lower)) return lower;
+  return /^-?[A-Za-z][A-Za-z0-9-]*$/.test(trimmed) && !RESERVED.has(lower) ? trimmed : cssString(trimmed);
 }
 
 /** A CSS font-family list from names, each escaped. */

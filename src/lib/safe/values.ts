@@ -74,6 +74,14 @@ export function cleanTypefaceFamily(value: unknown, fallback = 'Unnamed typeface
   return kept || fallback;
 }
 
+/** The text of a colour value before parsing: one line, at most 200 characters; the caller parses it (and answers invalid_color). */
+export const cssColorInput = z
+  .string({ error: 'Type a colour value, e.g. #1f6f5c or oklch(55% 0.1 170).' })
+  .trim()
+  .min(1, 'Type a colour value, e.g. #1f6f5c or oklch(55% 0.1 170).')
+  .max(200, 'A colour value can be at most 200 characters.')
+  .refine((v) => !NAME_FORBIDDEN.test(v), 'A colour value must be one line of text, without control characters.');
+
 /** A CSS colour our colour parser reads (hex, rgb(), hsl(), oklch(), lab(), names), kept as typed. */
 export const cssColorText = z
   .string({ error: 'Type a colour value, e.g. #1f6f5c or oklch(55% 0.1 170).' })
