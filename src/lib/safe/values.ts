@@ -126,3 +126,15 @@ export const assetRef = z
 
 /** True when a stored value is a reference to a shelf asset (and not an outside address or a leftover placeholder). */
 export const isAssetRef = (value: unknown): value is string => assetRef.safeParse(value).success;
+
+/** For a schema that keeps its own wording: true when a value is one line without control characters. */
+export const isOneLine = (value: string) => !NAME_FORBIDDEN.test(value);
+/** For a schema that keeps its own wording: true when free text holds no control characters but line breaks and tabs. */
+export const isCleanNote = (value: string) => !NOTE_FORBIDDEN.test(value);
+export const ONE_LINE_MESSAGE = 'Use one line of text, without control characters.';
+export const NOTE_MESSAGE = 'The text cannot hold control characters.';
+
+/** A name made from something we did not type (a file name, a font's own metadata): forbidden characters become spaces. */
+export function cleanName(value: unknown, fallback: string, max = 160): string {
+  return String(value ?? '').replace(new RegExp(NAME_FORBIDDEN.source, 'gu'), ' ').replace(/\s+/g, ' ').trim().slice(0, max).trim() || fallback;
+}
