@@ -4,8 +4,10 @@ import * as z from 'zod';
 import { parseColor } from '../color/parse';
 
 /** C0 and C1 controls, DEL, line and paragraph separators, bidi overrides and isolates, BOM: never part of a name. */
+// eslint-disable-next-line no-control-regex -- control characters are what this rule looks for
 const NAME_FORBIDDEN = /[\u0000-\u001f\u007f-\u009f\u2028\u2029\u202a-\u202e\u2066-\u2069\ufeff]/u;
 /** The same for notes, which may hold line breaks (\n, and \r\n from a textarea) and tabs. */
+// eslint-disable-next-line no-control-regex -- as above
 const NOTE_FORBIDDEN = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f-\u009f\u2028\u2029\u202a-\u202e\u2066-\u2069\ufeff]/u;
 
 /** True when a name holds a character no name may hold. */
