@@ -28,18 +28,18 @@ const HTML_SENSITIVE = /[<>&]/;
 
 /**
  * "serialize a string" (CSSOM §2.1): the value in double quotes, NUL as U+FFFD, controls as code points, `"` and `\`
- * backslash-escaped. `<`, `>` and `&` are also written as code points, so the result is safe inside <style> and style="".
+ * backslash-escaped (`quote` may be `'` where a file format prefers it). `<`, `>` and `&` are also written as code points, so the result is safe inside <style> and style="".
  */
-export function cssString(value: unknown): string {
-  let out = '"';
+export function cssString(value: unknown, quote: '"' | "'" = '"'): string {
+  let out = quote;
   for (const c of String(value ?? '')) {
     const n = c.codePointAt(0)!;
     if (n === 0) out += '\ufffd';
     else if ((n >= 0x01 && n <= 0x1f) || n === 0x7f || HTML_SENSITIVE.test(c)) out += codePoint(c);
-    else if (c === '"' || c === '\\') out += `\\${c}`;
+    else if (c === quote || c === '\\') out += `\\${c}`;
     else out += c;
   }
-  return `${out}"`;
+  return `${out}${quote}`;
 }
 
 /** "serialize an identifier" (CSSOM §2.1, the algorithm behind CSS.escape()), with `<`, `>`, `&` as code points. */
