@@ -18,7 +18,7 @@ import { storage } from '../storage/index.server';
 import type { IdentityForTokens } from '../tokens';
 import { fontMetrics, measure, modularScale, MEASURE_RANGE, pxToRem, pxToPt, SCALE_RATIOS, type FontMetrics } from '../type';
 import { shippedFont } from '../type/shipped-fonts';
-import { cleanTypefaceFamily } from '../safe/values';
+import { cleanName, cleanTypefaceFamily } from '../safe/values';
 import { DEFAULT_TYPE_SCALE } from './schemas';
 import type {
   ColorRole,
@@ -198,7 +198,7 @@ export async function uploadLogo(
       const logo = await BrandLogo.create(
         {
           brandId: brand.id,
-          name: fields.name || file.name.replace(/\.[a-z0-9]+$/i, '').slice(0, 120) || 'Logo',
+          name: fields.name || cleanName(file.name.replace(/\.[a-z0-9]+$/i, ''), 'Logo', 120),
           variant: fields.variant,
           format,
           storageKey: key,
