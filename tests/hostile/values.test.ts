@@ -109,7 +109,7 @@ describe('typeface names at the boundary', () => {
 });
 
 describe('hostile values already stored (written with SQL, past every schema)', () => {
-  const hostileFamily = `Evil"; } body { background: url(https://${ATTACKER}/x) } </style><script>alert(1)</script>`;
+  const hostileFamily = `Evil\n"; } body { background: url(https://${ATTACKER}/x) } </style><script>alert(1)</script>`;
 
   it('V1.2.1 (ASVS 5.0) CSS: a hostile family in an old row comes out as one escaped CSS string in @font-face and in style attributes (CSSOM "serialize a string", CSS Syntax Level 3 via css-tree)', async () => {
     await sql(`UPDATE brand_typefaces SET family = $1, fallback = $2::jsonb WHERE id = $3`, [hostileFamily, JSON.stringify(['Georgia', 'x}</style><script>alert(2)</script>']), headingFaceId]);
