@@ -22,7 +22,7 @@ export function postgresBinDir(base = '/usr/lib/postgresql'): string | null {
   return majors.length ? join(base, majors[0], 'bin') : null;
 }
 
-export const CHROMIUM_PATH = process.env.PLUMBLINE_CHROMIUM ?? '/usr/bin/chromium';
+export const CHROMIUM_PATH = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
 export const GHOSTSCRIPT_PATH = '/usr/bin/gs';
 
 export const POSTGRESQL: DebianNeed = { pkg: 'postgresql', why: 'the database', present: () => postgresBinDir() !== null };
