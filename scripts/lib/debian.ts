@@ -11,6 +11,8 @@ export interface DebianNeed {
   why: string;
   /** True when the package (or what we need of it) is present. */
   present: () => boolean;
+  /** Where it is looked for, for messages. */
+  where?: string;
 }
 
 /** Where PostgreSQL's server binaries are: Debian puts them under /usr/lib/postgresql/<major>/bin. */
@@ -25,12 +27,23 @@ export function postgresBinDir(base = '/usr/lib/postgresql'): string | null {
 export const CHROMIUM_PATH = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
 export const GHOSTSCRIPT_PATH = '/usr/bin/gs';
 
-export const POSTGRESQL: DebianNeed = { pkg: 'postgresql', why: 'the database', present: () => postgresBinDir() !== null };
-export const CHROMIUM: DebianNeed = { pkg: 'chromium', why: 'the browser that prints PDFs', present: () => existsSync(CHROMIUM_PATH) };
+export const POSTGRESQL: DebianNeed = {
+  pkg: 'postgresql',
+  why: 'the database',
+  present: () => postgresBinDir() !== null,
+  where: '/usr/lib/postgresql/*/bin/initdb',
+};
+export const CHROMIUM: DebianNeed = {
+  pkg: 'chromium',
+  why: 'the browser that prints PDFs',
+  present: () => existsSync(CHROMIUM_PATH),
+  where: CHROMIUM_PATH === '/usr/bin/chromium' ? CHROMIUM_PATH : `${CHROMIUM_PATH} (CHROMIUM_PATH)`,
+};
 export const GHOSTSCRIPT: DebianNeed = {
   pkg: 'ghostscript',
   why: 'print-ready vector logo files',
   present: () => existsSync(GHOSTSCRIPT_PATH),
+  where: GHOSTSCRIPT_PATH,
 };
 
 /** Everything Plumbline needs from Debian; `npm start` and `npm test` both ensure all of it in one apt run. */
@@ -52,7 +65,7 @@ export function planInstall(needs: readonly DebianNeed[], asRoot: boolean): Inst
       missing,
       message:
         `Missing Debian package${missing.length > 1 ? 's' : ''}: ${whys.join(', ')}. ` +
-        `This user cannot install them. Run this once, then start again:\n` +
+        `Only root can install ${missing.length > 1 ? 'them' : 'it'}; run this once, then start again:\n` +
         `  sudo apt-get install -y --no-install-recommends ${missing.join(' ')}`,
     };
   }
@@ -109,8 +122,8 @@ export function ensureDebianPackages(
     .map((n) => n.why)
     .join(', ')})…`);
   for (const cmd of plan.commands) runApt(cmd);
-  const still = needs.filter((n) => plan.missing.includes(n.pkg) && !n.present()).map((n) => n.pkg);
-  if (still.length) throw new Error(`apt-get finished but ${still.join(', ')} is still not found.`);
+  const still = needs.filter((n) => plan.missing.includes(n.pkg) && !n.present()).map((n) => (n.where ? `${n.pkg} at ${n.where}` : n.pkg));
+  if (still.length) throw new Error(`apt-get finished, but this is still not found: ${still.join(', ')}.`);
   log(`  Installed ${plan.missing.join(', ')} in ${((Date.now() - started) / 1000).toFixed(0)} s.`);
   return plan.missing;
 }

@@ -61,7 +61,7 @@ export async function checkBrowser(executablePath: string): Promise<Check> {
     await page.setContent('<p>Plumbline print check</p>');
     const pdf = Buffer.from(await page.pdf({ format: 'A4' }));
     if (pdf.subarray(0, 5).toString() !== '%PDF-') throw new Error('the test print was not a PDF');
-    const version = (await browser.version()).replace('HeadlessChrome/', 'Chromium ');
+    const version = (await browser.version()).replace(/^(Headless)?Chrome\//, 'Chromium ');
     return { part, ok: true, detail: `${version} printed a test page (${pdf.length} bytes, ${((Date.now() - started) / 1000).toFixed(1)} s)` };
   } catch (err) {
     return { part, ok: false, detail: `Chromium at ${executablePath} could not print: ${firstLine(err)}`, fix: 'reinstall Debian\'s "chromium" (`apt-get install --reinstall chromium`) or set CHROMIUM_PATH' };

@@ -1,7 +1,7 @@
 // Brands and their people: creation, renaming, deletion, members and pending invitations.
 import { createHash, randomBytes } from 'node:crypto';
 import { Op, QueryTypes, type Transaction } from 'sequelize';
-import { Brand, BrandLogo, BrandMember, BrandTypeface, Invitation, Studio, StudioMember } from '../../../db/models';
+import { Brand, BrandMember, Invitation, Studio, StudioMember } from '../../../db/models';
 import { siteCache } from '../publishing/site-cache';
 import { storage } from '../storage/index.server';
 import { audit } from '../audit.server';
