@@ -223,6 +223,13 @@ describe('drafts kept in the browser', () => {
     expect(decideRestore({ ...draft, doc: saved }, { revision: 5, doc: saved }).kind).toBe('none');
     expect(decideRestore(null, { revision: 5, doc: saved }).kind).toBe('none');
   });
+  test('a blank page kept by the browser never competes with a saved template', () => {
+    // The editor normalises an empty document to one empty paragraph (ProseMirror's schema needs a block: from memory).
+    const blank = { baseRevision: 0, doc: { type: 'doc', content: [{ type: 'paragraph' }] } as GuidelineDoc, savedAt: 1 };
+    expect(decideRestore(blank, { revision: 1, doc: saved }).kind).toBe('none');
+    const nothing = { baseRevision: 0, doc: { type: 'doc', content: [] } as unknown as GuidelineDoc, savedAt: 1 };
+    expect(decideRestore(nothing, { revision: 1, doc: saved }).kind).toBe('none');
+  });
 });
 
 describe('published renderer', () => {
