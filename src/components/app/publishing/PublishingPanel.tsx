@@ -4,12 +4,13 @@ import { useState, type ReactNode } from 'react';
 import { api } from '../../../lib/client/api';
 import type { ShareLinkView } from '../../../lib/publishing/share-links.server';
 import { QueryRoot } from '../QueryRoot';
+import { When } from '../../ui/When';
+import { formatDate } from '../../../lib/format';
 
 interface Version { number: number; publishedAt: string; note: string; author: { name: string | null } }
 interface Compare { summary: string[] }
 type ShareLink = ShareLinkView;
 
-const when = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit' });
 
 function Card({ title, children, id }: { title: string; children: ReactNode; id: string }) {
   return (
@@ -80,7 +81,7 @@ function Versions({ slug, versions }: { slug: string; versions: Version[] }) {
           <li key={v.number} className="flex flex-wrap items-baseline gap-x-4 gap-y-1 py-3">
             <a className="font-semibold text-plumb hover:underline" href={`/b/${slug}/v/${v.number}`}>Version {v.number}</a>
             {i === 0 && <span className="rounded-full bg-plumb-wash px-2 py-0.5 text-xs font-semibold text-plumb-deep">current</span>}
-            <span className="text-sm text-ink-soft">{when.format(new Date(v.publishedAt))}{v.author.name ? ` · ${v.author.name}` : ''}</span>
+            <span className="text-sm text-ink-soft"><When value={v.publishedAt} as="dateTime" />{v.author.name ? ` · ${v.author.name}` : ''}</span>
             <span className="ml-auto flex gap-3 text-sm">
               <a className="hover:underline" href={`/b/${slug}/v/${v.number}/guideline.pdf?size=a4`}>PDF A4</a>
               <a className="hover:underline" href={`/b/${slug}/v/${v.number}/guideline.pdf?size=letter`}>PDF Letter</a>
@@ -165,9 +166,9 @@ function ShareLinks({ brandId, versions }: { brandId: string; versions: Version[
             <tbody>
               {links.data.map((l) => (
                 <tr key={l.id} className="border-t border-rule">
-                  <td className="py-2.5">{l.label ?? 'Unnamed link'}<div className="text-xs text-ink-soft">{[l.hasPassword && 'password', l.allowDownloads && 'downloads', l.expiresAt && `until ${when.format(new Date(l.expiresAt))}`].filter(Boolean).join(' · ')}</div></td>
+                  <td className="py-2.5">{l.label ?? 'Unnamed link'}<div className="text-xs text-ink-soft">{[l.hasPassword && 'password', l.allowDownloads && 'downloads', l.expiresAt && `until ${formatDate(l.expiresAt)}`].filter(Boolean).join(' · ')}</div></td>
                   <td>{l.version ? `Version ${l.version}` : 'Current'}</td>
-                  <td>{l.lastUsedAt ? `${when.format(new Date(l.lastUsedAt))} (${l.useCount}×)` : 'Never'}</td>
+                  <td>{l.lastUsedAt ? <><When value={l.lastUsedAt} as="dateTime" /> ({l.useCount}×)</> : 'Never'}</td>
                   <td><span className={l.state === 'active' ? 'font-semibold text-ok' : 'text-ink-soft'}>{l.state === 'active' ? 'Working' : l.state === 'expired' ? 'Expired' : 'Withdrawn'}</span></td>
                   <td className="text-right">{l.state === 'active' && <button type="button" className="btn-danger px-3 py-1" onClick={() => revoke.mutate(l.id)}>Withdraw</button>}</td>
                 </tr>
