@@ -103,7 +103,7 @@ export function instantiateTemplate(template: unknown, identity: Identity): Guid
     const issue = parsed.error.issues[0];
     throw new TemplateError(issue.path.join('.') || '(template)', issue.message);
   }
-  const content = parsed.data.doc.content.map((node, i) => {
+  const content = parsed.data.doc.content.map(({ instruction: _instruction, ...node }, i) => {
     const attrs = (node.attrs ?? {}) as Record<string, unknown>;
     const resolved = Object.fromEntries(
       Object.entries(attrs).map(([key, value]) => {
@@ -116,6 +116,22 @@ export function instantiateTemplate(template: unknown, identity: Identity): Guid
   const result = validateGuideline({ type: 'doc', content });
   if (!result.ok) throw new TemplateError(result.error.path, result.error.message);
   return result.doc;
+}
+
+type TextTree = { type?: string; text?: string; content?: TextTree[] };
+const paragraphTexts = (node: TextTree, out: string[]): string[] => {
+  if (node.type === 'paragraph' || node.type === 'heading') out.push((node.content ?? []).map((n) => n.text ?? '').join(''));
+  else for (const child of node.content ?? []) paragraphTexts(child, out);
+  return out;
+};
+
+/**
+ * The instruction texts a template marks with `"instruction": true` on a top-level node ("Write two or three short
+ * paragraphs…"): text meant for the designer, which the check before publishing finds if it was left in.
+ */
+export function templateInstructions(template: unknown): string[] {
+  const nodes = ((template as { doc?: { content?: unknown[] } })?.doc?.content ?? []) as (TextTree & { instruction?: unknown })[];
+  return nodes.filter((n) => n.instruction === true).flatMap((n) => paragraphTexts(n, []));
 }
 
 /** Attributes for a newly inserted block: its registry starter resolved against the identity. */
