@@ -60,7 +60,8 @@ function paragraphs(node: AnyNode, out: string[] = []): string[] {
   return out;
 }
 
-const ratioText = (r: number) => `${(Math.floor(r * 100) / 100).toFixed(2)}:1`;
+/** Two decimals, never rounded up to the threshold it failed (4.499 shows as 4.49, not 4.50). */
+const ratioText = (r: number, min: number) => `${(Number(r.toFixed(2)) >= min ? Math.floor(r * 100) / 100 : r).toFixed(2)}:1`;
 
 export function preflight({ doc, identity, shelf, instructions }: PreflightInput): Finding[] {
   const findings: Finding[] = [];
@@ -104,7 +105,7 @@ export function preflight({ doc, identity, shelf, instructions }: PreflightInput
         if (!fg || !bg) continue;
         const ratio = contrastRatio(fg.value, bg.value);
         if (ratio < CLAIM_MINIMUM[claim]) {
-          add('contrast_below_claim', id, where, `${fg.name} on ${bg.name} is ${ratioText(ratio)}, below ${claim} for body text (${CLAIM_MINIMUM[claim]}:1).`);
+          add('contrast_below_claim', id, where, `${fg.name} on ${bg.name} is ${ratioText(ratio, CLAIM_MINIMUM[claim])}, below ${claim} for body text (${CLAIM_MINIMUM[claim]}:1).`);
         }
       }
     }
