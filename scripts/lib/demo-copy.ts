@@ -1,10 +1,13 @@
 // The demo brand's own words in place of the starter template's instructions, so the demo publishes no template text.
 // Larchmere Coffee Roasters is our invented scenario; every line here is written for it.
 
+import { randomUUID } from 'node:crypto';
+
 type Node = { type: string; attrs?: Record<string, unknown>; content?: Node[]; text?: string };
 
-const para = (text: string): Node => ({ type: 'paragraph', content: [{ type: 'text', text }] });
-const item = (text: string): Node => ({ type: 'listItem', content: [para(text)] });
+// Every top-level block carries an id (review comments anchor to it); nested nodes do not.
+const para = (text: string, top = true): Node => ({ type: 'paragraph', ...(top ? { attrs: { id: randomUUID() } } : {}), content: [{ type: 'text', text }] });
+const item = (text: string): Node => ({ type: 'listItem', content: [para(text, false)] });
 const firstText = (n: Node): string => n.text ?? (n.content ?? []).map(firstText).find(Boolean) ?? '';
 
 const STORY = [
@@ -25,9 +28,9 @@ export function withDemoCopy(doc: { type: 'doc'; content: Node[] }): { type: 'do
   const content: Node[] = [];
   for (const node of doc.content) {
     const text = firstText(node);
-    if (node.type === 'paragraph' && text.startsWith('Write two or three short paragraphs')) content.push(...STORY.map(para));
-    else if (node.type === 'bulletList' && text.startsWith('A value in a few words')) content.push({ type: 'bulletList', content: VALUES.map(item) });
-    else if (node.type === 'blockquote' && text.startsWith('A single line the brand lives by')) content.push({ type: 'blockquote', content: [para(MOTTO)] });
+    if (node.type === 'paragraph' && text.startsWith('Write two or three short paragraphs')) content.push(...STORY.map((t) => para(t)));
+    else if (node.type === 'bulletList' && text.startsWith('A value in a few words')) content.push({ ...node, content: VALUES.map(item) });
+    else if (node.type === 'blockquote' && text.startsWith('A single line the brand lives by')) content.push({ ...node, content: [para(MOTTO, false)] });
     else if (node.type === 'paragraph' && text.startsWith('Replace these frames')) content.push(para(IMAGERY));
     else if (node.type === 'imagery') continue;
     else if (node.type === 'typography') content.push({ ...node, attrs: { ...node.attrs, specimenText: SPECIMEN } });

@@ -3,7 +3,7 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, test } from 'vitest';
 import { instantiateTemplate, templateInstructions } from '../../src/lib/guideline/templates';
-import type { GuidelineDoc } from '../../src/lib/guideline/document';
+import { validateGuideline, type GuidelineDoc } from '../../src/lib/guideline/document';
 import type { Identity } from '../../src/lib/identity/types';
 import { preflight, type ShelfEntry } from '../../src/lib/publishing/preflight';
 import { withDemoCopy } from '../../scripts/lib/demo-copy';
@@ -39,7 +39,9 @@ describe('what the check finds', () => {
     expect(found).toContain('missing_alt');
   });
   test('the demo’s own copy leaves no template text and no stand-in images', () => {
-    const found = codes(withDemoCopy(instantiateTemplate(brandBook, identity) as never) as GuidelineDoc);
+    const filled = withDemoCopy(instantiateTemplate(brandBook, identity) as never) as GuidelineDoc;
+    expect(validateGuideline(filled).ok).toBe(true);
+    const found = codes(filled);
     expect(found).not.toContain('template_text');
     expect(found).not.toContain('image_placeholder');
   });
