@@ -179,6 +179,10 @@ describe('templates', () => {
     const pairs = suggestedPairs(identity);
     expect(pairs[0]).toEqual({ foreground: 'c-espresso', background: 'c-filter-paper' });
     expect(pairs.every((p) => p.foreground !== p.background)).toBe(true);
+    // Beyond text on ground, every suggestion reaches WCAG 2.2 AA for body text (SC 1.4.3: 4.5:1).
+    const value = (id: string) => identity.colors.find((c) => c.id === id)!.value;
+    expect(pairs.slice(1).every((p) => contrastRatio(value(p.foreground), value(p.background)) >= 4.5)).toBe(true);
+    expect(pairs.length).toBeGreaterThan(1);
     expect(starterAttrs({ colorIds: ['$all'] }, identity).colorIds).toHaveLength(identity.colors.length);
   });
 });

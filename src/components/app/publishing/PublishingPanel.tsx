@@ -210,15 +210,15 @@ function ShareLinks({ brandId, versions }: { brandId: string; versions: Version[
           <p className="text-sm text-ink-soft">No links yet.</p>
         ) : (
           <table className="w-full text-left text-sm" aria-label="Share links">
-            <thead className="text-xs uppercase tracking-wider text-ink-faint"><tr><th className="py-2">For</th><th>Opens</th><th>Last used</th><th>State</th><th><span className="sr-only">Actions</span></th></tr></thead>
+            <thead className="text-xs uppercase tracking-wider text-ink-faint"><tr><th scope="col" className="py-2 pr-4">For</th><th scope="col" className="pr-4">Opens</th><th scope="col" className="pr-4">Last used</th><th scope="col" className="pr-4">State</th><th scope="col"><span className="sr-only">Actions</span></th></tr></thead>
             <tbody>
               {links.data.map((l) => (
                 <tr key={l.id} className="border-t border-rule">
-                  <td className="py-2.5">{l.label ?? 'Unnamed link'}<div className="text-xs text-ink-soft">{[l.hasPassword && 'password', l.allowDownloads && 'downloads', l.expiresAt && `until ${formatDate(l.expiresAt)}`].filter(Boolean).join(' · ')}</div></td>
-                  <td>{l.version ? `Version ${l.version}` : 'Current'}</td>
-                  <td>{l.lastUsedAt ? <><When value={l.lastUsedAt} as="dateTime" /> ({l.useCount}×)</> : 'Never'}</td>
-                  <td><span className={l.state === 'active' ? 'font-semibold text-ok' : 'text-ink-soft'}>{l.state === 'active' ? 'Working' : l.state === 'expired' ? 'Expired' : 'Withdrawn'}</span></td>
-                  <td className="text-right">{l.state === 'active' && <button type="button" className="btn-danger px-3 py-1" onClick={() => revoke.mutate(l.id)}>Withdraw</button>}</td>
+                  <td className="py-2.5 pr-4 align-top">{l.label ?? 'Unnamed link'}<div className="text-xs text-ink-soft">{[l.hasPassword && 'password', l.allowDownloads && 'downloads', l.expiresAt && `until ${formatDate(l.expiresAt)}`].filter(Boolean).join(' · ')}</div></td>
+                  <td className="pr-4 align-top py-2.5 whitespace-nowrap">{l.version ? `Version ${l.version}` : 'Current'}</td>
+                  <td className="pr-4 align-top py-2.5">{l.lastUsedAt ? <><When value={l.lastUsedAt} as="dateTime" /> ({l.useCount}×)</> : 'Never'}</td>
+                  <td className="pr-4 align-top py-2.5"><span className={l.state === 'active' ? 'font-semibold text-ok' : 'text-ink-soft'}>{l.state === 'active' ? 'Working' : l.state === 'expired' ? 'Expired' : 'Withdrawn'}</span></td>
+                  <td className="py-2 text-right align-top">{l.state === 'active' && <button type="button" className="btn-danger px-3 py-1" onClick={() => revoke.mutate(l.id)}>Withdraw</button>}</td>
                 </tr>
               ))}
             </tbody>
