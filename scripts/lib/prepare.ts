@@ -46,7 +46,7 @@ export interface ServerEnv {
 
 /** Start the built server and resolve once it answers HTTP. */
 export async function startServer(env: ServerEnv, opts: { quiet?: boolean } = {}): Promise<ChildProcess> {
-  const child = spawn(process.execPath, [join(outDir(), 'server', 'entry.mjs')], {
+  const child = spawn(process.execPath, [join(projectRoot, 'scripts', 'serve.mjs'), outDir()], {
     cwd: projectRoot,
     stdio: opts.quiet ? ['ignore', 'ignore', 'inherit'] : 'inherit',
     env: {

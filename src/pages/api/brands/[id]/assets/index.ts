@@ -16,7 +16,7 @@ export const GET = endpoint(async ({ locals, params, url }) => {
 export const POST = endpoint(async ({ locals, params, request }) => {
   const { caller, brand } = await authorizeBrand(locals, idParam(params.id), 'asset.upload');
   // The whole request may hold several files; each file's own limit is checked as it is read.
-  const form = await readForm(request, MAX_FILES_PER_UPLOAD * MAX_ASSET_BYTES);
+  const form = await readForm(request, MAX_FILES_PER_UPLOAD * MAX_ASSET_BYTES, MAX_ASSET_BYTES);
   const files = form.getAll('file').filter((f): f is File => f instanceof File);
   if (!files.length) throw new ApiError(400, 'missing_file', 'Attach one or more files in the "file" field.');
   if (files.length > MAX_FILES_PER_UPLOAD) throw new ApiError(400, 'too_many_files', `Upload at most ${MAX_FILES_PER_UPLOAD} files at once.`);
