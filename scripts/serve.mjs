@@ -5,6 +5,7 @@
 import { statSync } from 'node:fs';
 import http from 'node:http';
 import { join, resolve } from 'node:path';
+import { setTimeout } from 'node:timers';
 import { pathToFileURL } from 'node:url';
 import send from 'send';
 
@@ -47,6 +48,10 @@ const server = http.createServer((req, res) => {
       .pipe(res);
     return;
   }
+  // A body refused part-way (413) is never read to its end: after a moment to read the answer, the connection goes.
+  res.on('finish', () => {
+    if (!req.complete) setTimeout(() => req.socket.destroy(), 2000).unref();
+  });
   // No `next`: a path no route matches gets Astro's own 404 page.
   handler(req, res, undefined, { socketAddress: req.socket.remoteAddress });
 });

@@ -60,8 +60,8 @@ export function parseWith<T extends z.ZodType>(schema: T, value: unknown, where 
 
 const MAX_JSON_BYTES = 1_000_000;
 
-const tooLarge = (maxBytes: number) =>
-  new ApiError(413, 'too_large', `The request body is larger than ${maxBytes >= 1024 * 1024 ? `${Math.round(maxBytes / 1024 / 1024)} MB` : `${Math.ceil(maxBytes / 1024)} kB`}.`);
+const size = (bytes: number) => (bytes >= 1024 * 1024 ? `${Math.round(bytes / 1024 / 1024)} MB` : `${Math.ceil(bytes / 1024)} kB`);
+const tooLarge = (maxBytes: number) => new ApiError(413, 'too_large', `The request body is too large: at most ${size(maxBytes)} is accepted here.`);
 
 /** The request body's chunks, stopping with a 413 as soon as more than `maxBytes` arrive (chunked bodies too). */
 export async function* cappedBody(request: Request, maxBytes: number): AsyncGenerator<Uint8Array> {
@@ -75,12 +75,12 @@ export async function* cappedBody(request: Request, maxBytes: number): AsyncGene
       const { done, value } = await reader.read();
       if (done) return;
       total += value.byteLength;
+      // Stop pulling, without cancelling: cancelling would reset the connection before the 413 is sent.
       if (total > maxBytes) throw tooLarge(maxBytes);
       yield value;
     }
   } finally {
-    // Stop pulling from the socket: the rest of an oversized body is never read into memory.
-    reader.cancel().catch(() => {});
+    reader.releaseLock();
   }
 }
 
@@ -132,31 +132,42 @@ export function idParam(value: string | undefined, what = 'That brand'): string 
 export const methodNotAllowed: APIRoute = ({ request }) =>
   errorResponse(new ApiError(405, 'method_not_allowed', `${request.method} is not offered here.`));
 
+export interface FormLimits {
+  /** The most one file may hold; the default is the whole request's cap. */
+  maxFileBytes?: number;
+  /** The error for a file over maxFileBytes (default: 413 too_large), raised as soon as it is passed. */
+  fileTooLarge?: (filename: string) => ApiError;
+}
+
 /**
- * Read a multipart form as it streams in: the whole request may carry `maxBytes` (413 past that), and each file
- * keeps at most `maxFileBytes + 1` bytes, so an oversized file is still refused by its own size check without
- * ever being held whole.
+ * Read a multipart form as it streams in: 413 once the request passes `maxBytes`, and an error as soon as one
+ * file passes `maxFileBytes`, so no oversized body is ever held whole.
  */
-export async function readForm(request: Request, maxBytes: number, maxFileBytes = maxBytes): Promise<FormData> {
+export async function readForm(request: Request, maxBytes: number, limits: FormLimits = {}): Promise<FormData> {
   const type = request.headers.get('content-type') ?? '';
   if (!type.includes('multipart/form-data')) {
     throw new ApiError(415, 'unsupported_media_type', 'Send files as multipart/form-data, in a field named "file".');
   }
+  const maxFileBytes = limits.maxFileBytes ?? maxBytes;
+  const fileTooLarge = limits.fileTooLarge ?? (() => new ApiError(413, 'too_large', `The file is too large: at most ${size(maxFileBytes)} is accepted here.`));
   const malformed = () => new ApiError(400, 'malformed_form', 'The upload could not be read as a form.');
   let parser: busboy.Busboy;
   try {
-    parser = busboy({ headers: { 'content-type': type }, limits: { fileSize: maxFileBytes + 1, fields: 100, fieldSize: 64 * 1024, parts: 200 } });
+    parser = busboy({ headers: { 'content-type': type }, limits: { fileSize: maxFileBytes, fields: 100, fieldSize: 64 * 1024, parts: 200 } });
   } catch {
     throw malformed();
   }
   const form = new FormData();
   const pending: Promise<void>[] = [];
-  let failed: unknown = null;
+  let oversized: string | null = null;
   parser.on('field', (name, value) => form.append(name, value));
   parser.on('file', (name, stream, info) => {
-    const chunks: Buffer[] = [];
-    stream.on('data', (chunk: Buffer) => chunks.push(chunk));
-    pending.push(new Promise((done) => stream.on('close', () => {
+    const chunks: Uint8Array<ArrayBuffer>[] = [];
+    stream.on('data', (chunk: Buffer) => chunks.push(new Uint8Array(chunk)));
+    stream.on('limit', () => (oversized ??= info.filename ?? 'upload'));
+    // A refused upload destroys the parser, which errors its open file: handled here, or the process would stop.
+    stream.on('error', () => {});
+    pending.push(new Promise((done) => stream.once('close', () => {
       form.append(name, new File(chunks, info.filename ?? 'upload', { type: info.mimeType }));
       done();
     })));
@@ -165,15 +176,16 @@ export async function readForm(request: Request, maxBytes: number, maxFileBytes 
     parser.on('close', resolve);
     parser.on('error', reject);
   });
-  finished.catch((err) => (failed ??= err));
+  finished.catch(() => {});
   try {
     for await (const chunk of cappedBody(request, maxBytes)) {
-      if (failed) throw malformed();
       if (!parser.write(chunk)) await Promise.race([new Promise((r) => parser.once('drain', r)), finished]);
+      if (oversized) throw fileTooLarge(oversized);
     }
     parser.end();
     await finished;
     await Promise.all(pending);
+    if (oversized) throw fileTooLarge(oversized);
   } catch (err) {
     parser.destroy();
     if (err instanceof ApiError) throw err;

@@ -2,7 +2,7 @@
 
 const BASE = 'http://plumbline.invalid';
 /** Control characters, whitespace and backslashes: browsers drop or reinterpret them when they parse a URL. */
-const UNSAFE = /[\u0000-\u0020\u007f-\u009f\\]/;
+const UNSAFE = /[\p{Cc}\s\\]/u;
 /** Encoded layers we unwrap before giving up on a value as deliberately obscured. */
 const MAX_DECODES = 3;
 
