@@ -28,16 +28,18 @@ function staticFile(pathname) {
 }
 
 const server = http.createServer((req, res) => {
+  const encoded = (req.url ?? '/').split(/[?#]/)[0];
   let pathname;
   try {
-    pathname = decodeURI(new URL(req.url ?? '/', 'http://x').pathname);
+    pathname = decodeURI(encoded);
   } catch {
     res.writeHead(400).end('Bad request.');
     return;
   }
   const file = req.method === 'GET' || req.method === 'HEAD' ? staticFile(pathname) : null;
   if (file) {
-    send(req, file, { root: clientDir, dotfiles: 'deny', index: false })
+    // send decodes the path itself.
+    send(req, encoded, { root: clientDir, dotfiles: 'deny', index: false })
       .on('headers', (r) => {
         // Hashed build assets never change.
         if (file.startsWith('/_astro/')) r.setHeader('cache-control', 'public, max-age=31536000, immutable');
