@@ -50,9 +50,15 @@ const server = http.createServer((req, res) => {
       .pipe(res);
     return;
   }
-  // A body refused part-way (413) is never read to its end: after a moment to read the answer, the connection goes.
+  // A body refused part-way (413) is never read to its end, so the connection cannot carry another request: say so
+  // in the answer, and if the client still has not stopped a moment later (time to read the answer), drop it.
+  const writeHead = res.writeHead;
+  res.writeHead = function (...args) {
+    if (!req.complete) res.setHeader('connection', 'close');
+    return writeHead.apply(this, args);
+  };
   res.on('finish', () => {
-    if (!req.complete) setTimeout(() => req.socket.destroy(), 2000).unref();
+    if (!req.complete) setTimeout(() => !req.complete && req.socket.destroy(), 2000).unref();
   });
   // No `next`: a path no route matches gets Astro's own 404 page.
   handler(req, res, undefined, { socketAddress: req.socket.remoteAddress });
