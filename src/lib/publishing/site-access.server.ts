@@ -30,8 +30,6 @@ export interface SiteAccess {
   isEditor: boolean;
 }
 
-const escapeHtml = (text: string) => text.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
-
 /** A small plain page; title and message are text (escaped here), never HTML. */
 const page = (status: number, title: string, message: string) =>
   new Response(
