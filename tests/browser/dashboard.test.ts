@@ -57,7 +57,7 @@ test('a reviewer sees the brand but not the controls to change its people', asyn
   await page.waitForURL(/\/app$/);
   await page.getByRole('link', { name: 'Larchmere Coffee Roasters' }).click();
   await page.getByRole('heading', { level: 1, name: 'Larchmere Coffee Roasters' }).waitFor();
-  expect(await page.getByText('the brand\'s owners manage its people').isVisible()).toBe(true);
+  expect(await page.getByText(/owners manage its people/).isVisible()).toBe(true);
   expect(await page.getByRole('button', { name: 'Remove' }).count()).toBe(0);
   await context.close();
 });
