@@ -39,6 +39,8 @@ export interface ServerEnv {
   siteUrl: string;
   secret: string;
   signInLimit?: number;
+  /** Proxies whose X-Forwarded-For is believed (TRUSTED_PROXIES); none when unset. */
+  trustedProxies?: string;
   /** E-mails one account may send per hour (MAIL_SEND_LIMIT). */
   mailSendLimit?: number;
   filesDir?: string;
@@ -46,9 +48,9 @@ export interface ServerEnv {
   mail?: { smtpHost: string; smtpPort: number; from?: string; captureDir?: string };
 }
 
-/** Start the built server and resolve once it answers HTTP. */
+/** Start the built server (scripts/serve.mjs over outDir()) and resolve once it answers HTTP. */
 export async function startServer(env: ServerEnv, opts: { quiet?: boolean } = {}): Promise<ChildProcess> {
-  const child = spawn(process.execPath, [join(outDir(), 'server', 'entry.mjs')], {
+  const child = spawn(process.execPath, [join(projectRoot, 'scripts', 'serve.mjs'), outDir()], {
     cwd: projectRoot,
     stdio: opts.quiet ? ['ignore', 'ignore', 'inherit'] : 'inherit',
     env: {
@@ -61,6 +63,7 @@ export async function startServer(env: ServerEnv, opts: { quiet?: boolean } = {}
       SITE_URL: env.siteUrl,
       AUTH_SECRET: env.secret,
       ...(env.signInLimit ? { AUTH_SIGN_IN_LIMIT: String(env.signInLimit) } : {}),
+      ...(env.trustedProxies ? { TRUSTED_PROXIES: env.trustedProxies } : {}),
       ...(env.mailSendLimit ? { MAIL_SEND_LIMIT: String(env.mailSendLimit) } : {}),
       // The catcher's folder comes from `mail` below or not at all, never from the caller's environment.
       MAIL_CAPTURE_DIR: undefined,
