@@ -46,6 +46,8 @@ export default defineConfig({
       SMTP_PASSWORD: envField.string({ context: 'server', access: 'secret', optional: true }),
       MAIL_FROM: envField.string({ context: 'server', access: 'secret', default: 'Plumbline <mail@plumbline.invalid>' }),
       MAIL_CAPTURE_DIR: envField.string({ context: 'server', access: 'secret', optional: true }),
+      // E-mails one account may send per hour: invitations, resends, briefs, mood boards, review requests.
+      MAIL_SEND_LIMIT: envField.number({ context: 'server', access: 'secret', default: 60 }),
     },
   },
 });

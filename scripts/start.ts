@@ -48,7 +48,16 @@ let mail: { smtpHost: string; smtpPort: number; captureDir?: string };
 if (process.env.SMTP_HOST) {
   mail = { smtpHost: process.env.SMTP_HOST, smtpPort: Number(process.env.SMTP_PORT ?? 587) };
 } else {
-  const fake = await startFakeSmtp({ dir: join(dataDir, 'mail'), port: Number(process.env.PLUMBLINE_SMTP_PORT ?? 0) });
+  // Each caught message is named here with its first link: nobody's inbox receives it, so whoever runs this
+  // server hands an address link to the person who signed up (the viewer only opens once an address is proven).
+  const fake = await startFakeSmtp({
+    dir: join(dataDir, 'mail'),
+    port: Number(process.env.PLUMBLINE_SMTP_PORT ?? 0),
+    onMessage: (m) => {
+      const link = /https?:\/\/\S+/.exec(m.text)?.[0];
+      console.log(`  ✉ to ${m.envelope.to.join(', ')}: ${m.subject}${link ? `\n    ${link}` : ''}`);
+    },
+  });
   mail = { smtpHost: fake.host, smtpPort: fake.port, captureDir: fake.dir };
 }
 

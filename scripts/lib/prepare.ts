@@ -41,6 +41,8 @@ export interface ServerEnv {
   signInLimit?: number;
   /** Proxies whose X-Forwarded-For is believed (TRUSTED_PROXIES); none when unset. */
   trustedProxies?: string;
+  /** E-mails one account may send per hour (MAIL_SEND_LIMIT). */
+  mailSendLimit?: number;
   filesDir?: string;
   /** E-mail: the SMTP relay and, when the local fake keeps the messages, its folder (src/lib/mail). */
   mail?: { smtpHost: string; smtpPort: number; from?: string; captureDir?: string };
@@ -62,6 +64,9 @@ export async function startServer(env: ServerEnv, opts: { quiet?: boolean } = {}
       AUTH_SECRET: env.secret,
       ...(env.signInLimit ? { AUTH_SIGN_IN_LIMIT: String(env.signInLimit) } : {}),
       ...(env.trustedProxies ? { TRUSTED_PROXIES: env.trustedProxies } : {}),
+      ...(env.mailSendLimit ? { MAIL_SEND_LIMIT: String(env.mailSendLimit) } : {}),
+      // The catcher's folder comes from `mail` below or not at all, never from the caller's environment.
+      MAIL_CAPTURE_DIR: undefined,
       ...(env.filesDir ? { FILES_DIR: env.filesDir } : {}),
       ...(env.mail
         ? {

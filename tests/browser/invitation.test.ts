@@ -1,9 +1,10 @@
 // The invitation, end to end in Debian's chromium: the owner invites an unknown address, the e-mailed link is
-// followed, the invitee creates an account on the way and lands on the brand with the invited role.
+// followed, the invitee creates an account on the way, proves the address by the mailed link, accepts and lands on
+// the brand with the invited role.
 import { randomUUID } from 'node:crypto';
 import { chromium, type Browser } from 'playwright-core';
 import { afterAll, beforeAll, expect, test } from 'vitest';
-import { signUpFresh } from '../support/client';
+import { baseUrl, signUpFresh, verificationPath } from '../support/client';
 import { launchOptions } from '../support/browser';
 import { lastMailTo, linkIn } from '../support/mailbox';
 
@@ -36,6 +37,12 @@ test('an invited person follows the e-mailed link, signs up and joins as reviewe
   await page.getByLabel('E-mail').fill(email);
   await page.getByLabel('Password').fill('correct-horse-battery');
   await page.getByRole('button', { name: /create/i }).click();
+  // Back on the invitation: the new account must prove its address before it can accept.
+  await page.getByRole('heading', { name: 'Check your inbox' }).waitFor();
+  expect(await page.getByRole('button', { name: /accept/i }).count()).toBe(0);
+  await page.goto(baseUrl() + verificationPath(email));
+  await page.waitForURL(new RegExp(`/invite/`));
+  await page.getByRole('button', { name: `Accept and open ${brand.name}` }).click();
   await page.waitForURL(new RegExp(`/app/brands/${brand.id}`));
   await page.getByRole('heading', { level: 1, name: brand.name }).waitFor();
   expect(await page.getByText('Reviewer', { exact: true }).first().isVisible()).toBe(true);

@@ -4,7 +4,8 @@ import { afterAll, describe, expect, test } from 'vitest';
 import { DEMO_PASSWORD, DEMO_PEOPLE } from '../../db/seeders/demo';
 import { freePort } from '../../scripts/lib/postgres';
 import { startServer } from '../../scripts/lib/prepare';
-import { Client, baseUrl, signIn } from '../support/client';
+import { Client, baseUrl, signIn, verifyByMail } from '../support/client';
+import { lastMailTo } from '../support/mailbox';
 import { closeDb, sql } from '../support/db';
 import { inject } from 'vitest';
 import { request as httpRequest } from 'node:http';
@@ -24,6 +25,12 @@ describe('sign-up', () => {
     expect(cookie).toMatch(/HttpOnly/i);
     expect(cookie).toMatch(/SameSite=Lax/i);
     expect(cookie).not.toMatch(/Secure/i); // plain http on loopback; https sites get Secure
+    // The address is proven by the mailed link before the account may work on brands.
+    expect(lastMailTo(email).subject).toBe('Confirm your e-mail address for Plumbline');
+    const before = await client.get('/api/brands');
+    expect(before.status).toBe(403);
+    expect(before.body.error.code).toBe('email_unverified');
+    await verifyByMail(client, email);
     expect((await client.get('/api/brands')).status).toBe(200);
     const [row] = await sql('SELECT count(*)::int AS n FROM session s JOIN "user" u ON u.id = s."userId" WHERE u.email = $1', [email]);
     expect(row.n).toBe(1);

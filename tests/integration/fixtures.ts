@@ -1,5 +1,5 @@
 // People and brands for integration tests, created through the public API like a real studio would.
-import { Client, signUpFresh } from '../support/client';
+import { Client, joinBrand, signUpFresh } from '../support/client';
 import type { BrandRole } from '../../src/lib/auth/roles';
 import { makeClientWork } from './client-fixture';
 
@@ -13,7 +13,7 @@ export interface Cast {
   clients: Record<CallerName, Client>;
   emails: Record<Exclude<CallerName, 'anonymous'>, string>;
   /** An extra person whose membership the member routes may change or remove. */
-  target: { email: string };
+  target: { email: string; client: Client };
 }
 
 /** One signed-in person per role, an outsider with a studio of their own, and an anonymous client. */
@@ -29,7 +29,7 @@ export async function makeCast(): Promise<Cast> {
   });
   // The outsider runs a studio of their own, so they are signed in and busy, just not on our brand.
   await clients.outsider.post('/api/brands', { name: 'Outsider Works' });
-  return { clients, emails, target: { email: target.email } };
+  return { clients, emails, target: { email: target.email, client: target.client } };
 }
 
 /** What a matrix row may refer to: a fresh brand with every role filled, and things inside it. */
@@ -62,19 +62,16 @@ export async function makeBrand(cast: Cast, name = 'Fixture Brand'): Promise<Fix
   const created = await owner.post('/api/brands', { name });
   if (created.status !== 201) throw new Error(`brand create answered ${created.status}`);
   const brandId: string = created.body.brand.id;
-  const roles: [string, BrandRole][] = [
-    [cast.emails.editor, 'editor'],
-    [cast.emails.reviewer, 'reviewer'],
-    [cast.emails.partner, 'partner'],
-    [cast.emails.viewer, 'viewer'],
-    [cast.target.email, 'viewer'],
+  // Each person is invited and accepts, as nobody joins a brand without acting.
+  const person = (name: 'editor' | 'reviewer' | 'partner' | 'viewer') => ({ client: cast.clients[name], email: cast.emails[name] });
+  const roles: [{ client: Client; email: string }, BrandRole][] = [
+    [person('editor'), 'editor'],
+    [person('reviewer'), 'reviewer'],
+    [person('partner'), 'partner'],
+    [person('viewer'), 'viewer'],
   ];
-  let targetMemberId = '';
-  for (const [email, role] of roles) {
-    const r = await owner.post(`/api/brands/${brandId}/members`, { email, role });
-    if (r.status !== 201) throw new Error(`member add answered ${r.status}: ${JSON.stringify(r.body)}`);
-    if (email === cast.target.email) targetMemberId = r.body.member.id;
-  }
+  for (const [who, role] of roles) await joinBrand(owner, brandId, who, role);
+  const targetMemberId = await joinBrand(owner, brandId, cast.target, 'viewer');
   const color = await owner.post(`/api/brands/${brandId}/colors`, { name: 'Ink', value: '#1d2a44' });
   const typeface = await owner.post(`/api/brands/${brandId}/typefaces`, { shipped: 'dm-sans', role: 'body' });
   const logo = await owner.upload(`/api/brands/${brandId}/logos`, 'mark.svg', FIXTURE_SVG, 'image/svg+xml');

@@ -1,6 +1,6 @@
 // Invitations over HTTP: accept by token with the invited address, wrong account, resend, revoke, expiry.
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { baseUrl, Client, signUpFresh } from '../support/client';
+import { baseUrl, Client, signUpFresh, signUpUnverified, verifyByMail } from '../support/client';
 import { closeDb, sql } from '../support/db';
 import { lastMailTo, linkIn } from '../support/mailbox';
 
@@ -11,11 +11,11 @@ const invite = async (email: string, role = 'reviewer') => {
   expect(r.status).toBe(201);
   return { id: r.body.invitation.id as string, ...linkIn(lastMailTo(email), '/invite/') };
 };
+/** Sign up with the invited address and prove it through the mailed link. */
 const signUp = async (email: string) => {
-  const c = new Client();
-  const r = await c.post('/api/auth/sign-up/email', { email, password: 'correct-horse-battery', name: 'Invited Person' });
-  expect(r.status).toBe(200);
-  return c;
+  const { client } = await signUpUnverified(email, 'Invited Person');
+  await verifyByMail(client, email);
+  return client;
 };
 // RFC 2606 reserves .example for documentation and tests.
 const fresh = (label: string) => `${label}-${Date.now()}-${Math.random().toString(36).slice(2, 7)}@client.example`;
@@ -35,7 +35,7 @@ describe('accepting', () => {
     const person = await signUp(email);
     const r = await person.post(`/api/invitations/${token}/accept`, {});
     expect(r.status).toBe(200);
-    expect(r.body.joined).toEqual({ brandId, role: 'reviewer' });
+    expect(r.body.joined).toMatchObject({ brandId, role: 'reviewer' });
     expect((await person.get(`/api/brands/${brandId}`)).status).toBe(200);
     const again = await person.post(`/api/invitations/${token}/accept`, {});
     expect(again.status).toBe(410);
@@ -44,12 +44,16 @@ describe('accepting', () => {
     expect(row.n).toBeGreaterThanOrEqual(1);
   });
 
-  test('following the link signed in with the invited address joins at once and lands on the brand', async () => {
+  test('following the link signed in with the invited address offers a button; pressing it joins and lands on the brand', async () => {
     const email = fresh('signed');
     const { token } = await invite(email, 'partner');
     const person = await signUp(email);
-    const r = await person.get(`/invite/${token}`);
-    expect(r.status).toBe(302);
+    const page = await person.get(`/invite/${token}`);
+    expect(page.status).toBe(200);
+    expect(page.body).toContain('Accept and open Harrow Bakery');
+    expect(await sql(`SELECT 1 FROM brand_members m JOIN "user" u ON u.id = m.user_id WHERE m.brand_id = $1 AND u.email = $2`, [brandId, email])).toHaveLength(0);
+    const r = await person.request('POST', `/invite/${token}`, '', { 'content-type': 'application/x-www-form-urlencoded' });
+    expect(r.status).toBe(303);
     expect(r.headers.get('location')).toBe(`/app/brands/${brandId}?joined=1`);
     const [m] = await sql(`SELECT m.role FROM brand_members m JOIN "user" u ON u.id = m.user_id WHERE m.brand_id = $1 AND u.email = $2`, [brandId, email]);
     expect(m.role).toBe('partner');

@@ -1,6 +1,7 @@
 // Members of a brand: adding people, invitations for unknown addresses, roles, and the last owner.
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { signUpFresh, type Client } from '../support/client';
+import { joinBrand, signUpFresh, type Client } from '../support/client';
+import { lastMailTo, linkIn } from '../support/mailbox';
 import { closeDb, sql } from '../support/db';
 
 let owner: Client;
@@ -12,14 +13,18 @@ beforeAll(async () => {
 afterAll(closeDb);
 
 describe('members', () => {
-  test('an existing user is added at once and can then see the brand', async () => {
+  test('an existing user is invited, not added, and sees the brand only after accepting', async () => {
     const { client: colleague, email } = await signUpFresh('colleague');
     expect((await colleague.get(`/api/brands/${brandId}`)).status).toBe(404);
     const r = await owner.post(`/api/brands/${brandId}/members`, { email: email.toUpperCase(), role: 'editor' });
     expect(r.status).toBe(201);
-    expect(r.body.member).toMatchObject({ email, role: 'editor' });
+    expect(r.body.member).toBeUndefined();
+    expect(r.body.invitation).toMatchObject({ email, role: 'editor' });
+    expect((await colleague.get(`/api/brands/${brandId}`)).status).toBe(404);
+    const { token } = linkIn(lastMailTo(email), '/invite/');
+    expect((await colleague.post(`/api/invitations/${token}/accept`, {})).status).toBe(200);
     expect((await colleague.get(`/api/brands/${brandId}`)).body.brand.role).toBe('editor');
-    const audit = await sql(`SELECT details FROM audit_events WHERE brand_id = $1 AND action = 'member.add'`, [brandId]);
+    const audit = await sql(`SELECT details FROM audit_events WHERE brand_id = $1 AND action = 'member.invite'`, [brandId]);
     expect(audit.map((a) => a.details.email)).toContain(email);
   });
 
@@ -38,8 +43,9 @@ describe('members', () => {
   });
 
   test('adding someone twice is a conflict', async () => {
-    const { email } = await signUpFresh('twice');
-    await owner.post(`/api/brands/${brandId}/members`, { email, role: 'viewer' });
+    const person = await signUpFresh('twice');
+    const email = person.email;
+    await joinBrand(owner, brandId, person, 'viewer');
     const again = await owner.post(`/api/brands/${brandId}/members`, { email, role: 'partner' });
     expect(again.status).toBe(409);
     expect(again.body.error.code).toBe('already_member');
@@ -62,8 +68,9 @@ describe('members', () => {
     const remove = await owner.delete(`/api/brands/${brandId}/members/${me.id}`);
     expect(remove.status).toBe(409);
 
-    const { client: second, email } = await signUpFresh('second-owner');
-    await owner.post(`/api/brands/${brandId}/members`, { email, role: 'owner' });
+    const secondPerson = await signUpFresh('second-owner');
+    const second = secondPerson.client;
+    await joinBrand(owner, brandId, secondPerson, 'owner');
     expect((await owner.patch(`/api/brands/${brandId}/members/${me.id}`, { role: 'editor' })).status).toBe(200);
     expect((await owner.get(`/api/brands/${brandId}/members`)).status).toBe(200); // editors still read members
     expect((await owner.post(`/api/brands/${brandId}/members`, { email: 'x@y.example', role: 'viewer' })).status).toBe(403);

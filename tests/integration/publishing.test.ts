@@ -1,6 +1,6 @@
 // Publishing over HTTP: immutable versions, what changed, the read-only site by role, and share links.
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { Client, baseUrl, signUpFresh } from '../support/client';
+import { Client, baseUrl, joinBrand, signUpFresh } from '../support/client';
 import { closeDb, sql } from '../support/db';
 
 let owner: Client;
@@ -89,8 +89,9 @@ describe('versions', () => {
   });
 
   test('a viewer reads the published site but not the draft', async () => {
-    const { client: viewer, email } = await signUpFresh('viewer');
-    await owner.post(api('/members'), { email, role: 'viewer' });
+    const viewerPerson = await signUpFresh('viewer');
+    const viewer = viewerPerson.client;
+    await joinBrand(owner, brandId, viewerPerson, 'viewer');
     expect((await viewer.get(`/b/${slug}`)).status).toBe(200);
     expect((await viewer.get(api('/guideline'))).status).toBe(403);
   });

@@ -1,6 +1,6 @@
 // Reviews: a request e-mailed to reviewers, comments anchored to a block id, replies, resolve, decisions; publish notices.
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { Client, signUpFresh } from '../support/client';
+import { Client, joinBrand, signUpFresh } from '../support/client';
 import { closeDb, sql } from '../support/db';
 import { lastMailTo, linkIn, mailTo } from '../support/mailbox';
 
@@ -18,7 +18,7 @@ beforeAll(async () => {
   ({ client: designer, email: designerEmail } = await signUpFresh('reviewed'));
   ({ client: reviewer, email: reviewerEmail } = await signUpFresh('reviewer'));
   brandId = (await designer.post('/api/brands', { name: 'Brackwater Rowing Club' })).body.brand.id;
-  await designer.post(`${b()}/members`, { email: reviewerEmail, role: 'reviewer' });
+  await joinBrand(designer, brandId, { client: reviewer, email: reviewerEmail }, 'reviewer');
   expect((await designer.request('PUT', `${b()}/guideline`, { baseRevision: 0, doc })).status).toBe(200);
 });
 afterAll(closeDb);

@@ -2,6 +2,7 @@
 import { randomUUID } from 'node:crypto';
 import { inject } from 'vitest';
 import { DEMO_PASSWORD } from '../../db/seeders/demo';
+import { lastMailTo, linkIn, mailTo } from './mailbox';
 
 export const baseUrl = () => inject('baseUrl');
 
@@ -83,11 +84,41 @@ export async function signIn(email: string, password = DEMO_PASSWORD): Promise<C
   return client;
 }
 
-/** Sign up a fresh person with a unique address. */
-export async function signUpFresh(label = 'person'): Promise<{ client: Client; email: string; id: string }> {
+/** The address link from the newest mail to `email` (sent at sign-up or on request), as a path on the site. */
+export function verificationPath(email: string): string {
+  const mail = mailTo(email).find((m) => m.text.includes('/api/auth/verify-email?token='));
+  if (!mail) throw new Error(`no address link was mailed to ${email}`);
+  const url = new URL(/https?:\/\/\S+\/api\/auth\/verify-email\?\S+/.exec(mail.text)![0]);
+  return url.pathname + url.search;
+}
+
+/** Prove `email` as its owner would: open the link from the captured mail with this person's session. */
+export async function verifyByMail(client: Client, email: string): Promise<void> {
+  const r = await client.get(verificationPath(email));
+  if (r.status !== 302) throw new Error(`the address link answered ${r.status}: ${JSON.stringify(r.body)}`);
+}
+
+/** Sign up a person with `email` without proving the address (for tests of what an unproven account may not do). */
+export async function signUpUnverified(email: string, name = 'Unproven Person'): Promise<{ client: Client; email: string; id: string }> {
   const client = new Client();
-  const email = `${label}-${randomUUID().slice(0, 8)}@test.example`;
-  const r = await client.post('/api/auth/sign-up/email', { email, password: 'correct-horse-battery', name: `Test ${label}` });
+  const r = await client.post('/api/auth/sign-up/email', { email, password: 'correct-horse-battery', name });
   if (r.status !== 200) throw new Error(`sign-up answered ${r.status}: ${JSON.stringify(r.body)}`);
   return { client, email, id: r.body.user.id };
+}
+
+/** Sign up a fresh person with a unique address and prove it through the mailed link. */
+export async function signUpFresh(label = 'person'): Promise<{ client: Client; email: string; id: string }> {
+  const person = await signUpUnverified(`${label}-${randomUUID().slice(0, 8)}@test.example`, `Test ${label}`);
+  await verifyByMail(person.client, person.email);
+  return person;
+}
+
+/** Invite `person` to a brand and accept as them (the token read from their mail); the new membership's id. */
+export async function joinBrand(owner: Client, brandId: string, person: { client: Client; email: string }, role: string): Promise<string> {
+  const invited = await owner.post(`/api/brands/${brandId}/members`, { email: person.email, role });
+  if (invited.status !== 201) throw new Error(`invitation answered ${invited.status}: ${JSON.stringify(invited.body)}`);
+  const { token } = linkIn(lastMailTo(person.email), '/invite/');
+  const joined = await person.client.post(`/api/invitations/${token}/accept`, {});
+  if (joined.status !== 200) throw new Error(`accepting answered ${joined.status}: ${JSON.stringify(joined.body)}`);
+  return joined.body.joined.memberId;
 }

@@ -39,7 +39,9 @@ export async function setup(project: TestProject): Promise<void> {
   // The local fake SMTP server keeps every message the app sends as JSON in mailDir (src/lib/mail/fake-smtp.ts).
   smtp = await startFakeSmtp({ dir: join(clusterDir, 'mail') });
   const mail = { smtpHost: smtp.host, smtpPort: smtp.port, captureDir: smtp.dir };
-  server = await startServer({ host: '127.0.0.1', port, databaseUrl: cluster.url, siteUrl, secret, signInLimit, filesDir, mail }, { quiet: true });
+  // Likewise for mail: one owner sends hundreds of invitations across the role matrix; the limit has its own test.
+  const mailSendLimit = 1_000_000;
+  server = await startServer({ host: '127.0.0.1', port, databaseUrl: cluster.url, siteUrl, secret, signInLimit, mailSendLimit, filesDir, mail }, { quiet: true });
   project.provide('baseUrl', siteUrl);
   project.provide('databaseUrl', cluster.url);
   project.provide('mailDir', smtp.dir);

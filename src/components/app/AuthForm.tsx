@@ -44,7 +44,8 @@ export default function AuthForm({ mode, next }: { mode: 'sign-in' | 'sign-up'; 
   const onSubmit = handleSubmit(async (values) => {
     setServerError(null);
     try {
-      await api(`/api/auth/${mode}/email`, { method: 'POST', body: values });
+      // A new account's address link leads back to where the person was going (an invitation, say).
+      await api(`/api/auth/${mode}/email`, { method: 'POST', body: signUp ? { ...values, callbackURL: next } : values });
       location.assign(safeNext(next));
     } catch (err) {
       if (err instanceof ApiClientError) {

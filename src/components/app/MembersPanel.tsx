@@ -106,10 +106,12 @@ function AddMember({ brandId, onDone }: { brandId: string; onDone: (text: string
   const [role, setRole] = useState<BrandRole>('viewer');
   const [error, setError] = useState<string | null>(null);
   const add = useMutation({
-    mutationFn: () => api<{ member?: Member; invitation?: Invitation }>(`/api/brands/${brandId}/members`, { method: 'POST', body: { email, role } }),
+    mutationFn: () => api<{ invitation: Invitation; mailed: boolean; mailProblem?: string }>(`/api/brands/${brandId}/members`, { method: 'POST', body: { email, role } }),
     onSuccess: (r) => {
       setEmail('');
-      onDone(r.member ? `${r.member.name} joined as ${ROLE_LABELS[r.member.role].label.toLowerCase()}.` : `${r.invitation!.email} has no account yet: an invitation is waiting for them.`);
+      // The same words whether or not the address has an account: the server does not say, and neither do we.
+      const invited = `${r.invitation.email} is invited as ${ROLE_LABELS[r.invitation.role].label.toLowerCase()} and joins once they accept.`;
+      onDone(r.mailProblem ? `${invited} ${r.mailProblem}` : `${invited} The invitation is on its way.`);
     },
     onError: (e) => setError(e.message),
   });
@@ -123,7 +125,7 @@ function AddMember({ brandId, onDone }: { brandId: string; onDone: (text: string
     <form onSubmit={submit} noValidate className="border-t border-rule px-6 py-5" aria-label="Add a member">
       <div className="flex flex-wrap items-end gap-3">
         <div className="min-w-64 flex-1">
-          <label htmlFor="member-email" className="label">Add someone by e-mail</label>
+          <label htmlFor="member-email" className="label">Invite someone by e-mail</label>
           <input id="member-email" type="email" className="field" value={email} onChange={(e) => setEmail(e.target.value)} aria-invalid={!!error} aria-describedby="member-error" />
         </div>
         <div>
@@ -132,7 +134,7 @@ function AddMember({ brandId, onDone }: { brandId: string; onDone: (text: string
             {BRAND_ROLES.map((r) => <option key={r} value={r}>{ROLE_LABELS[r].label}</option>)}
           </select>
         </div>
-        <button className="btn-primary" disabled={add.isPending}>{add.isPending ? 'Adding…' : 'Add'}</button>
+        <button className="btn-primary" disabled={add.isPending}>{add.isPending ? 'Inviting…' : 'Invite'}</button>
       </div>
       <p id="member-error" className={error ? 'error-text' : 'hint'}>{error ?? ROLE_LABELS[role].summary + '.'}</p>
     </form>

@@ -24,8 +24,8 @@ export async function authorizeAssetRead(locals: App.Locals, brandId: string): P
       const { caller, brand, role } = await authorizeBrand(locals, brandId, 'asset.download');
       return { brand, caller, role, shareLinkId: null, approvedOnly: !can(role, 'asset.readDraft') };
     } catch (err) {
-      // Signed in but not on this brand: a share link for it still counts.
-      if (!(grant && err instanceof ApiError && err.status === 404)) throw err;
+      // Signed in but not on this brand (or not yet verified): a share link for it still counts.
+      if (!(grant && err instanceof ApiError && (err.status === 404 || err.code === 'email_unverified'))) throw err;
     }
   }
   if (!grant) throw new ApiError(401, 'unauthenticated', 'Sign in to continue.');

@@ -1,6 +1,8 @@
 // Resolves a caller's role on a brand and asks the policy; routes call this before touching a brand.
+// It is also the one place that keeps an account whose address is not yet proven out of every brand.
+import { QueryTypes } from 'sequelize';
 import { Brand, BrandMember } from '../../../db/models';
-import '../db.server';
+import { sequelize } from '../db.server';
 import { ApiError } from '../http/api';
 import { decide, type BrandAction } from './policy';
 import type { BrandRole } from './roles';
@@ -17,9 +19,39 @@ export function requireCaller(locals: App.Locals): Caller {
   return { id: locals.user.id, email: locals.user.email, name: locals.user.name };
 }
 
-/** A caller's role on a brand: their brand membership, or none. */
+/** The answer for an account that has not yet proven its address. */
+export const unverifiedError = (email: string) =>
+  new ApiError(403, 'email_unverified', `Confirm your e-mail address first: open the link we sent to ${email}, or ask for a new one on your dashboard (/app).`);
+
+/**
+ * Whether the signed-in person has proven their address. The session's copy may be a minute old (cookie cache),
+ * so a "no" is checked against the database: a link opened in another browser counts at once.
+ */
+export async function isVerified(locals: App.Locals): Promise<boolean> {
+  if (!locals.user) return false;
+  if (locals.user.emailVerified) return true;
+  const [row] = await sequelize.query<{ verified: boolean }>('SELECT "emailVerified" AS verified FROM "user" WHERE id = :id', {
+    replacements: { id: locals.user.id },
+    type: QueryTypes.SELECT,
+  });
+  if (row?.verified) locals.user.emailVerified = true;
+  return !!row?.verified;
+}
+
+/** The signed-in caller with a proven address; 401 when anonymous, 403 `email_unverified` otherwise. */
+export async function requireVerifiedCaller(locals: App.Locals): Promise<Caller> {
+  const caller = requireCaller(locals);
+  if (!(await isVerified(locals))) throw unverifiedError(caller.email);
+  return caller;
+}
+
+/** A caller's role on a brand: their brand membership, or none; an account with an unproven address holds none. */
 export async function roleOn(userId: string, brand: Brand): Promise<BrandRole | null> {
-  const member = await BrandMember.findOne({ where: { brandId: brand.id, userId }, attributes: ['role'] });
+  const [member] = await sequelize.query<{ role: BrandRole }>(
+    `SELECT m.role FROM brand_members m JOIN "user" u ON u.id = m.user_id
+      WHERE m.brand_id = :brandId AND m.user_id = :userId AND u."emailVerified"`,
+    { replacements: { brandId: brand.id, userId }, type: QueryTypes.SELECT },
+  );
   return member?.role ?? null;
 }
 
@@ -30,7 +62,8 @@ export async function authorizeBrand(
   action: BrandAction,
 ): Promise<{ caller: Caller; brand: Brand; role: BrandRole }> {
   if (!locals.user) throw new ApiError(401, 'unauthenticated', 'Sign in to continue.');
-  const caller = requireCaller(locals);
+  // Before the brand is looked up, so an unproven account learns nothing about which brands exist.
+  const caller = await requireVerifiedCaller(locals);
   const brand = await Brand.findByPk(brandId);
   const role = brand ? await roleOn(caller.id, brand) : null;
   const verdict = decide(true, role, action);

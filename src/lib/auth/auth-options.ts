@@ -8,6 +8,8 @@ export interface AuthSettings {
   secret: string;
   /** Sign-in and sign-up attempts allowed per client address per minute. */
   signInLimit: number;
+  /** Mails the link that proves an address (the server passes our mail module; scripts that only migrate or seed do not). */
+  sendVerificationEmail?: (to: { email: string; name: string }, url: string) => Promise<void>;
 }
 
 /** The header our auth route fills from the socket address, so the limiter keys on the real client. */
@@ -15,6 +17,9 @@ export const CLIENT_IP_HEADER = 'x-plumbline-client-ip';
 
 export const PASSWORD_MIN = 10;
 export const PASSWORD_MAX = 128;
+
+/** How long a link that proves an address works. */
+export const VERIFICATION_HOURS = 24;
 
 /** better-auth options: e-mail and password, sessions and rate limits in PostgreSQL, one origin. */
 export function authOptions(settings: AuthSettings): BetterAuthOptions {
@@ -35,6 +40,18 @@ export function authOptions(settings: AuthSettings): BetterAuthOptions {
       maxPasswordLength: PASSWORD_MAX,
       autoSignIn: true,
     },
+    // An account proves its address by the link mailed at sign-up; until then src/lib/auth/access.server.ts keeps it
+    // out of every brand, invitation and mailbox. Signing in still works, so the app can say what to do next.
+    emailVerification: {
+      sendOnSignUp: true,
+      autoSignInAfterVerification: true,
+      expiresIn: VERIFICATION_HOURS * 3600,
+      ...(settings.sendVerificationEmail
+        ? { sendVerificationEmail: ({ user, url }) => settings.sendVerificationEmail!({ email: user.email, name: user.name }, url) }
+        : {}),
+    },
+    // Resending goes through our own limited route (/api/account/verification), never better-auth's open one.
+    disabledPaths: ['/send-verification-email'],
     // No cookie cache: every request asks the session table, so signing out ends the session everywhere at once.
     session: { expiresIn: 60 * 60 * 24 * 14, updateAge: 60 * 60 * 24, cookieCache: { enabled: false } },
     rateLimit: {

@@ -1,10 +1,20 @@
 // The server's better-auth instance, configured from astro:env.
 import { betterAuth } from 'better-auth';
 import { AUTH_SECRET, AUTH_SIGN_IN_LIMIT, DATABASE_URL, SITE_URL } from 'astro:env/server';
-import { authOptions } from './auth-options';
+import { sendTemplate } from '../mail/mail.server';
+import { authOptions, VERIFICATION_HOURS } from './auth-options';
 
 export const auth = betterAuth(
-  authOptions({ databaseUrl: DATABASE_URL, siteUrl: SITE_URL, secret: AUTH_SECRET, signInLimit: AUTH_SIGN_IN_LIMIT }),
+  authOptions({
+    databaseUrl: DATABASE_URL,
+    siteUrl: SITE_URL,
+    secret: AUTH_SECRET,
+    signInLimit: AUTH_SIGN_IN_LIMIT,
+    sendVerificationEmail: async (to, url) => {
+      const outcome = await sendTemplate(to.email, 'verify-email', { name: to.name, email: to.email, hours: VERIFICATION_HOURS, link: url });
+      if (!outcome.sent) console.error(`[auth] the address link for ${to.email} was not sent: ${outcome.problem}`);
+    },
+  }),
 );
 
 export type AuthSession = typeof auth.$Infer.Session;

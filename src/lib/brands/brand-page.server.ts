@@ -11,6 +11,8 @@ export async function brandPage(Astro: AstroGlobal, action: BrandAction = 'brand
     const access = await authorizeBrand(Astro.locals, idParam(Astro.params.id), action);
     return { ...access, response: null } as const;
   } catch (err) {
+    // An account that has not proven its address is sent to the dashboard, which says how to.
+    if (err instanceof ApiError && err.code === 'email_unverified') return { response: Astro.redirect('/app') } as const;
     if (err instanceof ApiError && (err.status === 404 || err.status === 403)) {
       return { response: new Response(err.status === 404 ? 'Not found' : 'Your role on this brand does not open this page.', { status: err.status }) } as const;
     }

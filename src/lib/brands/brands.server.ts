@@ -146,22 +146,21 @@ async function userByEmail(email: string, t: Transaction): Promise<{ id: string;
   return user;
 }
 
-export type AddMemberResult =
-  | { kind: 'member'; member: MemberView }
-  | { kind: 'invitation'; invitation: InvitationView; token: string };
+export interface AddMemberResult {
+  invitation: InvitationView;
+  token: string;
+}
 
-/** Add a person by e-mail: an existing user joins at once, anyone else gets a pending invitation. */
+/**
+ * Invite a person by e-mail. Everyone gets an invitation to accept, account or not, and the answer does not
+ * depend on whether an account exists: nobody joins a brand without acting, and the owner learns nothing.
+ */
 export async function addMember(caller: Caller, brand: Brand, email: string, role: BrandRole): Promise<AddMemberResult> {
   return sequelize.transaction(async (t) => {
     const user = await userByEmail(email, t);
-    if (user) {
-      const existing = await BrandMember.findOne({ where: { brandId: brand.id, userId: user.id }, transaction: t });
-      if (existing) throw new ApiError(409, 'already_member', `${email} is already a member of this brand (${existing.role}).`);
-      const member = await BrandMember.create({ brandId: brand.id, userId: user.id, role }, { transaction: t });
-      siteCache.forget();
-      await audit({ actorId: caller.id, action: 'member.add', targetType: 'member', targetId: member.id, brandId: brand.id, studioId: brand.studioId, details: { email, role } }, t);
-      return { kind: 'member', member: { id: member.id, userId: user.id, name: user.name, email: user.email, role, addedAt: member.createdAt.toISOString() } };
-    }
+    // Members are listed to whoever may add people, so saying so reveals nothing new.
+    const existing = user ? await BrandMember.findOne({ where: { brandId: brand.id, userId: user.id }, transaction: t }) : null;
+    if (existing) throw new ApiError(409, 'already_member', `${email} is already a member of this brand (${existing.role}).`);
     const pending = await Invitation.findOne({
       where: { brandId: brand.id, email, acceptedAt: null, revokedAt: null, expiresAt: { [Op.gt]: new Date() } },
       transaction: t,
@@ -182,7 +181,7 @@ export async function addMember(caller: Caller, brand: Brand, email: string, rol
       { transaction: t },
     );
     await audit({ actorId: caller.id, action: 'member.invite', targetType: 'invitation', targetId: invitation.id, brandId: brand.id, studioId: brand.studioId, details: { email, role } }, t);
-    return { kind: 'invitation', invitation: invitationView(invitation), token };
+    return { invitation: invitationView(invitation), token };
   });
 }
 

@@ -1,9 +1,9 @@
 // Invitations: the e-mail with the accept link, resend and revoke, and joining by token.
-import { Op } from 'sequelize';
+import { Op, QueryTypes } from 'sequelize';
 import { Brand, BrandMember, Invitation } from '../../../db/models';
 import { audit } from '../audit.server';
 import { siteCache } from '../publishing/site-cache';
-import type { Caller } from '../auth/access.server';
+import { unverifiedError, type Caller } from '../auth/access.server';
 import { ROLE_LABELS, type BrandRole } from '../auth/roles';
 import type { InvitationView } from '../brands/brands.server';
 import { sequelize } from '../db.server';
@@ -99,9 +99,18 @@ export const INVITATION_PROBLEMS: Record<Exclude<InvitationState, 'pending'>, { 
   expired: { status: 410, code: 'invitation_expired', message: `This invitation has expired (links work for ${INVITATION_DAYS} days). Ask the brand’s owner to send a new one.` },
 };
 
-/** Join the brand with the invited role; only the person signed in with the invited address may. */
-export async function acceptInvitation(caller: Caller, token: string): Promise<{ brandId: string; role: BrandRole }> {
+/** Join the brand with the invited role; only the person signed in with the invited, proven address may. */
+export async function acceptInvitation(caller: Caller, token: string): Promise<{ brandId: string; role: BrandRole; memberId: string }> {
   return sequelize.transaction(async (t) => {
+    // The account as stored now, not as the session remembers it: its address must be proven.
+    const [account] = await sequelize.query<{ email: string; verified: boolean }>('SELECT email, "emailVerified" AS verified FROM "user" WHERE id = :id FOR SHARE', {
+      replacements: { id: caller.id },
+      type: QueryTypes.SELECT,
+      transaction: t,
+    });
+    if (!account) throw new ApiError(401, 'unauthenticated', 'Sign in to continue.');
+    if (!account.verified) throw unverifiedError(account.email);
+    caller = { ...caller, email: account.email };
     const inv = await Invitation.findOne({ where: { tokenHash: hashToken(token) }, transaction: t, lock: t.LOCK.UPDATE });
     if (!inv) throw new ApiError(404, 'not_found', 'This invitation link is not valid. Check that the whole link was copied.');
     const state = stateOf(inv);
@@ -114,12 +123,12 @@ export async function acceptInvitation(caller: Caller, token: string): Promise<{
     }
     const brand = (await Brand.findByPk(inv.brandId, { transaction: t }))!;
     const existing = await BrandMember.findOne({ where: { brandId: brand.id, userId: caller.id }, transaction: t });
-    if (!existing) await BrandMember.create({ brandId: brand.id, userId: caller.id, role: inv.role }, { transaction: t });
+    const member = existing ?? (await BrandMember.create({ brandId: brand.id, userId: caller.id, role: inv.role }, { transaction: t }));
     siteCache.forget();
     await inv.update({ acceptedAt: new Date() }, { transaction: t });
     // Other open invitations of the same address to this brand are settled by joining.
     await Invitation.update({ revokedAt: new Date() }, { where: { brandId: brand.id, email: inv.email, acceptedAt: null, revokedAt: null, id: { [Op.ne]: inv.id } }, transaction: t });
     await audit({ actorId: caller.id, action: 'member.join', targetType: 'invitation', targetId: inv.id, brandId: brand.id, studioId: brand.studioId, details: { email: inv.email, role: existing?.role ?? inv.role, alreadyMember: !!existing } }, t);
-    return { brandId: brand.id, role: existing?.role ?? inv.role };
+    return { brandId: brand.id, role: existing?.role ?? inv.role, memberId: member.id };
   });
 }

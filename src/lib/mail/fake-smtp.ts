@@ -19,7 +19,7 @@ const addresses = (field: AddressObject | AddressObject[] | undefined): string[]
   (Array.isArray(field) ? field : field ? [field] : []).flatMap((a) => a.value.map((v) => v.address ?? '')).filter(Boolean);
 
 /** Start the fake on 127.0.0.1 (port 0 picks a free one); each message is parsed and stored before it is acknowledged. */
-export async function startFakeSmtp(opts: { dir: string; port?: number; host?: string }): Promise<FakeSmtp> {
+export async function startFakeSmtp(opts: { dir: string; port?: number; host?: string; onMessage?: (mail: CapturedMail) => void }): Promise<FakeSmtp> {
   const host = opts.host ?? '127.0.0.1';
   const server = new SMTPServer({
     authOptional: true,
@@ -47,6 +47,7 @@ export async function startFakeSmtp(opts: { dir: string; port?: number; host?: s
             brandId: typeof header === 'string' ? header : null,
           };
           storeCaptured(opts.dir, mail);
+          opts.onMessage?.(mail);
           callback();
         })
         .catch((err: Error) => callback(err));

@@ -14,15 +14,18 @@ function transporter(): Transporter | null {
         port: SMTP_PORT,
         secure: SMTP_PORT === 465,
         // The local fake speaks plain SMTP only; a real relay upgrades with STARTTLS.
-        ignoreTLS: !!MAIL_CAPTURE_DIR,
+        ignoreTLS: captureDir() !== null,
         auth: SMTP_USER ? { user: SMTP_USER, pass: SMTP_PASSWORD ?? '' } : undefined,
       })
     : null;
   return transport;
 }
 
-/** Whether the local fake keeps what is sent (the sent-mail page exists only then). */
-export const captureDir = (): string | null => MAIL_CAPTURE_DIR ?? null;
+/** The local catcher listens on loopback; a relay anywhere else is real mail, whatever MAIL_CAPTURE_DIR says. */
+const loopback = (host: string | undefined) => !!host && /^(127\.\d+\.\d+\.\d+|localhost|::1|\[::1\])$/i.test(host);
+
+/** The local catcher's folder while it is in use (the captured-mail viewer exists only then), else null. */
+export const captureDir = (): string | null => (MAIL_CAPTURE_DIR && loopback(SMTP_HOST) ? MAIL_CAPTURE_DIR : null);
 
 /** An absolute link on the configured site. */
 export const siteLink = (path: string) => new URL(path, SITE_URL).toString();

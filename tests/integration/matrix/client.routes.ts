@@ -57,4 +57,7 @@ export default [
   { method: 'PUT', file: 'brands/[id]/follow.ts', path: (f) => `${b(f)}/follow`, expect: all(200, { outsider: 404 }) },
   { method: 'DELETE', file: 'brands/[id]/follow.ts', path: (f) => `${b(f)}/follow`, expect: all(200, { outsider: 404 }) },
   { method: 'GET', file: 'mail/index.ts', path: () => '/api/mail', expect: all(200) },
+  // Every signed-in caller here has proven their address, so asking for another link is a conflict.
+  { method: 'GET', file: 'account/verification.ts', path: () => '/api/account/verification', expect: all(200) },
+  { method: 'POST', file: 'account/verification.ts', path: () => '/api/account/verification', body: () => ({}), expect: all(409) },
 ] satisfies Route[];

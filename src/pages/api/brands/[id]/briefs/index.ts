@@ -2,6 +2,7 @@ import { authorizeBrand } from '../../../../../lib/auth/access.server';
 import { listBriefs, questionnaireTemplates, sendBrief } from '../../../../../lib/briefs/briefs.server';
 import { sendBriefBody } from '../../../../../lib/briefs/schemas';
 import { endpoint, idParam, json, methodNotAllowed, readJson } from '../../../../../lib/http/api';
+import { allowMessage } from '../../../../../lib/mail/send-limit.server';
 
 /** The brand's briefs and the questionnaires one can be made from. */
 export const GET = endpoint(async ({ locals, params }) => {
@@ -14,6 +15,7 @@ export const GET = endpoint(async ({ locals, params }) => {
 export const POST = endpoint(async ({ locals, params, request }) => {
   const { caller, brand } = await authorizeBrand(locals, idParam(params.id), 'draft.edit');
   const body = await readJson(request, sendBriefBody);
+  await allowMessage(caller.id);
   const { brief, mail } = await sendBrief(caller, brand, body);
   return json({ brief, mailed: mail.sent, ...(mail.problem ? { mailProblem: mail.problem } : {}) }, 201);
 });
