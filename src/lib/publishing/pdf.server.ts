@@ -1,13 +1,15 @@
-// Print-ready PDFs: a pg-boss job renders a version's print page in one warm Chromium; each PDF is kept
-// per version and paper size, since a version never changes.
+// Print-ready PDFs: a pg-boss job prints a version's print edition as a book in one warm Chromium; each PDF is
+// kept per version and paper size, since a version never changes.
 import { existsSync } from 'node:fs';
 import { CHROMIUM_PATH, DATABASE_URL, SITE_URL } from 'astro:env/server';
 import PgBoss from 'pg-boss';
+import { PDFArray, PDFDict, PDFDocument, PDFHexString, PDFName, PDFRef, PDFString } from 'pdf-lib';
 import puppeteer, { type Browser } from 'puppeteer-core';
-import { Brand, GuidelineVersion, PdfExport } from '../../../db/models';
+import { Brand, GuidelineVersion, PdfExport, Studio } from '../../../db/models';
 import { storage } from '../storage/index.server';
 import { newKey } from '../storage/storage';
 import { PRINT_COOKIE, printPass } from './print-grant.server';
+import { printRequestAllowed } from './print-requests';
 import { versionPath } from './snapshot-urls';
 
 export const PAPER_SIZES = ['a4', 'letter'] as const;
@@ -34,26 +36,97 @@ export function warmBrowser(): Promise<Browser> {
   return browser;
 }
 
-/** Print a page of ours to PDF: backgrounds on, page numbers in the footer, the CSS page size honoured. */
-export async function printUrl(url: string, size: PaperSize, cookie?: { name: string; value: string }): Promise<Buffer> {
+export interface BookMeta {
+  title: string;
+  author: string;
+  subject: string;
+  keywords: string[];
+  published: Date;
+}
+
+/**
+ * Print a version's print edition as a book, in two passes on one loaded page: the body first (running heads,
+ * folios from 1, an outline from its section headings), then the cover and contents with the page each section
+ * starts on, read back from the body's outline; pdf-lib puts the front matter before the body and sets the metadata.
+ * Chromium may fetch only that version's own files (printRequestAllowed); scripts never run.
+ */
+export async function printBook(url: string, cookie: { name: string; value: string } | undefined, meta: BookMeta, onProgress?: (percent: number) => Promise<unknown>): Promise<Buffer> {
   const page = await (await warmBrowser()).newPage();
+  const blocked: string[] = [];
   try {
-    if (cookie) await page.setCookie({ ...cookie, url: new URL(url).origin, httpOnly: true });
-    await page.goto(url, { waitUntil: 'networkidle0', timeout: 60_000 });
-    await page.evaluate(() => document.fonts.ready);
-    const pdf = await page.pdf({
-      format: size === 'a4' ? 'A4' : 'Letter',
-      printBackground: true,
-      displayHeaderFooter: true,
-      headerTemplate: '<span></span>',
-      footerTemplate:
-        '<div style="width:100%;font:8px system-ui,sans-serif;color:#666;padding:0 12mm;display:flex;justify-content:space-between"><span class="title"></span><span><span class="pageNumber"></span> / <span class="totalPages"></span></span></div>',
-      margin: { top: '14mm', bottom: '16mm', left: '14mm', right: '14mm' },
+    await page.setJavaScriptEnabled(false);
+    await page.setRequestInterception(true);
+    page.on('request', (request) => {
+      if (printRequestAllowed(request.url(), request.method(), url)) return void request.continue();
+      blocked.push(request.url().slice(0, 120));
+      return void request.abort('blockedbyclient');
     });
-    return Buffer.from(pdf);
+    if (cookie) await page.setCookie({ ...cookie, url: new URL(url).origin, httpOnly: true });
+    await page.goto(url, { waitUntil: 'load', timeout: 60_000 });
+    await page.evaluate(() => document.fonts.ready.then(() => undefined));
+    await page.evaluate(() => void (document.documentElement.dataset.part = 'body'));
+    const body = await page.pdf({ preferCSSPageSize: true, printBackground: true, outline: true, tagged: true, timeout: 120_000 });
+    await onProgress?.(60);
+    const book = await PDFDocument.load(body, { updateMetadata: false });
+    const starts = sectionStarts(book);
+    await page.evaluate((pages: number[]) => {
+      document.querySelectorAll<HTMLElement>('[data-contents-page]').forEach((el, i) => (el.textContent = pages[i] ? String(pages[i]) : ''));
+      // The body is not in this pass, so the rows link to a marker address that bindBook() turns into page jumps.
+      document.querySelectorAll<HTMLAnchorElement>('a[data-contents-link]').forEach((a) => (a.href = `https://contents.invalid/${a.dataset.contentsLink}`));
+      document.documentElement.dataset.part = 'front';
+    }, starts.map((p) => p + 1));
+    const front = await PDFDocument.load(await page.pdf({ preferCSSPageSize: true, printBackground: true, tagged: false, timeout: 60_000 }));
+    if (blocked.length) console.warn(`[pdf] blocked ${blocked.length} request(s) while printing ${new URL(url).pathname}: ${blocked.slice(0, 3).join(', ')}`);
+    return Buffer.from(await bindBook(book, front, starts, meta));
   } finally {
     await page.close();
   }
+}
+
+/** The page index (0-based, in the body) each top-level outline entry — one per section heading — points at. */
+function sectionStarts(book: PDFDocument): number[] {
+  const pageIndex = new Map(book.getPages().map((p, i) => [p.ref.toString(), i]));
+  const starts: number[] = [];
+  const outlines = book.catalog.lookupMaybe(PDFName.of('Outlines'), PDFDict);
+  let item = outlines?.lookupMaybe(PDFName.of('First'), PDFDict);
+  while (item) {
+    const dest = item.lookupMaybe(PDFName.of('Dest'), PDFArray);
+    const target = dest?.get(0);
+    starts.push(target instanceof PDFRef ? (pageIndex.get(target.toString()) ?? -1) : -1);
+    item = item.lookupMaybe(PDFName.of('Next'), PDFDict);
+  }
+  return starts;
+}
+
+/** Front matter before the body, contents links pointed at their pages, page labels i, ii, 1, 2…, and metadata. */
+async function bindBook(book: PDFDocument, front: PDFDocument, starts: number[], meta: BookMeta): Promise<Uint8Array> {
+  const bodyPages = book.getPages();
+  const copied = await book.copyPages(front, front.getPageIndices());
+  copied.forEach((p, i) => book.insertPage(i, p));
+  // The contents rows link to https://contents.invalid/<n> in the front pass; here each becomes a jump to its page.
+  for (const p of copied) {
+    const annots = p.node.lookupMaybe(PDFName.of('Annots'), PDFArray);
+    for (let i = 0; annots && i < annots.size(); i++) {
+      const annot = annots.lookupMaybe(i, PDFDict);
+      const uri = annot?.lookupMaybe(PDFName.of('A'), PDFDict)?.lookupMaybe(PDFName.of('URI'), PDFString, PDFHexString)?.decodeText();
+      const n = Number(uri?.match(/^https:\/\/contents\.invalid\/(\d+)$/)?.[1] ?? NaN);
+      const target = bodyPages[starts[n]];
+      if (!annot || !uri?.startsWith('https://contents.invalid/')) continue;
+      annot.delete(PDFName.of('A'));
+      if (target) annot.set(PDFName.of('Dest'), book.context.obj([target.ref, PDFName.of('Fit')]));
+    }
+  }
+  book.catalog.set(PDFName.of('PageLabels'), book.context.obj({ Nums: [0, { S: PDFName.of('r') }, copied.length, { S: PDFName.of('D') }] }));
+  book.setTitle(meta.title, { showInWindowTitleBar: true });
+  book.setAuthor(meta.author);
+  book.setSubject(meta.subject);
+  book.setKeywords(meta.keywords);
+  book.setCreator('Plumbline');
+  book.setProducer('Plumbline (Chromium and pdf-lib)');
+  book.setCreationDate(meta.published);
+  book.setModificationDate(new Date());
+  book.setLanguage('en');
+  return book.save();
 }
 
 let boss: Promise<PgBoss> | null = null;
@@ -71,6 +144,18 @@ function queue(): Promise<PgBoss> {
   return boss;
 }
 
+/** Title, author (the studio), subject and keywords of a version's PDF. */
+export function bookMeta(brandName: string, studioName: string, number: number, published: Date): BookMeta {
+  const date = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric' }).format(published);
+  return {
+    title: `${brandName} brand guidelines, version ${number}`,
+    author: studioName,
+    subject: `How to use the ${brandName} identity: logo, colour, type and imagery. Version ${number}, published ${date}.`,
+    keywords: [brandName, 'brand guidelines', `version ${number}`],
+    published,
+  };
+}
+
 async function renderExport(exportId: string): Promise<void> {
   const job = await PdfExport.findByPk(exportId);
   if (!job) return;
@@ -80,8 +165,10 @@ async function renderExport(exportId: string): Promise<void> {
   await job.update({ state: 'rendering', progress: 20 });
   try {
     const url = `${SITE_URL}${versionPath(brand.slug, version.number)}/print?size=${job.size}`;
-    const pdf = await printUrl(url, job.size, { name: PRINT_COOKIE, value: printPass(version.id) });
-    await job.update({ progress: 90 });
+    const studio = await Studio.findByPk(brand.studioId, { attributes: ['name'] });
+    const meta = bookMeta(brand.name, studio?.name ?? brand.name, version.number, version.publishedAt);
+    const pdf = await printBook(url, { name: PRINT_COOKIE, value: printPass(version.id) }, meta, (progress) => job.update({ progress }));
+    await job.update({ progress: 95 });
     const key = newKey(brand.id, 'pdf', 'pdf');
     await storage.put(key, pdf, 'application/pdf');
     await job.update({ state: 'done', progress: 100, storageKey: key, error: null });
