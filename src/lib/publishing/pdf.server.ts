@@ -29,10 +29,16 @@ export function warmBrowser(): Promise<Browser> {
       headless: true,
       args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-dev-shm-usage'],
     })
-    .then((b) => {
-      b.on('disconnected', () => (browser = null));
-      return b;
-    });
+    .then(
+      (b) => {
+        b.on('disconnected', () => (browser = null));
+        return b;
+      },
+      (err) => {
+        browser = null; // a failed start is tried again on the next job
+        throw err;
+      },
+    );
   return browser;
 }
 
@@ -134,6 +140,8 @@ let boss: Promise<PgBoss> | null = null;
 /** pg-boss on our PostgreSQL, with this process working the PDF queue one job at a time. */
 function queue(): Promise<PgBoss> {
   boss ??= (async () => {
+    // Chromium starts while pg-boss does, so the first PDF does not wait for both in turn.
+    Promise.resolve().then(warmBrowser).catch(() => undefined);
     const b = new PgBoss({ connectionString: DATABASE_URL, schema: 'pgboss', max: 3 });
     b.on('error', (err) => console.error('[pdf] queue error', err));
     await b.start();
