@@ -30,9 +30,18 @@ afterAll(async () => {
   await closeDb();
 });
 
+/** fetch, tried once more when the server closed an idle keep-alive socket just as the request went out. */
+async function fetchOnce(url: string, init: RequestInit): Promise<Response> {
+  try {
+    return await fetch(url, init);
+  } catch {
+    return fetch(url, init);
+  }
+}
+
 async function fetchPdf(path: string): Promise<Uint8Array> {
   for (let polls = 0; polls < 240; polls++) {
-    const r = await fetch(baseUrl() + path, { headers: { accept: 'application/json', cookie: owner.cookieHeader() } });
+    const r = await fetchOnce(baseUrl() + path, { headers: { accept: 'application/json', cookie: owner.cookieHeader() } });
     if (r.headers.get('content-type')?.includes('application/pdf')) return new Uint8Array(await r.arrayBuffer());
     const status = await r.json();
     expect(['queued', 'rendering'], JSON.stringify(status)).toContain(status.state);
