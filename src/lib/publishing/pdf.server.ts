@@ -59,6 +59,8 @@ export interface BookMeta {
 export async function printBook(url: string, cookie: { name: string; value: string } | undefined, meta: BookMeta, onProgress?: (percent: number) => Promise<unknown>): Promise<Buffer> {
   const page = await (await warmBrowser()).newPage();
   const blocked: string[] = [];
+  const t0 = performance.now();
+  const times: number[] = [];
   try {
     await page.setJavaScriptEnabled(false);
     await page.setRequestInterception(true);
@@ -71,10 +73,13 @@ export async function printBook(url: string, cookie: { name: string; value: stri
     await page.goto(url, { waitUntil: 'load', timeout: 60_000 });
     await page.evaluate(() => document.fonts.ready.then(() => undefined));
     await page.evaluate(() => void (document.documentElement.dataset.part = 'body'));
+    const titles = await page.evaluate(() => [...document.querySelectorAll('.print-body section[data-print-page] > header > h1')].map((h) => h.textContent ?? ''));
+    times.push(performance.now());
     const body = await page.pdf({ preferCSSPageSize: true, printBackground: true, outline: true, tagged: true, timeout: 120_000 });
+    times.push(performance.now());
     await onProgress?.(60);
     const book = await PDFDocument.load(body, { updateMetadata: false });
-    const starts = sectionStarts(book);
+    const starts = sectionStarts(book, titles);
     await page.evaluate((pages: number[]) => {
       document.querySelectorAll<HTMLElement>('[data-contents-page]').forEach((el, i) => (el.textContent = pages[i] ? String(pages[i]) : ''));
       // The body is not in this pass, so the rows link to a marker address that bindBook() turns into page jumps.
@@ -82,27 +87,43 @@ export async function printBook(url: string, cookie: { name: string; value: stri
       document.documentElement.dataset.part = 'front';
     }, starts.map((p) => p + 1));
     const front = await PDFDocument.load(await page.pdf({ preferCSSPageSize: true, printBackground: true, tagged: false, timeout: 60_000 }));
+    times.push(performance.now());
     if (blocked.length) console.warn(`[pdf] blocked ${blocked.length} request(s) while printing ${new URL(url).pathname}: ${blocked.slice(0, 3).join(', ')}`);
-    return Buffer.from(await bindBook(book, front, starts, meta));
+    const bound = Buffer.from(await bindBook(book, front, starts, meta));
+    const ms = (a: number, b: number) => Math.round(b - a);
+    console.log(`[pdf] ${new URL(url).pathname}: load ${ms(t0, times[0])} ms, body ${ms(times[0], times[1])} ms, front ${ms(times[1], times[2])} ms, bind ${ms(times[2], performance.now())} ms`);
+    return bound;
   } finally {
     await page.close();
   }
 }
 
-/** The page index (0-based, in the body) each top-level outline entry — one per section heading — points at. */
-function sectionStarts(book: PDFDocument): number[] {
+/**
+ * The body page index (0-based) where each section starts, read from the outline Chromium wrote: its top-level
+ * entries are the section headings (<h1>), matched to `titles` in order, since rich-text headings placed before
+ * the first section are top-level entries too. A section not found gets -1 (its contents row shows no number).
+ */
+function sectionStarts(book: PDFDocument, titles: string[]): number[] {
   const pageIndex = new Map(book.getPages().map((p, i) => [p.ref.toString(), i]));
-  const starts: number[] = [];
+  const entries: { title: string; page: number }[] = [];
   const outlines = book.catalog.lookupMaybe(PDFName.of('Outlines'), PDFDict);
   let item = outlines?.lookupMaybe(PDFName.of('First'), PDFDict);
   while (item) {
-    const dest = item.lookupMaybe(PDFName.of('Dest'), PDFArray);
-    const target = dest?.get(0);
-    starts.push(target instanceof PDFRef ? (pageIndex.get(target.toString()) ?? -1) : -1);
+    const target = item.lookupMaybe(PDFName.of('Dest'), PDFArray)?.get(0);
+    const title = item.lookupMaybe(PDFName.of('Title'), PDFString, PDFHexString)?.decodeText() ?? '';
+    entries.push({ title: normalise(title), page: target instanceof PDFRef ? (pageIndex.get(target.toString()) ?? -1) : -1 });
     item = item.lookupMaybe(PDFName.of('Next'), PDFDict);
   }
-  return starts;
+  let next = 0;
+  return titles.map((title) => {
+    const found = entries.findIndex((e, i) => i >= next && e.title === normalise(title));
+    if (found < 0) return -1;
+    next = found + 1;
+    return entries[found].page;
+  });
 }
+
+const normalise = (text: string) => text.replace(/\s+/g, ' ').trim();
 
 /** Front matter before the body, contents links pointed at their pages, page labels i, ii, 1, 2…, and metadata. */
 async function bindBook(book: PDFDocument, front: PDFDocument, starts: number[], meta: BookMeta): Promise<Uint8Array> {
