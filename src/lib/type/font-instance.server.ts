@@ -14,9 +14,10 @@ export function staticInstance(key: string, font: Buffer, weight: number): Promi
   if (!found) {
     found = (async () => {
       const face = openFont(font);
-      const axes = Object.fromEntries(
-        Object.entries(face.variationAxes ?? {}).map(([tag, axis]) => [tag, tag === 'wght' ? Math.min(axis.max, Math.max(axis.min, weight)) : axis.default]),
-      );
+      const axes: Record<string, number> = {};
+      for (const [tag, axis] of Object.entries(face.variationAxes ?? {})) {
+        if (axis) axes[tag] = tag === 'wght' ? Math.min(axis.max, Math.max(axis.min, weight)) : axis.default;
+      }
       // Every character the face maps, so nothing the guideline sets falls back to another font.
       return subsetFont(font, String.fromCodePoint(...face.characterSet), { targetFormat: 'truetype', variationAxes: axes });
     })();
