@@ -1,7 +1,12 @@
 // The print edition's pure parts: which requests the PDF renderer lets Chromium make, and the page rules'
 // CSS strings, read back with css-tree (a general-purpose CSS parser following CSS Syntax Module Level 3).
+import { readFileSync } from 'node:fs';
 import { parse, walk, string as cssStringCodec, type CssNode } from 'css-tree';
+import * as fontkit from 'fontkit';
 import { describe, expect, test } from 'vitest';
+import { fontFaceCss } from '../../src/lib/guideline/identity';
+import type { IdentityTypeface } from '../../src/lib/identity/types';
+import { staticInstance } from '../../src/lib/type/font-instance.server';
 import { cssString, printPageRules } from '../../src/lib/publishing/print-css';
 import { printRequestAllowed } from '../../src/lib/publishing/print-requests';
 
@@ -87,5 +92,38 @@ describe('cssString (CSS Syntax Module Level 3, §4.3.5 strings and §4.3.7 esca
   test('a page name that is not a plain identifier gets no rule', () => {
     const css = printPageRules({ size: 'a4', brandName: 'B', edition: 'E', sections: [{ pageName: 'x{}', title: 'T' }] });
     expect(css).not.toContain('x{}');
+  });
+});
+
+// Chromium writes a variable font into a PDF only as Type 3 glyph procedures, so the print edition serves static
+// instances. Read back with fontkit: OpenType spec — no 'fvar' table means a static font; OS/2 usWeightClass names the
+// weight; the 'wght' axis changes advance widths.
+describe('static instances of a variable font for print (OpenType 1.9: fvar, OS/2 usWeightClass)', () => {
+  const variable = readFileSync('node_modules/@fontsource-variable/fraunces/files/fraunces-latin-wght-normal.woff2');
+  const open = (bytes: Buffer) => fontkit.create(bytes) as fontkit.Font;
+
+  test('each weight becomes a static TrueType at that weight, with every character of the original', async () => {
+    const source = open(variable);
+    expect(Object.keys(source.variationAxes)).toContain('wght');
+    const [regular, bold] = await Promise.all([400, 700].map((w) => staticInstance('unit:fraunces', variable, w).then(open)));
+    for (const [face, weight] of [[regular, 400], [bold, 700]] as const) {
+      expect(Object.keys(face.variationAxes ?? {})).toEqual([]);
+      expect(face['OS/2'].usWeightClass).toBe(weight);
+      expect(face.characterSet.length).toBe(source.characterSet.length);
+    }
+    const advance = (face: fontkit.Font) => face.glyphForCodePoint(0x48).advanceWidth; // "H"
+    expect(advance(bold)).toBeGreaterThan(advance(regular));
+  });
+
+  const face = (isVariable: boolean, min: number, max: number) =>
+    ({ family: 'Brand "Sans"', fileUrl: '/b/x/v/1/files/f1', metrics: { format: 'WOFF2', isVariable, weight: { min, default: min, max } } }) as unknown as IdentityTypeface;
+
+  test('print rules ask for one static face per weight in the range; the site keeps the variable file', () => {
+    const print = fontFaceCss([face(true, 300, 600)], { print: true });
+    expect(print.match(/@font-face/g)).toHaveLength(3);
+    for (const w of [400, 500, 600]) expect(print).toContain(`url("/b/x/v/1/files/f1?weight=${w}") format("truetype"); font-weight: ${w};`);
+    expect(print).not.toContain('"Brand "Sans""');
+    expect(fontFaceCss([face(true, 300, 600)])).toContain('url("/b/x/v/1/files/f1") format("woff2"); font-weight: 300 600;');
+    expect(fontFaceCss([face(false, 700, 700)], { print: true })).toContain('font-weight: 700 700;');
   });
 });
