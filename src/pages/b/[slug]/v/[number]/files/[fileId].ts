@@ -26,7 +26,7 @@ export const GET: APIRoute = async (context) => {
   let contentType = file.contentType;
   if (file.contentType.startsWith('font/') && (PRINT_WEIGHTS as readonly number[]).includes(weight)) {
     try {
-      body = await staticInstance(file.key, body, weight);
+      body = await staticInstance(body, weight);
       contentType = 'font/ttf';
     } catch (err) {
       console.warn('[files] no static instance of', file.key, (err as Error).message);
