@@ -27,7 +27,7 @@ export function benchServer(): Promise<BenchServer> {
     const baseUrl = `http://127.0.0.1:${port}`;
     const settings = { databaseUrl: cluster.url, siteUrl: baseUrl, secret: 'bench-secret-long-enough-for-better-auth', signInLimit: 10_000 };
     await prepareDatabase(settings, { filesDir: join(dir, 'files') });
-    buildApp();
+    if (process.env.PLUMBLINE_SKIP_BUILD !== '1') buildApp(); // reuse the build in PLUMBLINE_OUT_DIR
     child = await startServer({ host: '127.0.0.1', port, ...settings, filesDir: join(dir, 'files') }, { quiet: true });
     return {
       baseUrl,

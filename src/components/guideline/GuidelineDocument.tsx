@@ -21,20 +21,27 @@ function Node({ node, identity, mode }: { node: TopLevelNode; identity: Identity
   );
 }
 
-function SectionHeader({ entry, intro }: { entry: OutlineEntry; intro: string }) {
+function SectionHeader({ entry, intro, mode }: { entry: OutlineEntry; intro: string; mode: RenderMode }) {
+  // In print the section title is the document's top heading level, so the PDF outline has one entry per section.
+  const Title = mode === 'print' ? 'h1' : 'h2';
   return (
     <header className="mb-6">
       {entry.eyebrow ? <p className="text-xs font-semibold uppercase tracking-[0.16em] opacity-70">{entry.eyebrow}</p> : null}
-      <h2 id={`${entry.anchor}-title`} className="group mt-1 text-4xl font-semibold leading-tight" style={{ fontFamily: 'var(--brand-heading-font)' }}>
+      <Title id={`${entry.anchor}-title`} className="group mt-1 text-4xl font-semibold leading-tight" style={{ fontFamily: 'var(--brand-heading-font)' }}>
         {entry.title}
-        <a href={`#${entry.anchor}`} className="ml-3 text-2xl no-underline opacity-0 group-hover:opacity-40 focus-visible:opacity-60" aria-label={`Link to the section ${entry.title}`}>
-          #
-        </a>
-      </h2>
+        {mode === 'print' ? null : (
+          <a href={`#${entry.anchor}`} className="ml-3 text-2xl no-underline opacity-0 group-hover:opacity-40 focus-visible:opacity-60" aria-label={`Link to the section ${entry.title}`}>
+            #
+          </a>
+        )}
+      </Title>
       {intro ? <p className="mt-3 max-w-prose text-lg leading-relaxed opacity-85">{intro}</p> : null}
     </header>
   );
 }
+
+/** The CSS page name of the nth section in the print edition (running heads carry its title). */
+export const printPageName = (index: number) => `section-${index + 1}`;
 
 /** Renders a validated guideline document for the published site ('site') or the PDF ('print'). */
 export function GuidelineDocument({ doc, identity, mode }: { doc: GuidelineDoc; identity: Identity; mode: RenderMode }) {
@@ -53,8 +60,8 @@ export function GuidelineDocument({ doc, identity, mode }: { doc: GuidelineDoc; 
     <article className="guideline" data-mode={mode} style={style}>
       {groups.map((group, i) =>
         group.entry ? (
-          <section key={group.entry.anchor} id={group.entry.anchor} aria-labelledby={`${group.entry.anchor}-title`} data-block-id={group.entry.blockId} className={`py-10 ${mode === 'print' ? 'break-before-page' : ''}`}>
-            <SectionHeader entry={group.entry} intro={group.intro} />
+          <section key={group.entry.anchor} id={group.entry.anchor} aria-labelledby={`${group.entry.anchor}-title`} data-block-id={group.entry.blockId} className={`py-10 ${mode === 'print' ? 'break-before-page' : ''}`} data-print-page={mode === 'print' ? printPageName(entries.indexOf(group.entry)) : undefined}>
+            <SectionHeader entry={group.entry} intro={group.intro} mode={mode} />
             {body(group.nodes)}
           </section>
         ) : group.nodes.length > 0 ? (

@@ -76,10 +76,26 @@ const weight = (value: unknown) => (typeof value === 'number' && Number.isFinite
 
 const fontFormat = (format: string) => (format === 'WOFF2' ? 'woff2' : format === 'WOFF' ? 'woff' : 'opentype');
 
-/** @font-face rules for the typefaces that have a file to serve (unlicensed faces have none on published pages). */
-export function fontFaceCss(typefaces: readonly IdentityTypeface[]): string {
+/** The weights the print edition asks a variable face for, each as a static instance (see font-instance.server.ts). */
+export const PRINT_WEIGHTS = [400, 500, 600, 700] as const;
+
+/**
+ * @font-face rules for the typefaces that have a file to serve (unlicensed faces have none on published pages).
+ * For print, a variable face becomes one static face per weight (`?weight=`), since PDF writers embed those properly.
+ */
+export function fontFaceCss(typefaces: readonly IdentityTypeface[], options: { print?: boolean } = {}): string {
   return typefaces
     .filter((f) => f.fileUrl)
-    .map((f) => `@font-face { font-family: ${cssString(cleanTypefaceFamily(f.family))}; src: ${cssUrl(f.fileUrl)} format("${fontFormat(f.metrics.format)}"); font-weight: ${weight(f.metrics.weight.min)} ${weight(f.metrics.weight.max)}; font-display: swap; }`)
+    .flatMap((f) => {
+      const name = cssString(cleanTypefaceFamily(f.family));
+      const { min, max } = f.metrics.weight;
+      if (options.print && f.metrics.isVariable) {
+        const weights = PRINT_WEIGHTS.filter((w) => w >= min && w <= max);
+        return (weights.length ? weights : [weight(f.metrics.weight.default)]).map(
+          (w) => `@font-face { font-family: ${name}; src: ${cssUrl(`${f.fileUrl}?weight=${w}`)} format("truetype"); font-weight: ${w}; }`,
+        );
+      }
+      return [`@font-face { font-family: ${name}; src: ${cssUrl(f.fileUrl)} format("${fontFormat(f.metrics.format)}"); font-weight: ${weight(min)} ${weight(max)}; font-display: swap; }`];
+    })
     .join('\n');
 }

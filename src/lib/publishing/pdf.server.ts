@@ -1,13 +1,15 @@
-// Print-ready PDFs: a pg-boss job renders a version's print page in one warm Chromium; each PDF is kept
-// per version and paper size, since a version never changes.
+// Print-ready PDFs: a pg-boss job prints a version's print edition as a book in one warm Chromium; each PDF is
+// kept per version and paper size, since a version never changes.
 import { existsSync } from 'node:fs';
 import { CHROMIUM_PATH, DATABASE_URL, SITE_URL } from 'astro:env/server';
 import PgBoss from 'pg-boss';
+import { ParseSpeeds, PDFArray, PDFDict, PDFDocument, PDFHexString, PDFName, PDFRef, PDFString } from 'pdf-lib';
 import puppeteer, { type Browser } from 'puppeteer-core';
-import { Brand, GuidelineVersion, PdfExport } from '../../../db/models';
+import { Brand, GuidelineVersion, PdfExport, Studio } from '../../../db/models';
 import { storage } from '../storage/index.server';
 import { newKey } from '../storage/storage';
 import { PRINT_COOKIE, printPass } from './print-grant.server';
+import { printRequestAllowed } from './print-requests';
 import { versionPath } from './snapshot-urls';
 
 export const PAPER_SIZES = ['a4', 'letter'] as const;
@@ -58,26 +60,118 @@ export function warmBrowser(): Promise<Browser> {
   return browser;
 }
 
-/** Print a page of ours to PDF: backgrounds on, page numbers in the footer, the CSS page size honoured. */
-export async function printUrl(url: string, size: PaperSize, cookie?: { name: string; value: string }): Promise<Buffer> {
+export interface BookMeta {
+  title: string;
+  author: string;
+  subject: string;
+  keywords: string[];
+  published: Date;
+}
+
+/**
+ * Print a version's print edition as a book, in two passes on one loaded page: the body first (running heads,
+ * folios from 1, an outline from its section headings), then the cover and contents with the page each section
+ * starts on, read back from the body's outline; pdf-lib puts the front matter before the body and sets the metadata.
+ * Chromium may fetch only that version's own files (printRequestAllowed); scripts never run.
+ */
+export async function printBook(url: string, cookie: { name: string; value: string } | undefined, meta: BookMeta, onProgress?: (percent: number) => Promise<unknown>): Promise<Buffer> {
   const page = await (await warmBrowser()).newPage();
+  const blocked: string[] = [];
+  const t0 = performance.now();
+  const times: number[] = [];
   try {
-    if (cookie) await page.setCookie({ ...cookie, url: new URL(url).origin, httpOnly: true });
-    await page.goto(url, { waitUntil: 'networkidle0', timeout: 60_000 });
-    await page.evaluate(() => document.fonts.ready);
-    const pdf = await page.pdf({
-      format: size === 'a4' ? 'A4' : 'Letter',
-      printBackground: true,
-      displayHeaderFooter: true,
-      headerTemplate: '<span></span>',
-      footerTemplate:
-        '<div style="width:100%;font:8px system-ui,sans-serif;color:#666;padding:0 12mm;display:flex;justify-content:space-between"><span class="title"></span><span><span class="pageNumber"></span> / <span class="totalPages"></span></span></div>',
-      margin: { top: '14mm', bottom: '16mm', left: '14mm', right: '14mm' },
+    await page.setJavaScriptEnabled(false);
+    await page.setRequestInterception(true);
+    page.on('request', (request) => {
+      if (printRequestAllowed(request.url(), request.method(), url)) return void request.continue();
+      blocked.push(request.url().slice(0, 120));
+      return void request.abort('blockedbyclient');
     });
-    return Buffer.from(pdf);
+    if (cookie) await page.setCookie({ ...cookie, url: new URL(url).origin, httpOnly: true });
+    await page.goto(url, { waitUntil: 'load', timeout: 60_000 });
+    await page.evaluate(() => document.fonts.ready.then(() => undefined));
+    await page.evaluate(() => void (document.documentElement.dataset.part = 'body'));
+    const titles = await page.evaluate(() => [...document.querySelectorAll('.print-body section[data-print-page] > header > h1')].map((h) => h.textContent ?? ''));
+    times.push(performance.now());
+    const body = await page.pdf({ preferCSSPageSize: true, printBackground: true, outline: true, tagged: true, timeout: 120_000 });
+    times.push(performance.now());
+    await onProgress?.(60);
+    const book = await PDFDocument.load(body, { updateMetadata: false, parseSpeed: ParseSpeeds.Fastest }); // no yielding every 100 objects
+    const starts = sectionStarts(book, titles);
+    await page.evaluate((pages: number[]) => {
+      document.querySelectorAll<HTMLElement>('[data-contents-page]').forEach((el, i) => (el.textContent = pages[i] ? String(pages[i]) : ''));
+      // The body is not in this pass, so the rows link to a marker address that bindBook() turns into page jumps.
+      document.querySelectorAll<HTMLAnchorElement>('a[data-contents-link]').forEach((a) => (a.href = `https://contents.invalid/${a.dataset.contentsLink}`));
+      document.documentElement.dataset.part = 'front';
+    }, starts.map((p) => p + 1));
+    const front = await PDFDocument.load(await page.pdf({ preferCSSPageSize: true, printBackground: true, tagged: false, timeout: 60_000 }), { parseSpeed: ParseSpeeds.Fastest });
+    times.push(performance.now());
+    if (blocked.length) console.warn(`[pdf] blocked ${blocked.length} request(s) while printing ${new URL(url).pathname}: ${blocked.slice(0, 3).join(', ')}`);
+    const bound = Buffer.from(await bindBook(book, front, starts, meta));
+    const ms = (a: number, b: number) => Math.round(b - a);
+    console.log(`[pdf] ${new URL(url).pathname}: load ${ms(t0, times[0])} ms, body ${ms(times[0], times[1])} ms, front ${ms(times[1], times[2])} ms, bind ${ms(times[2], performance.now())} ms`);
+    return bound;
   } finally {
     await page.close();
   }
+}
+
+/**
+ * The body page index (0-based) where each section starts, read from the outline Chromium wrote: its top-level
+ * entries are the section headings (<h1>), matched to `titles` in order, since rich-text headings placed before
+ * the first section are top-level entries too. A section not found gets -1 (its contents row shows no number).
+ */
+function sectionStarts(book: PDFDocument, titles: string[]): number[] {
+  const pageIndex = new Map(book.getPages().map((p, i) => [p.ref.toString(), i]));
+  const entries: { title: string; page: number }[] = [];
+  const outlines = book.catalog.lookupMaybe(PDFName.of('Outlines'), PDFDict);
+  let item = outlines?.lookupMaybe(PDFName.of('First'), PDFDict);
+  while (item) {
+    const target = item.lookupMaybe(PDFName.of('Dest'), PDFArray)?.get(0);
+    const title = item.lookupMaybe(PDFName.of('Title'), PDFString, PDFHexString)?.decodeText() ?? '';
+    entries.push({ title: normalise(title), page: target instanceof PDFRef ? (pageIndex.get(target.toString()) ?? -1) : -1 });
+    item = item.lookupMaybe(PDFName.of('Next'), PDFDict);
+  }
+  let next = 0;
+  return titles.map((title) => {
+    const found = entries.findIndex((e, i) => i >= next && e.title === normalise(title));
+    if (found < 0) return -1;
+    next = found + 1;
+    return entries[found].page;
+  });
+}
+
+const normalise = (text: string) => text.replace(/\s+/g, ' ').trim();
+
+/** Front matter before the body, contents links pointed at their pages, page labels i, ii, 1, 2…, and metadata. */
+async function bindBook(book: PDFDocument, front: PDFDocument, starts: number[], meta: BookMeta): Promise<Uint8Array> {
+  const bodyPages = book.getPages();
+  const copied = await book.copyPages(front, front.getPageIndices());
+  copied.forEach((p, i) => book.insertPage(i, p));
+  // The contents rows link to https://contents.invalid/<n> in the front pass; here each becomes a jump to its page.
+  for (const p of copied) {
+    const annots = p.node.lookupMaybe(PDFName.of('Annots'), PDFArray);
+    for (let i = 0; annots && i < annots.size(); i++) {
+      const annot = annots.lookupMaybe(i, PDFDict);
+      const uri = annot?.lookupMaybe(PDFName.of('A'), PDFDict)?.lookupMaybe(PDFName.of('URI'), PDFString, PDFHexString)?.decodeText();
+      const n = Number(uri?.match(/^https:\/\/contents\.invalid\/(\d+)$/)?.[1] ?? NaN);
+      const target = bodyPages[starts[n]];
+      if (!annot || !uri?.startsWith('https://contents.invalid/')) continue;
+      annot.delete(PDFName.of('A'));
+      if (target) annot.set(PDFName.of('Dest'), book.context.obj([target.ref, PDFName.of('Fit')]));
+    }
+  }
+  book.catalog.set(PDFName.of('PageLabels'), book.context.obj({ Nums: [0, { S: PDFName.of('r') }, copied.length, { S: PDFName.of('D') }] }));
+  book.setTitle(meta.title, { showInWindowTitleBar: true });
+  book.setAuthor(meta.author);
+  book.setSubject(meta.subject);
+  book.setKeywords(meta.keywords);
+  book.setCreator('Plumbline');
+  book.setProducer('Plumbline (Chromium and pdf-lib)');
+  book.setCreationDate(meta.published);
+  book.setModificationDate(new Date());
+  book.setLanguage('en');
+  return book.save({ objectsPerTick: Infinity });
 }
 
 let boss: Promise<PgBoss> | null = null;
@@ -85,6 +179,8 @@ let boss: Promise<PgBoss> | null = null;
 /** pg-boss on our PostgreSQL, with this process working the PDF queue one job at a time. */
 function queue(): Promise<PgBoss> {
   boss ??= (async () => {
+    // Chromium starts while pg-boss does, so the first PDF does not wait for both in turn.
+    Promise.resolve().then(warmBrowser).catch(() => undefined);
     const b = new PgBoss({ connectionString: DATABASE_URL, schema: 'pgboss', max: 3 });
     b.on('error', (err) => console.error('[pdf] queue error', err));
     await b.start();
@@ -93,6 +189,18 @@ function queue(): Promise<PgBoss> {
     return b;
   })();
   return boss;
+}
+
+/** Title, author (the studio), subject and keywords of a version's PDF. */
+export function bookMeta(brandName: string, studioName: string, number: number, published: Date): BookMeta {
+  const date = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric' }).format(published);
+  return {
+    title: `${brandName} brand guidelines, version ${number}`,
+    author: studioName,
+    subject: `How to use the ${brandName} identity: logo, colour, type and imagery. Version ${number}, published ${date}.`,
+    keywords: [brandName, 'brand guidelines', `version ${number}`],
+    published,
+  };
 }
 
 async function renderExport(exportId: string): Promise<void> {
@@ -104,8 +212,10 @@ async function renderExport(exportId: string): Promise<void> {
   await job.update({ state: 'rendering', progress: 20 });
   try {
     const url = `${SITE_URL}${versionPath(brand.slug, version.number)}/print?size=${job.size}`;
-    const pdf = await printUrl(url, job.size, { name: PRINT_COOKIE, value: printPass(version.id) });
-    await job.update({ progress: 90 });
+    const studio = await Studio.findByPk(brand.studioId, { attributes: ['name'] });
+    const meta = bookMeta(brand.name, studio?.name ?? brand.name, version.number, version.publishedAt);
+    const pdf = await printBook(url, { name: PRINT_COOKIE, value: printPass(version.id) }, meta, (progress) => job.update({ progress }));
+    await job.update({ progress: 95 });
     const key = newKey(brand.id, 'pdf', 'pdf');
     await storage.put(key, pdf, 'application/pdf');
     await job.update({ state: 'done', progress: 100, storageKey: key, error: null });

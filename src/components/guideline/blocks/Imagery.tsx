@@ -14,7 +14,7 @@ function shelfImageUrl(identity: Identity, src: string): string | null {
   return asset ? safeAssetUrl(asset.url) : null;
 }
 
-export function ImageryBlock({ attrs, identity, editing }: BlockRenderProps<ImageryAttrs>) {
+export function ImageryBlock({ attrs, identity, mode, editing }: BlockRenderProps<ImageryAttrs>) {
   if (attrs.items.length === 0) return editing ? <EmptyHint>Add photographs from the asset shelf and say whether each is a do or a don’t.</EmptyHint> : null;
   return (
     <ul className={`grid gap-4 ${COLUMNS[attrs.columns]}`}>
@@ -25,7 +25,7 @@ export function ImageryBlock({ attrs, identity, editing }: BlockRenderProps<Imag
           <li key={i}>
             <figure className="overflow-hidden rounded-xl border border-black/10 bg-white text-[#1f1f1f]" data-verdict={item.verdict}>
               {url ? (
-                <img src={url} alt={item.alt} className="aspect-[4/3] w-full object-cover" loading="lazy" decoding="async" />
+                <img src={url} alt={item.alt} className="aspect-[4/3] w-full object-cover" loading={mode === 'print' ? 'eager' : 'lazy'} decoding="async" />
               ) : (
                 <div role="img" aria-label={item.alt || 'Image to come'} className="flex aspect-[4/3] items-center justify-center bg-[#f1efeb] p-4 text-center text-xs text-[#5a5650]" data-image-placeholder="">
                   {editing ? 'Choose an approved image from the asset shelf; it appears here.' : 'Image to come'}

@@ -11,7 +11,7 @@ export function MinimumSizeBlock({ attrs, identity, mode, editing }: BlockRender
   return (
     <figure data-logo-id={logo.id} className="grid gap-4 sm:grid-cols-2">
       <div className="flex min-h-32 items-center justify-center rounded-xl border border-black/10 bg-white p-6">
-        <LogoImage logo={logo} style={{ width: mode === 'print' ? `${printMm}mm` : `${screenPx}px`, height: 'auto', maxWidth: 'none' }} />
+        <LogoImage logo={logo} style={{ width: mode === 'print' ? `${printMm}mm` : `${screenPx}px`, height: 'auto', maxWidth: 'none' }} mode={mode} />
       </div>
       <figcaption className="self-center text-sm leading-relaxed">
         <p>

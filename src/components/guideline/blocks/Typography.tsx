@@ -31,13 +31,13 @@ function Face({ face, role, attrs }: { face: IdentityTypeface; role: TypefaceRol
   );
 }
 
-export function TypographyBlock({ attrs, identity, editing }: BlockRenderProps<TypographyAttrs>) {
+export function TypographyBlock({ attrs, identity, mode, editing }: BlockRenderProps<TypographyAttrs>) {
   const scale = identity.typeScale;
   if (attrs.roles.length === 0 && !attrs.showScale) return editing ? <EmptyHint>Choose the typefaces or the scale to show.</EmptyHint> : null;
   return (
     <div className="grid gap-6">
       {attrs.roles.length > 0 ? (
-        <ul className="grid gap-4 md:grid-cols-2">
+        <ul className={`grid gap-4 ${mode === 'print' ? 'grid-cols-2' : 'md:grid-cols-2'}`}>
           {attrs.roles.map((role) => {
             const face = typefaceForRole(identity, role);
             if (face) return <Face key={role} face={face} role={role} attrs={attrs} />;
@@ -57,26 +57,45 @@ export function TypographyBlock({ attrs, identity, editing }: BlockRenderProps<T
               {scale.measure ? `; running text sets about ${Math.round(scale.measure.charsPerLine)} characters per line at ${scale.columnPx} px` : ''}.
             </caption>
             <thead className="border-b border-black/10 text-xs uppercase tracking-wider opacity-70">
-              <tr>
-                <th scope="col" className="px-4 py-2">Style</th>
-                <th scope="col" className="px-4 py-2">Size</th>
-                <th scope="col" className="px-4 py-2">Line height</th>
-                <th scope="col" className="px-4 py-2">Sample</th>
-              </tr>
+              {mode === 'print' ? (
+                <tr>
+                  <th scope="col" className="w-[32%] px-4 py-2">Style, size, line height</th>
+                  <th scope="col" className="px-4 py-2">Sample</th>
+                </tr>
+              ) : (
+                <tr>
+                  <th scope="col" className="px-4 py-2">Style</th>
+                  <th scope="col" className="px-4 py-2">Size</th>
+                  <th scope="col" className="px-4 py-2">Line height</th>
+                  <th scope="col" className="px-4 py-2">Sample</th>
+                </tr>
+              )}
             </thead>
             <tbody>
               {[...scale.steps].sort((a, b) => b.step - a.step).map((step) => {
                 const face = typefaceForRole(identity, step.role);
-                return (
+                const size = `${num(step.px)} px · ${num(step.rem, 3)} rem · ${num(step.pt)} pt`;
+                const sample = (
+                  <td className="px-4 py-3" style={{ fontFamily: fontStack(face), fontSize: `${step.px}px`, lineHeight: step.lineHeight, overflowWrap: 'anywhere' }} data-sample="scale">
+                    {attrs.specimenText.split(' ').slice(0, 4).join(' ')}
+                  </td>
+                );
+                // On paper the sample gets the measure's width at its true size and wraps; it is never clipped.
+                return mode === 'print' ? (
+                  <tr key={step.step} className="border-b border-black/5 align-baseline last:border-0" data-step={step.step}>
+                    <th scope="row" className="px-4 py-3 font-semibold">
+                      {step.name}
+                      <span className="mt-0.5 block font-mono text-[0.7rem] font-normal">{size}</span>
+                      <span className="block font-mono text-[0.7rem] font-normal">line height {num(step.lineHeight)}</span>
+                    </th>
+                    {sample}
+                  </tr>
+                ) : (
                   <tr key={step.step} className="border-b border-black/5 align-baseline last:border-0" data-step={step.step}>
                     <th scope="row" className="whitespace-nowrap px-4 py-3 font-semibold">{step.name}</th>
-                    <td className="whitespace-nowrap px-4 py-3 font-mono text-xs">
-                      {num(step.px)} px · {num(step.rem, 3)} rem · {num(step.pt)} pt
-                    </td>
+                    <td className="whitespace-nowrap px-4 py-3 font-mono text-xs">{size}</td>
                     <td className="px-4 py-3 font-mono text-xs">{num(step.lineHeight)}</td>
-                    <td className="px-4 py-3" style={{ fontFamily: fontStack(face), fontSize: `${step.px}px`, lineHeight: step.lineHeight }}>
-                      {attrs.specimenText.split(' ').slice(0, 4).join(' ')}
-                    </td>
+                    {sample}
                   </tr>
                 );
               })}

@@ -1,11 +1,13 @@
 import type { APIRoute } from 'astro';
 import { recolorSvg, reverseOnGround } from '../../../../../../lib/logo';
+import { PRINT_WEIGHTS } from '../../../../../../lib/guideline/identity';
 import { siteAccess } from '../../../../../../lib/publishing/site-access.server';
+import { staticInstance } from '../../../../../../lib/type/font-instance.server';
 import { storage } from '../../../../../../lib/storage/index.server';
 
 const VARIANTS = new Set(['black', 'white', 'reversed']);
 
-/** A file of a published version (its own copy of a logo or a licensed font), recoloured for logo variants. */
+/** A file of a published version (its own copy of a logo or a licensed font), recoloured for logo variants, or a font at one static weight. */
 export const GET: APIRoute = async (context) => {
   const access = await siteAccess(context, context.params.slug!, Number(context.params.number));
   if (access instanceof Response) return new Response('Not found', { status: 404 });
@@ -21,9 +23,20 @@ export const GET: APIRoute = async (context) => {
     const svg = body.toString('utf8');
     body = Buffer.from(variant === 'white' && on && /^#[0-9a-f]{6}$/i.test(on) ? reverseOnGround(svg, on) : recolorSvg(svg, variant as 'black' | 'white' | 'reversed'));
   }
+  // The print edition asks for a variable font as one static weight (?weight=400|500|600|700).
+  const weight = Number(context.url.searchParams.get('weight'));
+  let contentType = file.contentType;
+  if (file.contentType.startsWith('font/') && (PRINT_WEIGHTS as readonly number[]).includes(weight)) {
+    try {
+      body = await staticInstance(body, weight);
+      contentType = 'font/ttf';
+    } catch (err) {
+      console.warn('[files] no static instance of', file.key, (err as Error).message);
+    }
+  }
   return new Response(new Uint8Array(body), {
     headers: {
-      'content-type': file.contentType,
+      'content-type': contentType,
       // A version's files never change; still private, since access is per viewer.
       'cache-control': 'private, max-age=31536000, immutable',
       'x-content-type-options': 'nosniff',
