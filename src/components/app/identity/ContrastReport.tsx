@@ -226,7 +226,8 @@ function Report({ brandId, canEdit }: { brandId: string; canEdit: boolean }) {
       <section aria-labelledby="vision-title">
         <h3 id="vision-title" className="text-lg font-semibold">Colour-vision previews</h3>
         <p className="mt-1 text-sm text-ink-soft">{COLOR_VISION_CAUTION}</p>
-        <div className="mt-3 overflow-x-auto">
+        {/* A wide table scrolls on its own; focusable so a keyboard can scroll it too. */}
+        <div className="mt-3 overflow-x-auto" tabIndex={0} role="region" aria-label="Colour-vision previews, scrollable">
           <table className="w-full border-separate border-spacing-1 text-left text-sm" aria-label="The palette as seen with each colour-vision deficiency">
             <thead>
               <tr className="text-xs text-ink-faint">
