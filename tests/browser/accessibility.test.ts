@@ -53,7 +53,7 @@ describe('axe-core finds no serious or critical violation', () => {
     expect(serious).toEqual([]);
     expect(errors).toEqual([]);
     await page.close();
-  });
+  }, 120_000);
 
   test.each([
     ['a desk', 1440, 900],
@@ -72,5 +72,5 @@ describe('axe-core finds no serious or critical violation', () => {
       expect(await seriousViolations(page)).toEqual([]);
     }
     await page.close();
-  });
+  }, 120_000);
 });

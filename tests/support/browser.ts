@@ -39,8 +39,10 @@ export async function seriousViolations(page: Page, exclude: string[] = [SAMPLE_
     .map((v) => `${v.id} (${v.nodes.length}): ${v.nodes[0]?.target.join(' ')}`);
 }
 
-/** Wait until the islands have their data: the network is quiet and no "Loading…" status is left. */
+/** Wait until the islands have their data: those that wake when seen are scrolled to, the network is quiet
+ *  and no "Loading…" status is left. */
 export async function settled(page: Page): Promise<void> {
+  for (const island of await page.locator('astro-island[client="visible"]').all()) await island.scrollIntoViewIfNeeded();
   await page.waitForLoadState('networkidle');
   await page.waitForFunction(() => ![...document.querySelectorAll('[role="status"]')].some((e) => /^\s*(Loading|Opening)/.test(e.textContent ?? '')));
 }

@@ -3,6 +3,7 @@
 import { readFileSync } from 'node:fs';
 import { wcagContrast } from 'culori';
 import { describe, expect, test } from 'vitest';
+import { inkOn } from '../../src/components/app/identity/shared';
 
 const css = readFileSync(new URL('../../src/styles/global.css', import.meta.url), 'utf8');
 const token = (name: string): string => {
@@ -44,5 +45,13 @@ describe('WCAG 2.2 SC 1.4.3 (contrast minimum, 4.5:1 for text) on the app tokens
   });
   test('the faintest ink stays a step quieter than the soft one, so the hierarchy survives', () => {
     expect(wcagContrast(token('ink-faint'), token('paper'))).toBeLessThan(wcagContrast(token('ink-soft'), token('paper')));
+  });
+});
+
+describe('labels laid over a brand swatch (identity screen) reach WCAG 2.2 SC 1.4.3, 4.5:1', () => {
+  // Mid-tones are the hard case: by the WCAG relative-luminance definition, black and white tie near luminance
+  // 0.18 at about 4.58:1, so one of them always passes; a warm near-black alone does not (e.g. on #c8553d).
+  test.each(['#c8553d', '#767676', '#777777', '#808080', '#2f5d50', '#e9d8b8', '#4a2c21', '#0077cc', '#ff0000', '#00a000'])('on %s', (hex) => {
+    expect(wcagContrast(inkOn(hex), hex)).toBeGreaterThanOrEqual(4.5);
   });
 });
