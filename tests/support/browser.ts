@@ -1,5 +1,5 @@
 // Debian's chromium for browser tests: never a downloaded browser. Plus the checks several walks share.
-import { readFileSync } from 'node:fs';
+import { existsSync, readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import type { LaunchOptions, Page } from 'playwright-core';
 import { expect } from 'vitest';
@@ -8,8 +8,13 @@ import type { Client } from './client';
 
 /** Launch options for headless chromium on a closed network. */
 export function launchOptions(): LaunchOptions {
+  const executablePath = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
+  // global-setup installs it as root; say plainly what is missing rather than a launcher's stack trace.
+  if (!existsSync(executablePath)) {
+    throw new Error(`Chromium is missing at ${executablePath}: run \`npm test\` as root once (it installs Debian's "chromium"), or \`sudo apt-get install -y --no-install-recommends chromium\`.`);
+  }
   return {
-    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    executablePath,
     args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'],
   };
 }

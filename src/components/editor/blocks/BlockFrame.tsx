@@ -36,6 +36,7 @@ export function BlockFrame({ props, settings, preview, startOpen }: { props: Rea
     <NodeViewWrapper
       as="div"
       data-block-frame={node.type.name}
+      id={typeof node.attrs.id === 'string' ? `block-${node.attrs.id}` : undefined}
       // Border and padding sit outside the column (-17px = 1px border + 16px padding), so the block renders at the published width.
       className={`-mx-[17px] my-4 rounded-xl border bg-card ${selected ? 'border-plumb ring-2 ring-plumb/25' : 'border-rule'}`}
     >

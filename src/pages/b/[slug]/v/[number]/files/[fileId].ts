@@ -9,7 +9,9 @@ const VARIANTS = new Set(['black', 'white', 'reversed']);
 export const GET: APIRoute = async (context) => {
   const access = await siteAccess(context, context.params.slug!, Number(context.params.number));
   if (access instanceof Response) return new Response('Not found', { status: 404 });
-  const file = access.version.files[context.params.fileId ?? ''];
+  // Own keys only: `__proto__`, `constructor` and the like name no file.
+  const fileId = context.params.fileId ?? '';
+  const file = Object.hasOwn(access.version.files, fileId) ? access.version.files[fileId] : undefined;
   if (!file) return new Response('Not found', { status: 404 });
   let body = await storage.get(file.key);
   if (!body) return new Response('Not found', { status: 404 });
