@@ -105,7 +105,9 @@ describe('validateGuideline rejects bad documents and names the first bad path',
     expectError(doc('text'), 'content.0', /Expected a block/);
   });
   test('an image source that is a script address', () =>
-    expectError(doc({ type: 'imagery', attrs: { id: 'i', items: [{ src: 'javascript:alert(1)', alt: '', verdict: 'do', caption: '' }] } }), 'content.0.attrs.items.0.src', /asset id, an https:\/\/ address/));
+    expectError(doc({ type: 'imagery', attrs: { id: 'i', items: [{ src: 'javascript:alert(1)', alt: '', verdict: 'do', caption: '' }] } }), 'content.0.attrs.items.0.src', /asset shelf; outside addresses are not accepted/));
+  test('an image source that is an outside address', () =>
+    expectError(doc({ type: 'imagery', attrs: { id: 'i', items: [{ src: 'https://attacker.example/x.png', alt: '', verdict: 'do', caption: '' }] } }), 'content.0.attrs.items.0.src', /outside addresses are not accepted/));
 });
 
 describe('links and asset addresses', () => {
@@ -121,9 +123,9 @@ describe('links and asset addresses', () => {
     ['https://x.org/"onmouseover="', false],
     ['vbscript:msgbox', false],
   ])('%s → %s', (href, ok) => expect(isSafeHref(href)).toBe(ok));
-  test('asset addresses: https, same-site paths only', () => {
+  test('asset addresses: same-site paths only', () => {
     expect(safeAssetUrl('/files/logo.svg')).toBe('/files/logo.svg');
-    expect(safeAssetUrl('https://cdn.example/logo.svg')).toBe('https://cdn.example/logo.svg');
+    expect(safeAssetUrl('https://cdn.example/logo.svg')).toBeNull(); // files come from our own site only
     expect(safeAssetUrl('//cdn.example/logo.svg')).toBeNull();
     expect(safeAssetUrl('javascript:alert(1)')).toBeNull();
   });

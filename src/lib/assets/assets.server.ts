@@ -10,6 +10,7 @@ import type { Caller } from '../auth/access.server';
 import { sequelize } from '../db.server';
 import { ApiError, notFound } from '../http/api';
 import { loadIdentity } from '../identity/identity.server';
+import { cleanName } from '../safe/values';
 import { newKey } from '../storage/storage';
 import { storage } from '../storage/index.server';
 import type { AssetReader } from './access.server';
@@ -80,7 +81,7 @@ const brandAudit = (caller: Caller, brand: Brand, action: string, targetId: stri
   details,
 });
 
-const nameFrom = (filename: string) => filename.replace(/\.[a-z0-9]{1,8}$/i, '').replace(/\p{Cc}+/gu, ' ').trim().slice(0, 160) || 'Untitled asset';
+const nameFrom = (filename: string) => cleanName(filename.replace(/\.[a-z0-9]{1,8}$/i, ''), 'Untitled asset', 160);
 
 // ---------------------------------------------------------------- uploads
 

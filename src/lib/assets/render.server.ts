@@ -9,6 +9,7 @@ import type { Box } from '../logo/geometry';
 import type { FileStorage } from '../storage/storage';
 import { MAX_IMAGE_PIXELS, renditionType, type AssetFormat, type RenditionParams } from './kinds';
 import { paramsText } from './renditions';
+import { escapeXml } from '../safe/escape';
 
 export interface RenditionSource {
   id: string;
@@ -135,7 +136,7 @@ export async function renderRendition(source: RenditionSource, params: Rendition
     let text = svgFor(source.bytes, params).text;
     if (params.background) {
       const { viewBox } = toSanitizedSvg(text);
-      text = text.replace(/^(<svg\b[^>]*>)/i, `$1<rect data-role="background" x="${viewBox.x}" y="${viewBox.y}" width="${viewBox.width}" height="${viewBox.height}" fill="${params.background}"/>`);
+      text = text.replace(/^(<svg\b[^>]*>)/i, `$1<rect data-role="background" x="${viewBox.x}" y="${viewBox.y}" width="${viewBox.width}" height="${viewBox.height}" fill="${escapeXml(params.background)}"/>`);
     }
     return { body: Buffer.from(text), ...type };
   }

@@ -1,14 +1,16 @@
 // Request shapes of the asset routes, checked once at the boundary.
 import { z } from 'zod';
+import { isCleanNote, isOneLine, NOTE_MESSAGE, ONE_LINE_MESSAGE } from '../safe/values';
 import { ASSET_KINDS, ASSET_STATES } from './kinds';
 
-const text = (max: number) => z.string().trim().max(max, `at most ${max} characters`);
+const text = (max: number) => z.string().trim().max(max, `at most ${max} characters`).refine(isOneLine, ONE_LINE_MESSAGE);
+const note = (max: number) => z.string().trim().max(max, `at most ${max} characters`).refine(isCleanNote, NOTE_MESSAGE);
 
 export const assetPatchSchema = z.strictObject({
   state: z.enum(ASSET_STATES).optional(),
   tags: z.array(text(40).min(1, 'a tag cannot be empty')).max(30, 'at most 30 tags').optional(),
-  description: text(2000).nullable().optional(),
-  usageNotes: text(2000).nullable().optional(),
+  description: note(2000).nullable().optional(),
+  usageNotes: note(2000).nullable().optional(),
   name: text(160).min(1, 'a name is needed').optional(),
   kind: z.enum(['logo', 'image']).optional(),
 });

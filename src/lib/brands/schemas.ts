@@ -1,5 +1,6 @@
 // Request bodies for brands and members: strict objects, so an unknown field is an error, not a no-op.
 import { z } from 'zod';
+import { isOneLine } from '../safe/values';
 import { BRAND_ROLES } from '../auth/roles';
 import { SLUG_PATTERN } from './slug';
 
@@ -7,7 +8,8 @@ export const brandName = z
   .string({ error: 'Give the brand a name.' })
   .trim()
   .min(1, 'Give the brand a name.')
-  .max(120, 'A brand name can be at most 120 characters.');
+  .max(120, 'A brand name can be at most 120 characters.')
+  .refine(isOneLine, 'A brand name must be one line of text, without control characters.');
 
 export const brandSlug = z
   .string()

@@ -2,12 +2,14 @@
 import { readFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { QueryTypes } from 'sequelize';
-import { Brand, GuidelineDraft } from '../../../db/models';
+import { Asset, Brand, GuidelineDraft } from '../../../db/models';
 import { audit } from '../audit.server';
 import type { Caller } from '../auth/access.server';
 import { sequelize } from '../db.server';
 import { ApiError } from '../http/api';
 import type { Identity } from '../identity/types';
+import { isAssetRef } from '../safe/values';
+import { OUTSIDE_IMAGE_MESSAGE } from './blocks';
 import { validateGuideline, type GuidelineDoc } from './document';
 import { instantiateTemplate, templateInstructions } from './templates';
 
@@ -31,12 +33,26 @@ export function checkDoc(doc: unknown): GuidelineDoc {
   return result.doc;
 }
 
+/** Every asset id an imagery block names must be a file of this brand's own shelf; else a 400 naming the first. */
+async function checkShelfImages(brand: Brand, doc: GuidelineDoc): Promise<void> {
+  const used: { id: string; path: string }[] = [];
+  doc.content.forEach((node, i) => {
+    if (node.type !== 'imagery') return;
+    node.attrs.items.forEach((item, j) => isAssetRef(item.src) && used.push({ id: item.src, path: `content.${i}.attrs.items.${j}.src` }));
+  });
+  if (used.length === 0) return;
+  const found = new Set((await Asset.findAll({ where: { brandId: brand.id, id: [...new Set(used.map((u) => u.id))] }, attributes: ['id'] })).map((a) => a.id));
+  const stranger = used.find((u) => !found.has(u.id));
+  if (stranger) throw new ApiError(400, 'invalid_input', `The document is not valid at ${stranger.path}: ${OUTSIDE_IMAGE_MESSAGE}`, { path: stranger.path });
+}
+
 /**
  * Save against the revision the editor started from. One UPDATE … WHERE revision = base decides the race:
  * of two saves from the same base exactly one wins, the other gets a 409 with the current revision.
  */
 export async function saveDraft(caller: Caller, brand: Brand, baseRevision: number, doc: unknown): Promise<{ revision: number }> {
   const valid = checkDoc(doc);
+  await checkShelfImages(brand, valid);
   await readDraft(brand);
   return sequelize.transaction(async (t) => {
     const rows = await sequelize.query<{ revision: number }>(

@@ -1,6 +1,8 @@
 // Looking up identity data by id, and the brand's CSS custom properties the published site wears.
 import { relativeLuminance } from '../color/contrast';
 import type { ColorRole, Identity, IdentityColor, IdentityLogo, IdentityTypeface, TypefaceRole } from '../identity/types';
+import { cssFontFamilyList, cssString, cssUrl } from '../safe/escape';
+import { cleanTypefaceFamily, fallbackFamily, storedHex } from '../safe/values';
 
 export const findColor = (identity: Identity, id: string | null | undefined): IdentityColor | undefined =>
   id ? identity.colors.find((c) => c.id === id) : undefined;
@@ -45,11 +47,11 @@ export function markLogo(identity: Identity): IdentityLogo | undefined {
 export const typefaceForRole = (identity: Identity, role: TypefaceRole): IdentityTypeface | undefined =>
   identity.typefaces.find((t) => t.role === role);
 
-/** A CSS font-family list: the family quoted, then its fallbacks. */
+/** A CSS font-family list: the family, then its fallbacks, each cleaned and escaped (an old row may predate the rules). */
 export function fontStack(face: IdentityTypeface | undefined, generic = 'sans-serif'): string {
   if (!face) return generic;
-  const quote = (name: string) => (/^[A-Za-z-]+$/.test(name) ? name : `"${name.replace(/["\\]/g, '')}"`);
-  return [face.family, ...face.fallback].map(quote).concat(face.fallback.length ? [] : [generic]).join(', ');
+  const names = [cleanTypefaceFamily(face.family), ...face.fallback.map((f) => (fallbackFamily.safeParse(f).success ? f.trim() : cleanTypefaceFamily(f, ''))).filter(Boolean)];
+  return cssFontFamilyList(face.fallback.length ? names : [...names, generic]);
 }
 
 /** CSS custom properties of the brand: fonts by role and colours by role, for the published site's root. */
@@ -62,12 +64,15 @@ export function brandStyle(identity: Identity): Record<string, string> {
   };
   for (const role of ['primary', 'secondary', 'accent', 'text', 'background'] as const) {
     const color = colorForRole(identity, role);
-    if (color) style[`--brand-${role}`] = color.hex;
+    if (color) style[`--brand-${role}`] = storedHex(color.hex, role === 'text' ? '#1a1a1a' : '#ffffff');
   }
   style['--brand-text'] ??= '#1a1a1a';
   style['--brand-background'] ??= '#ffffff';
   return style;
 }
+
+/** A font weight for CSS: a number from 1 to 1000 (CSS Fonts 4 §2.2), else normal. */
+const weight = (value: unknown) => (typeof value === 'number' && Number.isFinite(value) ? Math.min(1000, Math.max(1, Math.round(value))) : 400);
 
 const fontFormat = (format: string) => (format === 'WOFF2' ? 'woff2' : format === 'WOFF' ? 'woff' : 'opentype');
 
@@ -75,6 +80,6 @@ const fontFormat = (format: string) => (format === 'WOFF2' ? 'woff2' : format ==
 export function fontFaceCss(typefaces: readonly IdentityTypeface[]): string {
   return typefaces
     .filter((f) => f.fileUrl)
-    .map((f) => `@font-face { font-family: "${f.family.replace(/["\\<>]/g, '')}"; src: url("${f.fileUrl}") format("${fontFormat(f.metrics.format)}"); font-weight: ${f.metrics.weight.min} ${f.metrics.weight.max}; font-display: swap; }`)
+    .map((f) => `@font-face { font-family: ${cssString(cleanTypefaceFamily(f.family))}; src: ${cssUrl(f.fileUrl)} format("${fontFormat(f.metrics.format)}"); font-weight: ${weight(f.metrics.weight.min)} ${weight(f.metrics.weight.max)}; font-display: swap; }`)
     .join('\n');
 }

@@ -20,10 +20,9 @@ export function isSafeHref(href: unknown): href is string {
   return typeof href === 'string' && href.length <= MAX_HREF && ALLOWED.test(href) && !hasHiddenCharacters(href) && !QUOTES_AND_BRACKETS.test(href);
 }
 
-/** An image or logo address we may put in src/href: https://, http://localhost-style absolute http, or a same-site path. */
+/** A file address we may put in src/href: only a path on our own site, so neither a reader's browser nor the PDF renderer fetches elsewhere. */
 export function safeAssetUrl(url: unknown): string | null {
   if (typeof url !== 'string' || url.length > MAX_HREF || hasHiddenCharacters(url) || QUOTES_AND_BRACKETS.test(url)) return null;
-  if (/^https?:\/\/[^/]/i.test(url)) return url;
   if (/^\/[^/\\]/.test(url)) return url;
   return null;
 }

@@ -18,6 +18,7 @@ import { storage } from '../storage/index.server';
 import type { IdentityForTokens } from '../tokens';
 import { fontMetrics, measure, modularScale, MEASURE_RANGE, pxToRem, pxToPt, SCALE_RATIOS, type FontMetrics } from '../type';
 import { shippedFont } from '../type/shipped-fonts';
+import { cleanName, cleanTypefaceFamily } from '../safe/values';
 import { DEFAULT_TYPE_SCALE } from './schemas';
 import type {
   ColorRole,
@@ -197,7 +198,7 @@ export async function uploadLogo(
       const logo = await BrandLogo.create(
         {
           brandId: brand.id,
-          name: fields.name || file.name.replace(/\.[a-z0-9]+$/i, '').slice(0, 120) || 'Logo',
+          name: fields.name || cleanName(file.name.replace(/\.[a-z0-9]+$/i, ''), 'Logo', 120),
           variant: fields.variant,
           format,
           storageKey: key,
@@ -381,7 +382,7 @@ export async function uploadTypeface(caller: Caller, brand: Brand, file: File, r
         {
           brandId: brand.id,
           role,
-          family: family || metrics.family,
+          family: family || cleanTypefaceFamily(metrics.family),
           source: 'upload',
           shippedKey: null,
           storageKey: key,
@@ -409,7 +410,8 @@ export function typefaceView(row: BrandTypeface): IdentityTypeface {
   return {
     id: row.id,
     role: row.role,
-    family: row.family,
+    // Cleaned on the way out as well: a row stored before the family-name rule must not carry CSS.
+    family: cleanTypefaceFamily(row.family),
     source: row.source,
     shippedKey: row.shippedKey,
     fallback: row.fallback,

@@ -2,14 +2,15 @@
 import { z } from 'zod';
 import { SCALE_RATIOS } from '../type/scale';
 import { SHIPPED_FONTS } from '../type/shipped-fonts';
+import { cssColorInput, displayName, fallbackFamily, noteText, singleLine, typefaceFamily } from '../safe/values';
 import { COLOR_ROLES, LOGO_VARIANTS, TYPEFACE_ROLES } from './types';
 
 const percent = z.number().min(0, 'CMYK values run from 0 to 100.').max(100, 'CMYK values run from 0 to 100.');
 export const cmykSchema = z.tuple([percent, percent, percent, percent], { error: 'Give CMYK as four numbers [c, m, y, k] from 0 to 100.' });
 
-const colorName = z.string().trim().min(1, 'Give the colour a name.').max(80, 'A colour name can be at most 80 characters.');
-const colorValue = z.string().trim().min(1, 'Type a colour value, e.g. #1f6f5c or oklch(55% 0.1 170).').max(200);
-const spot = z.string().trim().max(120, 'Keep the spot reference under 120 characters.').nullable();
+const colorName = displayName('colour', 80);
+const colorValue = cssColorInput;
+const spot = singleLine('spot reference', 120).nullable();
 
 export const createColorBody = z.strictObject({
   name: colorName,
@@ -32,16 +33,16 @@ export const updateColorBody = z
 export const reorderBody = z.strictObject({ ids: z.array(z.uuid()).min(1).max(500) });
 
 export const logoFields = z.strictObject({
-  name: z.string().trim().min(1).max(120).optional(),
+  name: displayName('logo', 120).optional(),
   variant: z.enum(LOGO_VARIANTS, { error: `Choose a variant: ${LOGO_VARIANTS.join(', ')}.` }).default('primary'),
 });
 
 export const updateLogoBody = z
   .strictObject({
-    name: z.string().trim().min(1).max(120).optional(),
+    name: displayName('logo', 120).optional(),
     variant: z.enum(LOGO_VARIANTS).optional(),
     clearSpaceUnit: z.number().positive('The clear-space unit must be larger than 0.').max(1e5).optional(),
-    clearSpaceLabel: z.string().trim().min(1).max(120).optional(),
+    clearSpaceLabel: singleLine('clear-space label', 120).min(1, 'Name the clear-space unit.').optional(),
     clearSpaceMultiple: z.number().min(0.25).max(10).optional(),
     thinnestStroke: z.number().positive().max(1e5).optional(),
     minScreenPx: z.number().int().min(4).max(4000).nullable().optional(),
@@ -49,7 +50,7 @@ export const updateLogoBody = z
   })
   .refine((b) => Object.keys(b).length > 0, 'Send at least one field to change.');
 
-const fallback = z.array(z.string().trim().min(1).max(60).regex(/^[^;{}<>"\\]+$/, 'A fallback font name cannot contain ; { } < > " or \\.')).max(8);
+const fallback = z.array(fallbackFamily).max(8, 'At most 8 fallback fonts.');
 
 export const shippedTypefaceBody = z.strictObject({
   shipped: z.enum(SHIPPED_FONTS.map((f) => f.key) as [string, ...string[]], { error: 'Pick one of the open fonts Plumbline ships.' }),
@@ -59,7 +60,7 @@ export const shippedTypefaceBody = z.strictObject({
 
 export const typefaceUploadFields = z.strictObject({
   role: z.enum(TYPEFACE_ROLES, { error: `Choose a role: ${TYPEFACE_ROLES.join(', ')}.` }),
-  family: z.string().trim().min(1).max(120).optional(),
+  family: typefaceFamily.optional(),
 });
 
 export const updateTypefaceBody = z
@@ -68,7 +69,7 @@ export const updateTypefaceBody = z
     fallback: fallback.optional(),
     weights: z.array(z.number().int().min(1).max(1000)).max(12).optional(),
     licenceConfirmed: z.boolean().optional(),
-    licenceNote: z.string().trim().max(500).nullable().optional(),
+    licenceNote: noteText('licence note', 500).transform((v) => v.trim()).nullable().optional(),
   })
   .refine((b) => Object.keys(b).length > 0, 'Send at least one field to change.');
 

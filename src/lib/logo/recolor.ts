@@ -1,6 +1,7 @@
 import { parseColor } from '../color/parse';
 import { LogoError } from './errors';
 import { toSanitizedSvg } from './sanitize';
+import { escapeXml } from '../safe/escape';
 
 /** black, white, one-colour (in the given ink) or reversed (white marks on a field of the given colour). */
 export type RecolorMode = 'black' | 'white' | 'one-colour' | 'reversed';
@@ -65,12 +66,12 @@ export function recolorSvg(svg: string, mode: RecolorMode, hex?: string): string
   const ink = inkResult.color.hex;
   let out = repaintAll(clean.svg, (value) => repaint(value, ink));
   // Shapes with no paint of their own inherit from the root, whose default fill would otherwise be black.
-  out = out.replace(/^<svg\b([^>]*)>/i, (_m, attrs: string) => `<svg${attrs.replace(/\s(fill|color)\s*=\s*"[^"]*"/gi, '')} fill="${ink}" color="${ink}">`);
+  out = out.replace(/^<svg\b([^>]*)>/i, (_m, attrs: string) => `<svg${attrs.replace(/\s(fill|color)\s*=\s*"[^"]*"/gi, '')} fill="${escapeXml(ink)}" color="${escapeXml(ink)}">`);
   if (mode === 'reversed') {
     const field = parseColor(hex ?? '#000000');
     if (!field.ok) throw new LogoError('invalid_input', `The reversed field colour: ${field.error.message}`);
     const { x, y, width, height } = clean.viewBox;
-    out = out.replace(/^(<svg\b[^>]*>)/i, `$1<rect data-role="field" x="${x}" y="${y}" width="${width}" height="${height}" fill="${field.color.hex}"/>`);
+    out = out.replace(/^(<svg\b[^>]*>)/i, `$1<rect data-role="field" x="${x}" y="${y}" width="${width}" height="${height}" fill="${escapeXml(field.color.hex)}"/>`);
   }
   return out;
 }

@@ -1,6 +1,8 @@
 // E-mail templates from templates/email: `<name>.txt` (first line "Subject: …") and `<name>.html`, in one layout.
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
+import Mustache from 'mustache';
+import { escapeHtml } from '../safe/escape';
 
 export type TemplateValue = string | number | boolean | null | undefined | string[];
 export type TemplateData = Record<string, TemplateValue>;
@@ -11,25 +13,26 @@ export interface RenderedMail {
   html: string;
 }
 
-const escapeHtml = (s: string) => s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;').replace(/'/g, '&#39;');
+/** Text mode writes values as they are; HTML mode uses the one HTML escaper (OWASP XSS Prevention, rule 1). */
+const ESCAPE = { html: escapeHtml, text: (value: unknown) => String(value ?? '') } as const;
 
 /**
- * A small logic-less renderer: {{name}} (escaped in HTML), {{{name}}} (as is), {{#name}}…{{/name}} repeated for
- * each item of a list when it holds {{.}} (the item), otherwise shown once when non-empty, {{^name}}…{{/name}} shown when empty or false.
+ * Our templates' one extension of mustache: a section over a list that never prints {{.}} shows once, not once per
+ * item ("{{#summary}}What changed{{/summary}}"). It rewrites our own template text only, never a value.
+ */
+function onceForLists(source: string, data: TemplateData): string {
+  return source.replace(/\{\{#(\w+)\}\}([\s\S]*?)\{\{\/\1\}\}/g, (whole, key: string, inner: string) =>
+    Array.isArray(data[key]) && !inner.includes('{{.}}') ? `{{#${key}.length}}${inner}{{/${key}.length}}` : whole,
+  );
+}
+
+/**
+ * Renders a template with mustache (logic-less; a value is inserted once and never read as a template again):
+ * {{name}} escaped in HTML, {{{name}}} raw (only for HTML we built and escaped ourselves), {{#name}}…{{/name}} sections
+ * repeated per list item with {{.}}, {{^name}}…{{/name}} when empty or false.
  */
 export function renderTemplate(source: string, data: TemplateData, mode: 'html' | 'text'): string {
-  const esc = mode === 'html' ? escapeHtml : (s: string) => s;
-  const sections = source.replace(/\{\{([#^])(\w+)\}\}([\s\S]*?)\{\{\/\2\}\}/g, (_m, kind: string, key: string, inner: string) => {
-    const value = data[key];
-    const empty = value == null || value === false || value === '' || (Array.isArray(value) && value.length === 0);
-    if (kind === '^') return empty ? renderTemplate(inner, data, mode) : '';
-    if (empty) return '';
-    if (Array.isArray(value) && inner.includes('{{.}}')) return value.map((item) => renderTemplate(inner.replace(/\{\{\.\}\}/g, esc(item)), data, mode)).join('');
-    return renderTemplate(inner, data, mode);
-  });
-  return sections
-    .replace(/\{\{\{(\w+)\}\}\}/g, (_m, key: string) => String(data[key] ?? ''))
-    .replace(/\{\{(\w+)\}\}/g, (_m, key: string) => esc(String(data[key] ?? '')));
+  return Mustache.render(onceForLists(source, data), data, {}, { escape: ESCAPE[mode] });
 }
 
 const templateDir = () => join(process.cwd(), 'templates', 'email');
@@ -43,6 +46,7 @@ export function renderMail(name: string, data: TemplateData): RenderedMail {
   const subject = renderTemplate(first.slice('Subject: '.length), data, 'text').trim();
   const text = renderTemplate(rest.join('\n'), data, 'text').replace(/\n{3,}/g, '\n\n').trim() + '\n';
   const body = renderTemplate(read(`${name}.html`), data, 'html');
-  const html = renderTemplate(read('layout.html'), { ...data, subject }, 'html').replace('<!--body-->', body);
+  // A function replacer: a "$&" or "$'" in the body is text, not a replacement pattern.
+  const html = renderTemplate(read('layout.html'), { ...data, subject }, 'html').replace('<!--body-->', () => body);
   return { subject, text, html };
 }

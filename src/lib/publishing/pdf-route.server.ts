@@ -2,6 +2,7 @@
 import type { APIContext } from 'astro';
 import { simplePage, siteAccess } from './site-access.server';
 import { PAPER_SIZES, versionPdf, type PaperSize } from './pdf.server';
+import { escapeHtml } from '../safe/escape';
 
 /** Answer GET …/guideline.pdf?size=a4|letter for the version `number` (latest when null). */
 export async function pdfResponse(context: APIContext, number: number | null): Promise<Response> {
@@ -40,7 +41,7 @@ export async function pdfResponse(context: APIContext, number: number | null): P
 
 const progressPage = (brand: string, number: number, size: string) => `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1">
 <title>Preparing the PDF</title><style>body{font-family:system-ui,sans-serif;background:#f8f6f2;color:#211e1a;display:grid;place-items:center;min-height:100vh;margin:0}main{max-width:30rem;padding:2rem}progress{width:100%;height:.6rem}p{color:#57514a}</style></head>
-<body><main><h1>Preparing the PDF</h1><p>${brand.replace(/[<&"]/g, '')} guidelines, version ${number}, ${size.toUpperCase()} paper. This takes a few seconds the first time; after that it is ready at once.</p>
+<body><main><h1>Preparing the PDF</h1><p>${escapeHtml(brand)} guidelines, version ${Number(number)}, ${escapeHtml(size.toUpperCase())} paper. This takes a few seconds the first time; after that it is ready at once.</p>
 <progress id="bar" max="100" value="5" aria-label="Progress"></progress><p id="state" role="status">Queued…</p></main>
 <script>
 const tick = async () => {

@@ -31,7 +31,7 @@ export async function renderVersion(version: GuidelineVersion, slug: string, mod
   // The snapshot is read only here, on a cache miss: the hot path never parses it.
   const row = version.snapshot ? version : await GuidelineVersion.findByPk(version.id, { attributes: ['snapshot'] });
   const snapshot = row!.snapshot as { doc: GuidelineDoc; identity: Identity };
-  const identity = withVersionUrls(snapshot.identity, slug, version.number);
+  const identity = withVersionUrls(snapshot.identity, slug, version.number, version.files ?? {});
   const html = renderToStaticMarkup(createElement(GuidelineDocument, { doc: snapshot.doc, identity, mode }));
   const rendered = { html, outline: outline(snapshot.doc), identity, etag: `"v${version.id.slice(0, 8)}-${version.number}-${mode}-${RENDER_EPOCH}"` };
   if (cache.size >= MAX_CACHED) cache.delete(cache.keys().next().value!);

@@ -8,6 +8,7 @@ import { versionFromPass, PRINT_COOKIE } from './print-grant.server';
 import { findVersion } from './versions.server';
 import { siteCache } from './site-cache';
 import type { TtlCache } from '../http/ttl-cache';
+import { escapeHtml } from '../safe/escape';
 
 /** A cached answer, or the lookup's (cached for next time). */
 async function remembered<V>(cache: TtlCache<V>, key: string, lookup: () => Promise<V>): Promise<V> {
@@ -28,8 +29,6 @@ export interface SiteAccess {
   /** Editors see notes meant for them (e.g. a font shown in its fallback for want of a licence). */
   isEditor: boolean;
 }
-
-const escapeHtml = (text: string) => text.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 
 /** A small plain page; title and message are text (escaped here), never HTML. */
 const page = (status: number, title: string, message: string) =>

@@ -6,10 +6,12 @@ import type { Identity } from '../identity/types';
 export const versionPath = (slug: string, number: number) => `/b/${slug}/v/${number}`;
 
 /** The identity with file URLs pointing at the version's own copies; unlicensed fonts get no URL. */
-export function withVersionUrls(identity: Identity, slug: string, number: number): Identity {
+export function withVersionUrls(identity: Identity, slug: string, number: number, files: Record<string, unknown> = {}): Identity {
   const base = `${versionPath(slug, number)}/files`;
   return {
     ...identity,
+    // Shelf images the version copied are served from the version; the rest keep their download-gated address.
+    assets: identity.assets?.map((a) => (files[a.id] ? { ...a, url: `${base}/${a.id}` } : a)),
     logos: identity.logos.map((l) => {
       const url = `${base}/${l.id}`;
       return { ...l, files: { original: url, black: `${url}?variant=black`, white: `${url}?variant=white`, reversed: `${url}?variant=reversed` } };

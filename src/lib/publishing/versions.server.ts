@@ -2,14 +2,17 @@
 import { readFile } from 'node:fs/promises';
 import { QueryTypes } from 'sequelize';
 import { join } from 'node:path';
-import { Brand, BrandLogo, BrandTypeface, GuidelineDraft, GuidelineVersion, type VersionFile } from '../../../db/models';
+import { Asset, Brand, BrandLogo, BrandTypeface, GuidelineDraft, GuidelineVersion, type VersionFile } from '../../../db/models';
 import { audit } from '../audit.server';
 import type { Caller } from '../auth/access.server';
 import { sequelize } from '../db.server';
 import { ApiError } from '../http/api';
+import { withStoredAttrs } from '../guideline/blocks';
+import type { GuidelineDoc } from '../guideline/document';
 import { loadIdentity } from '../identity/identity.server';
 import type { Identity } from '../identity/types';
 import { notifyPublished } from '../notices/publish.server';
+import { isAssetRef } from '../safe/values';
 import { storage } from '../storage/index.server';
 import { newKey } from '../storage/storage';
 import { shippedFont } from '../type/shipped-fonts';
@@ -25,8 +28,19 @@ export interface VersionView {
 }
 
 /** Copy every file the identity refers to, so later edits or deletions cannot reach this version. */
-async function copyFiles(brand: Brand, identity: Identity): Promise<Record<string, VersionFile>> {
+async function copyFiles(brand: Brand, identity: Identity, doc: GuidelineDoc): Promise<Record<string, VersionFile>> {
   const files: Record<string, VersionFile> = {};
+  // Imagery shows approved images of the brand's own shelf only, copied like the logos.
+  const approvedImages = new Set((identity.assets ?? []).filter((a) => a.kind === 'image').map((a) => a.id));
+  const wanted = imageryAssetIds(doc).filter((id) => approvedImages.has(id));
+  const images = wanted.length ? await Asset.findAll({ where: { brandId: brand.id, id: wanted, state: 'approved', kind: 'image' }, attributes: ['id', 'storageKey', 'mime', 'format'] }) : [];
+  for (const image of images) {
+    const bytes = await storage.get(image.storageKey);
+    if (!bytes) continue;
+    const key = newKey(brand.id, 'version', image.format);
+    await storage.put(key, bytes, image.mime);
+    files[image.id] = { key, contentType: image.mime };
+  }
   const logos = await BrandLogo.findAll({ where: { brandId: brand.id }, attributes: ['id', 'storageKey', 'format'] });
   for (const logo of logos) {
     const bytes = await storage.get(logo.storageKey);
@@ -48,6 +62,16 @@ async function copyFiles(brand: Brand, identity: Identity): Promise<Record<strin
   return files;
 }
 
+/** Shelf asset ids the imagery blocks of a document show. */
+function imageryAssetIds(doc: GuidelineDoc): string[] {
+  const ids = new Set<string>();
+  for (const node of doc.content) {
+    if (node.type !== 'imagery') continue;
+    for (const item of (node.attrs as { items?: { src?: unknown }[] }).items ?? []) if (isAssetRef(item.src)) ids.add(item.src);
+  }
+  return [...ids];
+}
+
 const emptyDraft = () => new ApiError(409, 'empty_draft', 'There is nothing to publish yet: add at least one block to the guidelines first.');
 
 /** Publish the current draft as the next version. */
@@ -56,7 +80,7 @@ export async function publishVersion(caller: Caller, brand: Brand, note: string)
   const current = await GuidelineDraft.findByPk(brand.id, { attributes: ['doc'] });
   if (!current || current.doc.content.length === 0) throw emptyDraft();
   const identity = await loadIdentity(brand);
-  const files = await copyFiles(brand, identity);
+  const files = await copyFiles(brand, identity, current.doc as GuidelineDoc);
   let previous: GuidelineVersion | null = null;
   let version: GuidelineVersion;
   try {
@@ -72,7 +96,7 @@ export async function publishVersion(caller: Caller, brand: Brand, note: string)
           number: (previous?.number ?? 0) + 1,
           note,
           draftRevision: draft.revision,
-          snapshot: { doc: draft.doc, identity },
+          snapshot: { doc: withStoredAttrs(draft.doc as GuidelineDoc), identity },
           files,
           publishedById: caller.id,
         },

@@ -1,4 +1,5 @@
 import { rgb255, type Color } from '../color/parse';
+import { cssString } from '../safe/escape';
 import { identityTokens, type Dimension, type Token } from './model';
 import type { IdentityForTokens } from './types';
 
@@ -10,8 +11,9 @@ function cssColor({ hex, alpha }: Color): string {
   return `rgba(${rgb255(hex).join(', ')}, ${Math.round(alpha * 100) / 100})`;
 }
 
-/** A CSS font-family list; names with spaces are quoted. */
-const cssFamily = (stack: string[]) => stack.map((f) => (/\s/.test(f) && !/^['"]/.test(f) ? `'${f}'` : f)).join(', ');
+/** A CSS font-family list; names with spaces or other characters are single-quoted strings through the shared CSS escaper. */
+const cssFamily = (stack: string[]) =>
+  stack.map((f) => f.replace(/^(['"])(.*)\1$/s, '$2')).map((f) => (/^-?[A-Za-z][A-Za-z0-9-]*$/.test(f) ? f : cssString(f, "'"))).join(', ');
 
 /** A token's value as CSS text (typography as the font shorthand). */
 export function cssValue(token: Token): string {

@@ -1,5 +1,7 @@
 // One piece of a mood board as everyone sees it: an image, a swatch, a type sample or a note.
 import type { BoardItemView } from '../../../lib/moodboards/moodboards.server';
+import { cssFontFamilyList } from '../../../lib/safe/escape';
+import { cleanTypefaceFamily } from '../../../lib/safe/values';
 
 export function BoardPiece({ item, imageUrl }: { item: BoardItemView; imageUrl: string }) {
   if (item.kind === 'image') {
@@ -17,7 +19,7 @@ export function BoardPiece({ item, imageUrl }: { item: BoardItemView; imageUrl: 
   if (item.kind === 'type') {
     return (
       <div className="flex aspect-[4/3] flex-col justify-center rounded-md bg-paper px-4">
-        <p className="text-2xl leading-tight" style={{ fontFamily: `"${item.type!.family}", serif` }}>{item.type!.sample}</p>
+        <p className="text-2xl leading-tight" style={{ fontFamily: cssFontFamilyList([cleanTypefaceFamily(item.type!.family), 'serif']) }}>{item.type!.sample}</p>
         <p className="mt-2 text-xs text-ink-soft">{item.type!.family} (shown in this typeface only if your device has it)</p>
       </div>
     );

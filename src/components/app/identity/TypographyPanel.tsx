@@ -9,6 +9,7 @@ import { api } from '../../../lib/client/api';
 import { FONT_LICENCE_CAUTION } from '../../../lib/cautions';
 import { typeScaleBody } from '../../../lib/identity/schemas';
 import { TYPEFACE_ROLES, type Identity, type IdentityTypeface, type TypefaceRole } from '../../../lib/identity/types';
+import { cssFontFamilyList, cssUrl } from '../../../lib/safe/escape';
 import { SCALE_RATIOS } from '../../../lib/type/scale';
 import { SHIPPED_FONTS } from '../../../lib/type/shipped-fonts';
 import { Caution, IdentityRoot, LoadState, messageOf, Notice, uploadWithProgress, useIdentity, useRefreshIdentity } from './shared';
@@ -33,7 +34,7 @@ function useFontFace(face: IdentityTypeface | undefined): { family: string | nul
     let live = true;
     setState('loading');
     const weights = face.metrics.isVariable ? `${face.metrics.weight.min} ${face.metrics.weight.max}` : String(face.metrics.weight.default || 400);
-    const ff = new FontFace(family, `url(${face.fileUrl})`, { weight: weights });
+    const ff = new FontFace(family, cssUrl(face.fileUrl), { weight: weights });
     ff.load()
       .then((loaded) => {
         document.fonts.add(loaded);
@@ -49,7 +50,7 @@ function useFontFace(face: IdentityTypeface | undefined): { family: string | nul
 
 /** The CSS font-family for a face: the loaded preview first, then its fallback stack. */
 const stackOf = (family: string | null, face: IdentityTypeface | undefined) =>
-  [family && `"${family}"`, ...(face?.fallback ?? []).map((f) => (/\s/.test(f) && !/^["']/.test(f) ? `"${f}"` : f)), 'sans-serif'].filter(Boolean).join(', ');
+  cssFontFamilyList([family, ...(face?.fallback ?? []), 'sans-serif'].filter((f): f is string => !!f));
 
 function TypefaceCard({ brandId, face, canEdit, onNotice }: { brandId: string; face: IdentityTypeface; canEdit: boolean; onNotice: (n: NoticeState) => void }) {
   const id = useId();

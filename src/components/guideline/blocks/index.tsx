@@ -1,6 +1,6 @@
 // Block type → its published renderer; attributes always pass through the block's schema first.
 import type { ComponentType } from 'react';
-import { blockDefinition, type BlockType } from '../../../lib/guideline/blocks';
+import { blockDefinition, storedAttrs, type BlockType } from '../../../lib/guideline/blocks';
 import type { Identity } from '../../../lib/identity/types';
 import type { RenderMode } from '../parts';
 import { CalloutBlock } from './Callout';
@@ -36,7 +36,7 @@ export const BLOCK_RENDERERS: Record<Exclude<BlockType, 'sectionHeading'>, Rende
 export function BlockRenderer({ type, attrs, identity, mode, editing }: { type: string; attrs: unknown; identity: Identity; mode: RenderMode; editing?: boolean }) {
   const def = blockDefinition(type);
   const Renderer = BLOCK_RENDERERS[type as keyof typeof BLOCK_RENDERERS];
-  const parsed = def?.schema.safeParse(attrs ?? {});
+  const parsed = def?.schema.safeParse(storedAttrs(type, attrs ?? {}));
   if (!def || !Renderer || !parsed?.success) {
     return <p className="rounded-lg border border-dashed border-rule-strong px-4 py-3 text-sm text-ink-soft">This block’s settings could not be read, so it is left out.</p>;
   }

@@ -1,5 +1,6 @@
 // One place that turns a block's fields into its attribute schema, defaults and registry entry.
 import * as z from 'zod';
+import { isCleanNote, NOTE_MESSAGE } from '../../safe/values';
 import { blockIdSchema } from '../ids';
 
 export const BLOCK_GROUPS = {
@@ -49,9 +50,9 @@ export function defineBlock<T extends string, F extends z.ZodRawShape>(spec: {
   };
 }
 
-/** Plain text of bounded length (React escapes it; it is never HTML). */
+/** Plain text of bounded length, no control characters but line breaks (React escapes it; it is never HTML). */
 export const text = (max: number, fallback = '') =>
-  z.string({ error: 'Expected text.' }).max(max, { error: `At most ${max} characters.` }).default(fallback);
+  z.string({ error: 'Expected text.' }).max(max, { error: `At most ${max} characters.` }).refine(isCleanNote, NOTE_MESSAGE).default(fallback);
 
 /** A list of distinct items with a cap. */
 export function distinctList<T extends z.ZodType>(item: T, max: number, what: string) {

@@ -1,14 +1,22 @@
-// Photographs with a do or don't verdict; src is an asset id (assets arrive later) or a plain web address.
+// Photographs with a do or don't verdict. Every image comes from the brand's own asset shelf (an asset id);
+// a name that is not yet an asset ("photo-to-come-1") shows as a frame. Outside addresses are never fetched.
 import * as z from 'zod';
+import { assetRef } from '../../safe/values';
 import { refIdSchema } from '../ids';
 import { defineBlock, text } from './define';
 
 export const IMAGE_VERDICTS = ['do', 'dont'] as const;
 
-/** An image source: an asset id, an https:// address or a path on our own site. */
-export const imageSrcSchema = z.union([refIdSchema('asset'), z.string().max(2048).regex(/^(https:\/\/[^\s"'<>]+|\/[^\s"'<>/][^\s"'<>]*)$/)], {
-  error: 'An image must be an asset id, an https:// address or a path starting with "/".',
-});
+/** Looks like an address (a scheme, "//host" or a path) rather than a shelf reference. */
+export const looksLikeAddress = (value: string) => /^[a-z][a-z0-9+.-]*:|^\s*[/\\]|[/\\]/i.test(value.trim());
+
+export const OUTSIDE_IMAGE_MESSAGE = 'Images come from the brand’s asset shelf; outside addresses are not accepted. Upload the file on the Assets page and choose it here.';
+
+/** An image source: a shelf asset id, or a placeholder name for an image to come; never an address. */
+export const imageSrcSchema = z
+  .string({ error: 'Choose an image from the brand’s asset shelf.' })
+  .refine((v) => !looksLikeAddress(v), { error: OUTSIDE_IMAGE_MESSAGE, abort: true })
+  .pipe(z.union([assetRef, refIdSchema('asset')], { error: 'Choose an image from the brand’s asset shelf (an asset id).' }));
 
 export const imageItemSchema = z.strictObject({
   src: imageSrcSchema,
@@ -30,3 +38,17 @@ export const imageryBlock = defineBlock({
 });
 export const imagerySchema = imageryBlock.schema;
 export type ImageryAttrs = ReturnType<typeof imagerySchema.parse>;
+
+/** Placeholder that stands in for an outside address found in a stored draft (saved before the shelf rule). */
+export const OUTSIDE_IMAGE_PLACEHOLDER = 'outside-image-removed';
+
+/** Stored imagery attributes with every outside address replaced by the placeholder, so nothing is ever fetched. */
+export function withoutOutsideImages(attrs: unknown): unknown {
+  if (!attrs || typeof attrs !== 'object' || !Array.isArray((attrs as { items?: unknown }).items)) return attrs;
+  const items = (attrs as { items: unknown[] }).items.map((item) => {
+    if (!item || typeof item !== 'object') return item;
+    const src = (item as { src?: unknown }).src;
+    return typeof src === 'string' && imageSrcSchema.safeParse(src).success ? item : { ...item, src: OUTSIDE_IMAGE_PLACEHOLDER };
+  });
+  return { ...attrs, items };
+}

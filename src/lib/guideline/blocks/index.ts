@@ -9,7 +9,7 @@ import { misuseBlock } from './misuse';
 import { colorPaletteBlock } from './colorPalette';
 import { contrastPairsBlock } from './contrastPairs';
 import { typographyBlock } from './typography';
-import { imageryBlock } from './imagery';
+import { imageryBlock, withoutOutsideImages } from './imagery';
 import { patternBlock } from './pattern';
 import { downloadsBlock } from './downloads';
 
@@ -41,6 +41,22 @@ const byType = new Map<string, BlockDefinition>(BLOCKS.map((b) => [b.type, b as 
 /** The registry entry of a block type, or undefined for a type we do not know. */
 export function blockDefinition(type: string): BlockDefinition | undefined {
   return byType.get(type);
+}
+
+/** Stored attributes made safe to render before parsing: outside image addresses in old drafts become placeholders. */
+export function storedAttrs(type: string, attrs: unknown): unknown {
+  return type === imageryBlock.type ? withoutOutsideImages(attrs) : attrs;
+}
+
+/** A stored document with every block's attributes passed through storedAttrs (what a published version keeps). */
+export function withStoredAttrs<D extends { content: unknown[] }>(doc: D): D {
+  return {
+    ...doc,
+    content: doc.content.map((node) => {
+      const n = node as { type?: unknown; attrs?: unknown };
+      return typeof n?.type === 'string' && n.attrs !== undefined ? { ...n, attrs: storedAttrs(n.type, n.attrs) } : node;
+    }),
+  };
 }
 
 /** The registry grouped for the insert menu, in group order. */

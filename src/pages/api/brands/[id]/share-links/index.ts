@@ -1,10 +1,11 @@
 import { z } from 'zod';
+import { isOneLine, ONE_LINE_MESSAGE } from '../../../../../lib/safe/values';
 import { authorizeBrand } from '../../../../../lib/auth/access.server';
 import { endpoint, idParam, json, methodNotAllowed, readJson } from '../../../../../lib/http/api';
 import { createShareLink, listShareLinks } from '../../../../../lib/publishing/share-links.server';
 
 const createBody = z.strictObject({
-  label: z.string().trim().max(120).optional(),
+  label: z.string().trim().max(120).refine(isOneLine, ONE_LINE_MESSAGE).optional(),
   expiresAt: z.iso.datetime({ offset: true, error: 'Give the expiry as an ISO date and time, e.g. 2027-01-31T18:00:00Z.' }).optional(),
   password: z.string().min(6, 'A link password needs at least 6 characters.').max(200).optional(),
   allowDownloads: z.boolean().optional(),
