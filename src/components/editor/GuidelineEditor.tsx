@@ -153,7 +153,9 @@ export default function GuidelineEditor({ brandId, initialDoc, initialRevision, 
         'aria-label': 'Guideline document',
         'aria-multiline': 'true',
         role: 'textbox',
-        class: 'min-h-[60vh] px-2 py-4 focus:outline-none [&_p]:my-3 [&_p]:leading-relaxed [&_h2]:mt-8 [&_h2]:text-3xl [&_h2]:font-semibold [&_h3]:mt-6 [&_h3]:text-2xl [&_h3]:font-semibold [&_h4]:mt-5 [&_h4]:text-xl [&_h4]:font-semibold [&_ul]:list-disc [&_ul]:pl-6 [&_ol]:list-decimal [&_ol]:pl-6 [&_blockquote]:border-l-4 [&_blockquote]:border-rule-strong [&_blockquote]:pl-4 [&_blockquote]:italic [&_a]:underline',
+        // The published reading column's width; rich text styles itself (flow-* classes), so nothing leaks into blocks.
+        class: 'mx-auto min-h-[60vh] w-full max-w-guideline py-6 focus:outline-none',
+        'data-guideline-column': '',
       },
     },
     onCreate: ({ editor: e }) => {
@@ -178,9 +180,9 @@ export default function GuidelineEditor({ brandId, initialDoc, initialRevision, 
 
   return (
     <IdentityContext.Provider value={identity}>
-      <div className="grid gap-6 lg:grid-cols-[14rem_1fr]">
+      <div className="grid gap-6 lg:grid-cols-[14rem_minmax(0,1fr)]">
         <aside className="lg:sticky lg:top-4 lg:self-start">{editor ? <Outline editor={editor} /> : null}</aside>
-        <div>
+        <div className="min-w-0">
           <ConflictPanel state={autosave.state} onKeepMine={autosave.keepMine} onTakeTheirs={() => void takeTheirs()} />
           <div className="sticky top-0 z-10 mb-3 flex flex-wrap items-center gap-3 border-b border-rule bg-paper/95 py-2 backdrop-blur">
             <button
@@ -205,7 +207,8 @@ export default function GuidelineEditor({ brandId, initialDoc, initialRevision, 
           <p className="hint mb-2 text-xs">
             Type “/” on an empty line or press Ctrl/⌘ + Alt + B to add a block; Alt + ↑ / ↓ moves the current block.
           </p>
-          <div className="panel px-4" style={brandStyle(identity)}>
+          {/* The page in the brand's body face and text colour, as the published site sets it. */}
+          <div className="panel px-5 sm:px-8" style={{ ...brandStyle(identity), fontFamily: 'var(--brand-body-font)', color: 'var(--brand-text)' }}>
             {editor ? <EditorContent editor={editor} /> : <p className="px-2 py-8 text-ink-soft" role="status">Opening the editor…</p>}
           </div>
         </div>

@@ -12,7 +12,7 @@ function Text({ node }: { node: TextNode }) {
   if (link && link.type === 'link' && isSafeHref(link.attrs.href)) {
     const external = /^https?:/i.test(link.attrs.href);
     out = (
-      <a href={link.attrs.href} rel={external ? 'noopener noreferrer' : undefined} className="underline underline-offset-2" style={{ color: 'var(--brand-link, inherit)' }}>
+      <a href={link.attrs.href} rel={external ? 'noopener noreferrer' : undefined}>
         {out}
       </a>
     );
@@ -24,17 +24,15 @@ function Inline({ nodes }: { nodes?: InlineNode[] }) {
   return <>{(nodes ?? []).map((n, i) => (n.type === 'text' ? <Text key={i} node={n} /> : <br key={i} />))}</>;
 }
 
-const HEADING_CLASS = { 2: 'mt-10 text-3xl font-semibold', 3: 'mt-8 text-2xl font-semibold', 4: 'mt-6 text-xl font-semibold' } as const;
-
-/** One rich-text block (paragraph, heading, list or quote) and everything inside it. */
+/** One rich-text block (paragraph, heading, list or quote) and everything inside it; the flow-* classes are the editor's too. */
 export function RichBlock({ node }: { node: RichBlockNode }) {
   switch (node.type) {
     case 'paragraph':
-      return <p className="my-3 leading-relaxed"><Inline nodes={node.content} /></p>;
+      return <p className="flow-p"><Inline nodes={node.content} /></p>;
     case 'heading': {
       const Tag = `h${node.attrs.level}` as 'h2' | 'h3' | 'h4';
       return (
-        <Tag className={HEADING_CLASS[node.attrs.level]} style={{ fontFamily: 'var(--brand-heading-font)' }}>
+        <Tag className="flow-heading">
           <Inline nodes={node.content} />
         </Tag>
       );
@@ -42,21 +40,21 @@ export function RichBlock({ node }: { node: RichBlockNode }) {
     case 'bulletList':
     case 'orderedList': {
       const items = node.content.map((item, i) => (
-        <li key={i} className="my-1">
+        <li key={i} className="flow-li">
           {item.content.map((child, j) => <RichBlock key={j} node={child} />)}
         </li>
       ));
       return node.type === 'bulletList' ? (
-        <ul className="my-3 list-disc pl-6">{items}</ul>
+        <ul className="flow-ul">{items}</ul>
       ) : (
-        <ol className="my-3 list-decimal pl-6" start={node.attrs?.start && node.attrs.start !== 1 ? node.attrs.start : undefined}>
+        <ol className="flow-ol" start={node.attrs?.start && node.attrs.start !== 1 ? node.attrs.start : undefined}>
           {items}
         </ol>
       );
     }
     case 'blockquote':
       return (
-        <blockquote className="my-4 border-l-4 pl-4 italic opacity-90" style={{ borderColor: 'var(--brand-accent, var(--brand-primary, #888888))' }}>
+        <blockquote className="flow-quote">
           {node.content.map((child, j) => <RichBlock key={j} node={child} />)}
         </blockquote>
       );

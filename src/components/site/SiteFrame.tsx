@@ -1,6 +1,7 @@
 // The frame of a published guideline site as one React tree: it wears the brand (fonts, colours, logo) and
-// Plumbline recedes to the footer. Rendered to a string on the server, by the Astro layout and by the cached
-// page path alike.
+// Plumbline recedes to the footer. The chrome (header, contents, footer) sets its text in our own inks, so it
+// stays readable whatever text colour the brand chose for its pages. Rendered to a string on the server, by
+// the Astro layout and by the cached page path alike.
 import type { OutlineEntry } from '../../lib/guideline/outline';
 import { brandStyle, fontFaceCss, markLogo, primaryLogo } from '../../lib/guideline/identity';
 import type { Identity } from '../../lib/identity/types';
@@ -24,6 +25,8 @@ export interface SiteFrameProps {
 
 const FRAME_CSS = `.site-root { font-family: var(--brand-body-font); color: var(--brand-text); }
 .site-root h1, .site-root h2, .site-root h3 { font-family: var(--brand-heading-font); }
+.site-contents summary::-webkit-details-marker { display: none; }
+@media (max-width: 63.99rem) { .site-main [id] { scroll-margin-top: 3.5rem; } }
 @media print {
   .site-chrome { display: none !important; }
   .site-main { margin: 0 !important; max-width: none !important; }
@@ -31,10 +34,17 @@ const FRAME_CSS = `.site-root { font-family: var(--brand-body-font); color: var(
   * { -webkit-print-color-adjust: exact; print-color-adjust: exact; }
 }`;
 
-const COPY_SCRIPT = `document.addEventListener('click', async (e) => {
+// Copy buttons, and the phone's contents menu closing once a section is chosen (it works without this too).
+const PAGE_SCRIPT = `document.addEventListener('click', async (e) => {
+  const menu = e.target.closest && e.target.closest('details.site-contents');
+  if (menu && e.target.closest('a')) menu.open = false;
   const b = e.target.closest && e.target.closest('[data-copy]');
   if (!b) return;
   try { await navigator.clipboard.writeText(b.dataset.copy); const t = b.textContent; b.textContent = 'Copied'; setTimeout(() => (b.textContent = t), 1200); } catch { b.textContent = 'Select and copy'; }
+});
+document.addEventListener('keydown', (e) => {
+  const menu = e.key === 'Escape' && document.querySelector('details.site-contents[open]');
+  if (menu) { menu.open = false; menu.querySelector('summary').focus(); }
 });`;
 
 export function SiteFrame({ identity, slug, version, latest, outline, isEditor, viaShareLink, canDownload, title, cssHref, bodyHtml }: SiteFrameProps) {
@@ -59,7 +69,7 @@ export function SiteFrame({ identity, slug, version, latest, outline, isEditor, 
       </head>
       <body className="site-root bg-white" style={style}>
         <a href="#content" className="sr-only focus:not-sr-only focus:absolute focus:left-4 focus:top-4 focus:z-10 focus:bg-white focus:px-3 focus:py-2">Skip to content</a>
-        <header className="site-chrome border-b border-black/10">
+        <header className="site-chrome border-b border-black/10 text-ink">
           <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-4 px-6 py-4">
             <a href={base} className="flex items-center gap-3 text-inherit no-underline">
               {logo ? <img src={logo.files.original} alt={`${identity.brand.name} logo`} className="h-10 w-auto" /> : <span className="text-xl font-bold">{identity.brand.name}</span>}
@@ -85,10 +95,30 @@ export function SiteFrame({ identity, slug, version, latest, outline, isEditor, 
             </p>
           )}
         </header>
+        {outline.length > 0 && (
+          // Below the wide layout the contents fold into a bar that stays at the top: a disclosure, no script needed.
+          <nav aria-label="Contents" className="site-chrome sticky top-0 z-20 border-b border-black/10 bg-white text-ink lg:hidden">
+            <details className="site-contents group">
+              <summary className="flex cursor-pointer list-none items-center justify-between gap-3 px-6 py-3 text-sm font-semibold">
+                <span>Contents</span>
+                <span className="text-xs font-normal">
+                  <span className="group-open:hidden">{outline.length} sections</span>
+                  <span className="hidden group-open:inline">Close</span>
+                  <span aria-hidden="true" className="ml-2 inline-block transition-transform group-open:rotate-180">▾</span>
+                </span>
+              </summary>
+              <ol className="max-h-[70vh] overflow-y-auto border-t border-black/10 px-4 py-2 text-base">
+                {outline.map((e) => (
+                  <li key={e.anchor}><a href={`#${e.anchor}`} className="block rounded px-2 py-2.5 hover:bg-black/5">{e.title}</a></li>
+                ))}
+              </ol>
+            </details>
+          </nav>
+        )}
         <div className="mx-auto flex max-w-7xl gap-10 px-6">
           {outline.length > 0 && (
-            <nav aria-label="Contents" className="site-chrome sticky top-0 hidden max-h-screen w-60 shrink-0 overflow-y-auto py-10 text-sm lg:block">
-              <p className="mb-3 text-xs font-semibold uppercase tracking-widest opacity-60">Contents</p>
+            <nav aria-label="Contents" className="site-chrome sticky top-0 hidden max-h-screen w-60 shrink-0 overflow-y-auto py-10 text-sm text-ink lg:block">
+              <p className="mb-3 text-xs font-semibold uppercase tracking-widest text-ink-soft">Contents</p>
               <ol className="space-y-1.5">
                 {outline.map((e) => (
                   <li key={e.anchor}><a href={`#${e.anchor}`} className="block rounded px-2 py-1 hover:bg-black/5">{e.title}</a></li>
@@ -96,12 +126,12 @@ export function SiteFrame({ identity, slug, version, latest, outline, isEditor, 
               </ol>
             </nav>
           )}
-          <main id="content" className="site-main min-w-0 flex-1 py-10" dangerouslySetInnerHTML={{ __html: bodyHtml }} />
+          <main id="content" className="site-main min-w-0 max-w-guideline flex-1 py-10" dangerouslySetInnerHTML={{ __html: bodyHtml }} />
         </div>
-        <footer className="site-chrome mt-16 border-t border-black/10 py-6 text-center text-xs opacity-60">
+        <footer className="site-chrome mt-16 border-t border-black/10 px-6 py-6 text-center text-xs text-ink-soft">
           {identity.brand.name} brand guidelines · version {version.number}{viaShareLink ? ' · shared with you by link' : ''} · published with Plumbline
         </footer>
-        <script dangerouslySetInnerHTML={{ __html: COPY_SCRIPT }} />
+        <script dangerouslySetInnerHTML={{ __html: PAGE_SCRIPT }} />
       </body>
     </html>
   );

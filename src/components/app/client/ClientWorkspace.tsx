@@ -219,7 +219,8 @@ function Board({ brandId, board, caps, onNote }: { brandId: string; board: Board
       {board.items.length === 0 ? <p className="mt-3 text-sm text-ink-soft">This board is empty. Add images, swatches, type samples or notes below.</p> : (
         <ul className="mt-3 grid grid-cols-2 gap-4 md:grid-cols-4" aria-label={`Pieces of ${board.title}`}>
           {board.items.map((item) => (
-            <li key={item.id} className={`rounded-lg border p-2 ${item.verdict === 'drop' ? 'border-danger/40 opacity-60' : 'border-rule'}`}>
+            // A dropped piece greys its picture, not its words, so the verdict stays readable (WCAG 2.2 SC 1.4.3).
+            <li key={item.id} className={`rounded-lg border p-2 ${item.verdict === 'drop' ? 'border-dashed border-danger/40 bg-paper [&_img]:opacity-50 [&_img]:grayscale' : 'border-rule'}`}>
               <BoardPiece item={item} imageUrl={`/api/brands/${brandId}/moodboards/${board.id}/items/${item.id}/image`} />
               <div className="mt-1 flex items-center gap-2 text-xs">
                 {item.verdict && <span className={item.verdict === 'keep' ? 'font-semibold text-ok' : 'font-semibold text-danger'}>{item.verdict === 'keep' ? 'Kept' : 'Dropped'}</span>}
@@ -337,7 +338,7 @@ function Reviews({ brandId, caps }: { brandId: string; caps: ClientCaps }) {
       {threads.length === 0 ? <p className="mt-2 text-sm text-ink-soft">No comments yet. Reviewers comment on a block from the guidelines editor’s margin.</p> : (
         <ul className="mt-2 space-y-3">
           {threads.map((t) => (
-            <li key={t.id} className={`rounded-lg border border-rule p-3 ${t.resolvedAt ? 'opacity-70' : ''}`}>
+            <li key={t.id} className={`rounded-lg border border-rule p-3 ${t.resolvedAt ? 'bg-paper' : ''}`}>
               <p className="text-xs text-ink-soft">{t.blockPresent ? `On ${t.blockLabel ?? 'a block'}` : 'On a block removed since'} · {date(t.createdAt)}{t.resolvedAt ? ` · resolved by ${t.resolvedBy}` : ''}</p>
               {[t, ...(comments.data?.comments ?? []).filter((c) => c.parentId === t.id)].map((c) => (
                 <p key={c.id} className={`mt-1 text-sm ${c.parentId ? 'ml-4 border-l-2 border-rule pl-3' : ''}`}><strong>{c.author.name}</strong> {c.body}</p>

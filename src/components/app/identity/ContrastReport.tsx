@@ -40,7 +40,8 @@ function ColorLabel({ color }: { color: IdentityColor }) {
 function PairCell({ pair, fg, bg, selected, onPick }: { pair: PalettePair; fg: IdentityColor; bg: IdentityColor; selected: boolean; onPick: () => void }) {
   return (
     <td className={`min-w-[7.5rem] border border-rule p-0 align-top ${selected ? 'ring-2 ring-inset ring-plumb' : ''}`} data-fg={fg.hex} data-bg={bg.hex}>
-      <div className="flex h-12 items-center justify-center text-2xl font-semibold" style={{ background: bg.hex, color: fg.hex }} aria-hidden="true">
+      {/* The pair as it looks, failing or not: a sample beside its verdict (incidental text, WCAG 2.2 SC 1.4.3). */}
+      <div className="flex h-12 items-center justify-center text-2xl font-semibold" style={{ background: bg.hex, color: fg.hex }} aria-hidden="true" data-sample="contrast">
         Aa
       </div>
       <div className="px-2 py-2">
@@ -94,7 +95,7 @@ function PassingShade({ brandId, fg, bg, canEdit, onClose }: { brandId: string; 
         </p>
       ) : (
         <div className="mt-4 flex flex-wrap items-center gap-5">
-          <div className="flex overflow-hidden rounded-lg border border-rule-strong" aria-hidden="true">
+          <div className="flex overflow-hidden rounded-lg border border-rule-strong" aria-hidden="true" data-sample="contrast">
             <span className="flex h-16 w-28 items-center justify-center text-xl font-semibold" style={{ background: bg.hex, color: fg.hex }}>Aa</span>
             <span className="flex h-16 w-28 items-center justify-center text-xl font-semibold" style={{ background: bg.hex, color: shade.hex }}>Aa</span>
           </div>
@@ -226,7 +227,8 @@ function Report({ brandId, canEdit }: { brandId: string; canEdit: boolean }) {
       <section aria-labelledby="vision-title">
         <h3 id="vision-title" className="text-lg font-semibold">Colour-vision previews</h3>
         <p className="mt-1 text-sm text-ink-soft">{COLOR_VISION_CAUTION}</p>
-        <div className="mt-3 overflow-x-auto">
+        {/* A wide table scrolls on its own; focusable so a keyboard can scroll it too. */}
+        <div className="mt-3 overflow-x-auto" tabIndex={0} role="region" aria-label="Colour-vision previews, scrollable">
           <table className="w-full border-separate border-spacing-1 text-left text-sm" aria-label="The palette as seen with each colour-vision deficiency">
             <thead>
               <tr className="text-xs text-ink-faint">

@@ -251,12 +251,13 @@ function ColorCard({
     <li className="panel flex flex-col overflow-hidden" data-color-hex={color.hex} aria-label={color.name}>
       <div className="flex h-44 flex-col justify-between p-4" style={{ background: color.hex, color: ink }}>
         <div className="flex items-start justify-between gap-2">
-          <span className="text-xs font-semibold uppercase tracking-[0.14em] opacity-80">{color.role ? ROLE_LABEL[color.role] : '\u00a0'}</span>
-          <span className="text-xs opacity-70">{index + 1} of {count}</span>
+          {/* Full-strength ink: black or white, whichever reads better, always reaches 4.5:1 (WCAG 2.2 SC 1.4.3). */}
+          <span className="text-xs font-semibold uppercase tracking-[0.14em]">{color.role ? ROLE_LABEL[color.role] : '\u00a0'}</span>
+          <span className="text-xs">{index + 1} of {count}</span>
         </div>
         <div>
           <h3 className="text-2xl font-bold leading-tight">{color.name}</h3>
-          <p className="font-mono text-sm opacity-90">{color.hex}</p>
+          <p className="font-mono text-sm">{color.hex}</p>
         </div>
       </div>
       <dl className="divide-y divide-rule text-sm">
@@ -266,8 +267,10 @@ function ColorCard({
               {row.label}
               {row.print && <sup><a href={`#${printNoteId}`} className="ml-0.5 text-warn" aria-label="about print values">*</a></sup>}
             </dt>
-            <dd className="min-w-0 flex-1 truncate font-mono text-[0.8rem] text-ink" title={row.value}>{row.value}</dd>
-            <CopyButton value={row.value} label={`${row.label} of ${color.name}`} />
+            <dd className="flex min-w-0 flex-1 items-center gap-3">
+              <span className="min-w-0 flex-1 truncate font-mono text-[0.8rem] text-ink" title={row.value}>{row.value}</span>
+              <CopyButton value={row.value} label={`${row.label} of ${color.name}`} />
+            </dd>
           </div>
         ))}
       </dl>

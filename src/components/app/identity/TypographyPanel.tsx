@@ -330,7 +330,7 @@ function ScalePreview({ identity }: { identity: Identity }) {
         ) : (
           <p className="mt-1 text-sm text-ink-soft">Add a body typeface to see how many characters fit on a line at this column width.</p>
         )}
-        <div className="mt-4 overflow-x-auto">
+        <div className="mt-4 overflow-x-auto" tabIndex={0} role="region" aria-label="Running text at the column width, scrollable">
           <p
             className="border-x border-dashed border-rule-strong text-ink"
             style={{ width: `${scale.columnPx}px`, maxWidth: 'none', fontFamily: stackOf(b.family, body), fontSize: `${scale.basePx}px`, lineHeight: scale.bodyLineHeight }}

@@ -137,5 +137,11 @@ export function LoadState({ query, what }: { query: { isPending: boolean; isErro
   return null;
 }
 
-/** Text colour (near-black or white) that reads best on a given background, for labels laid over swatches. */
-export const inkOn = (hex: string): string => (contrastRatio('#ffffff', hex) >= contrastRatio('#1a1714', hex) ? '#ffffff' : '#1a1714');
+/** Text colour (near-black or white) that reads best on a given background, for labels laid over swatches; pure
+ *  black where neither reaches 4.5:1 (WCAG 2.2 SC 1.4.3): black or white always does, the warm near-black not quite. */
+export function inkOn(hex: string): string {
+  const white = contrastRatio('#ffffff', hex);
+  const best = white >= contrastRatio('#1a1714', hex) ? '#ffffff' : '#1a1714';
+  if (contrastRatio(best, hex) >= 4.5) return best;
+  return white >= contrastRatio('#000000', hex) ? '#ffffff' : '#000000';
+}

@@ -37,9 +37,10 @@ export function BlockFrame({ props, settings, preview, startOpen }: { props: Rea
       as="div"
       data-block-frame={node.type.name}
       id={typeof node.attrs.id === 'string' ? `block-${node.attrs.id}` : undefined}
-      className={`my-4 rounded-xl border bg-card ${selected ? 'border-plumb ring-2 ring-plumb/25' : 'border-rule'}`}
+      // Border and padding sit outside the column (-17px = 1px border + 16px padding), so the block renders at the published width.
+      className={`-mx-[17px] my-4 rounded-xl border bg-card ${selected ? 'border-plumb ring-2 ring-plumb/25' : 'border-rule'}`}
     >
-      <div contentEditable={false} className="flex items-center gap-2 border-b border-rule px-2 py-1" role="toolbar" aria-label={`${label} block`}>
+      <div contentEditable={false} className="flex items-center gap-2 border-b border-rule px-2 py-1 font-sans text-ink" role="toolbar" aria-label={`${label} block`}>
         <span data-drag-handle draggable="true" className="cursor-grab select-none px-1 text-ink-faint" title="Drag to reorder" aria-hidden="true">
           ⠿
         </span>
@@ -56,11 +57,11 @@ export function BlockFrame({ props, settings, preview, startOpen }: { props: Rea
           <ToolButton label={`Remove ${label}`} onClick={() => deleteBlock(editor, index())} danger>✕</ToolButton>
         </div>
       </div>
-      <div contentEditable={false} className="p-4">
+      <div contentEditable={false} className="p-4" data-block-preview>
         {preview ?? <BlockRenderer type={node.type.name} attrs={node.attrs} identity={identity} mode="site" editing />}
       </div>
       {open && settings ? (
-        <div id={panelId} contentEditable={false} className="grid gap-4 border-t border-rule bg-paper/60 p-4" role="group" aria-label={`${label} settings`}>
+        <div id={panelId} contentEditable={false} className="grid gap-4 border-t border-rule bg-paper/60 p-4 font-sans text-ink" role="group" aria-label={`${label} settings`}>
           {settings}
         </div>
       ) : null}

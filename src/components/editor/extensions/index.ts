@@ -14,7 +14,13 @@ export function guidelineExtensions(options: { openInsertMenu?: () => void } = {
     GuidelineDocNode,
     StarterKit.configure({
       document: false,
-      heading: { levels: [2, 3, 4] },
+      // Rich text wears the published page's flow-* classes (global.css), so it reads in the editor as it will publish.
+      paragraph: { HTMLAttributes: { class: 'flow-p' } },
+      heading: { levels: [2, 3, 4], HTMLAttributes: { class: 'flow-heading' } },
+      bulletList: { HTMLAttributes: { class: 'flow-ul' } },
+      orderedList: { HTMLAttributes: { class: 'flow-ol' } },
+      listItem: { HTMLAttributes: { class: 'flow-li' } },
+      blockquote: { HTMLAttributes: { class: 'flow-quote' } },
       code: false,
       codeBlock: false,
       strike: false,

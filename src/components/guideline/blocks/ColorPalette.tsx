@@ -11,12 +11,13 @@ export const formatRgb = ([r, g, b]: readonly number[]) => `rgb(${r} ${g} ${b})`
 
 function Row({ label, value, mode, hint }: { label: string; value: string; mode: RenderMode; hint?: string }) {
   return (
-    <div className="flex items-baseline justify-between gap-2 border-t border-black/10 py-1.5 first:border-0">
+    // A value that does not fit beside its label moves to a line of its own rather than breaking inside.
+    <div className="flex flex-wrap items-baseline justify-between gap-x-2 border-t border-black/10 py-1.5 first:border-0">
       <dt className="text-xs font-semibold uppercase tracking-wider opacity-70">
         {label}
         {hint ? <span className="ml-1 font-normal normal-case tracking-normal">({hint})</span> : null}
       </dt>
-      <dd className="flex items-baseline gap-1 font-mono text-sm">
+      <dd className="ml-auto flex items-baseline gap-1 font-mono text-sm">
         <span data-value={label}>{value}</span>
         <CopyButton value={value} label={label} mode={mode} />
       </dd>

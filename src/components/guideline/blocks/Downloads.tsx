@@ -19,7 +19,12 @@ export function DownloadsBlock({ attrs, identity, editing }: BlockRenderProps<Do
               <li key={id} className="flex items-center justify-between gap-4 py-2 text-sm" data-asset-id={id}>
                 {asset ? <span className="font-semibold">{asset.name}</span> : <span className="opacity-70">A file that is no longer approved</span>}
                 {asset && <span className="opacity-70">{asset.format.toUpperCase()}</span>}
-                {href && !editing && <a className="font-semibold underline" href={href}>Download</a>}
+                {href && !editing && (
+                  // download=1 asks for an attachment, so a phone saves the file instead of opening it in a tab.
+                  <a className="font-semibold underline" href={`${href}${href.includes('?') ? '&' : '?'}download=1`} download>
+                    Download<span className="sr-only"> {asset!.name}</span>
+                  </a>
+                )}
               </li>
             );
           })}

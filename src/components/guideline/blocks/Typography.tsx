@@ -50,13 +50,14 @@ export function TypographyBlock({ attrs, identity, mode, editing }: BlockRenderP
         </ul>
       ) : null}
       {attrs.showScale && scale.steps.length > 0 ? (
-        <div className="overflow-x-auto rounded-xl border border-black/10 bg-white text-[#1f1f1f]">
-          <table className="w-full text-left text-sm">
-            <caption className="px-4 pt-4 text-left text-sm">
+        // A table where it has room; in a column narrower than ~600 px each step folds into a card of two lines.
+        <div className="@container overflow-hidden rounded-xl border border-black/10 bg-white text-[#1f1f1f]">
+          <table className="w-full text-left text-sm @max-[37.5rem]:block">
+            <caption className="px-4 pt-4 text-left text-sm @max-[37.5rem]:block">
               Type scale: {num(scale.basePx)} px base, ratio {num(scale.ratio, 3)} ({scale.ratioName.replace(/-/g, ' ')})
               {scale.measure ? `; running text sets about ${Math.round(scale.measure.charsPerLine)} characters per line at ${scale.columnPx} px` : ''}.
             </caption>
-            <thead className="border-b border-black/10 text-xs uppercase tracking-wider opacity-70">
+            <thead className={`border-b border-black/10 text-xs uppercase tracking-wider text-[#595959] ${mode === 'print' ? '' : '@max-[37.5rem]:sr-only'}`}>
               {mode === 'print' ? (
                 <tr>
                   <th scope="col" className="w-[32%] px-4 py-2">Style, size, line height</th>
@@ -71,7 +72,7 @@ export function TypographyBlock({ attrs, identity, mode, editing }: BlockRenderP
                 </tr>
               )}
             </thead>
-            <tbody>
+            <tbody className="@max-[37.5rem]:mt-3 @max-[37.5rem]:block @max-[37.5rem]:border-t @max-[37.5rem]:border-black/10">
               {[...scale.steps].sort((a, b) => b.step - a.step).map((step) => {
                 const face = typefaceForRole(identity, step.role);
                 const size = `${num(step.px)} px · ${num(step.rem, 3)} rem · ${num(step.pt)} pt`;
@@ -81,7 +82,7 @@ export function TypographyBlock({ attrs, identity, mode, editing }: BlockRenderP
                   </td>
                 );
                 // On paper the sample gets the measure's width at its true size and wraps; it is never clipped.
-                return mode === 'print' ? (
+                if (mode === 'print') return (
                   <tr key={step.step} className="border-b border-black/5 align-baseline last:border-0" data-step={step.step}>
                     <th scope="row" className="px-4 py-3 font-semibold">
                       {step.name}
@@ -90,12 +91,21 @@ export function TypographyBlock({ attrs, identity, mode, editing }: BlockRenderP
                     </th>
                     {sample}
                   </tr>
-                ) : (
-                  <tr key={step.step} className="border-b border-black/5 align-baseline last:border-0" data-step={step.step}>
-                    <th scope="row" className="whitespace-nowrap px-4 py-3 font-semibold">{step.name}</th>
-                    <td className="whitespace-nowrap px-4 py-3 font-mono text-xs">{size}</td>
-                    <td className="px-4 py-3 font-mono text-xs">{num(step.lineHeight)}</td>
-                    {sample}
+                );
+                return (
+                  <tr key={step.step} className="border-b border-black/5 align-baseline last:border-0 @max-[37.5rem]:flex @max-[37.5rem]:flex-wrap @max-[37.5rem]:items-baseline @max-[37.5rem]:gap-x-3 @max-[37.5rem]:px-4 @max-[37.5rem]:py-3" data-step={step.step}>
+                    <th scope="row" className="whitespace-nowrap px-4 py-3 font-semibold @max-[37.5rem]:p-0">{step.name}</th>
+                    <td className="whitespace-nowrap px-4 py-3 font-mono text-xs @max-[37.5rem]:p-0">
+                      {num(step.px)} px · {num(step.rem, 3)} rem · {num(step.pt)} pt
+                    </td>
+                    <td className="whitespace-nowrap px-4 py-3 font-mono text-xs @max-[37.5rem]:p-0">
+                      <span aria-hidden="true" className="hidden font-sans @max-[37.5rem]:inline">line height </span>
+                      {num(step.lineHeight)}
+                    </td>
+                    {/* One line per step, cut at the column's edge, as a specimen sheet sets it. */}
+                    <td className="w-full max-w-0 overflow-hidden whitespace-nowrap px-4 py-3 @max-[37.5rem]:max-w-full @max-[37.5rem]:px-0 @max-[37.5rem]:pb-0 @max-[37.5rem]:pt-1" data-scale-sample style={{ fontFamily: fontStack(face), fontSize: `${step.px}px`, lineHeight: step.lineHeight }}>
+                      {attrs.specimenText.split(' ').slice(0, 4).join(' ')}
+                    </td>
                   </tr>
                 );
               })}

@@ -9,8 +9,8 @@ export function SectionHeadingView(props: ReactNodeViewProps) {
   const preview = (
     <div className="grid gap-2">
       <input aria-label="Section label above the title (optional)" placeholder="Label above the title (optional)" className="w-full bg-transparent text-xs font-semibold uppercase tracking-[0.16em] text-ink-faint outline-none focus-visible:ring-2 focus-visible:ring-plumb/30" value={a.eyebrow} maxLength={80} onChange={(e) => set({ eyebrow: e.target.value })} />
-      <input aria-label="Section title" placeholder="Section title" className="w-full bg-transparent text-3xl font-semibold text-ink outline-none focus-visible:ring-2 focus-visible:ring-plumb/30" style={{ fontFamily: 'var(--brand-heading-font)' }} value={a.title} maxLength={200} onChange={(e) => set({ title: e.target.value })} />
-      <textarea aria-label="Section introduction (optional)" placeholder="A sentence or two that opens the section (optional)" rows={2} className="w-full resize-y bg-transparent text-base text-ink-soft outline-none focus-visible:ring-2 focus-visible:ring-plumb/30" value={a.intro} maxLength={1000} onChange={(e) => set({ intro: e.target.value })} />
+      <input aria-label="Section title" placeholder="Section title" className="w-full bg-transparent text-4xl font-semibold leading-tight outline-none focus-visible:ring-2 focus-visible:ring-plumb/30" style={{ fontFamily: 'var(--brand-heading-font)' }} value={a.title} maxLength={200} onChange={(e) => set({ title: e.target.value })} />
+      <textarea aria-label="Section introduction (optional)" placeholder="A sentence or two that opens the section (optional)" rows={2} className="w-full resize-y bg-transparent text-lg leading-relaxed outline-none focus-visible:ring-2 focus-visible:ring-plumb/30" value={a.intro} maxLength={1000} onChange={(e) => set({ intro: e.target.value })} />
     </div>
   );
   return <BlockFrame props={props} preview={preview} settings={null} />;
