@@ -35,6 +35,10 @@ export default defineConfig({
       FILES_DIR: envField.string({ context: 'server', access: 'secret', default: '.data/files' }),
       CHROMIUM_PATH: envField.string({ context: 'server', access: 'secret', default: '/usr/bin/chromium' }),
       AUTH_SIGN_IN_LIMIT: envField.number({ context: 'server', access: 'secret', default: 5 }),
+      // Renditions (src/lib/assets): custom renditions kept per asset beyond the standard set, and new (uncached)
+      // custom renditions one caller may have drawn per minute. The pixel caps are constants in kinds.ts.
+      RENDITION_CUSTOM_LIMIT: envField.number({ context: 'server', access: 'secret', default: 40 }),
+      RENDITION_RATE_LIMIT: envField.number({ context: 'server', access: 'secret', default: 30 }),
       // E-mail (src/lib/mail): an SMTP relay; without SMTP_HOST nothing is sent. MAIL_CAPTURE_DIR is set only
       // when the local fake server keeps the messages, and turns on the sent-mail page.
       SMTP_HOST: envField.string({ context: 'server', access: 'secret', optional: true }),
