@@ -428,7 +428,14 @@ export async function bundle(reader: AssetReader, request: { assetIds?: string[]
     for (const item of BUNDLE_LOGO_FILES) {
       if (item.svgOnly && asset.format !== 'svg') continue;
       const params = renditionParams(asset, item.query);
-      const made = await renditionOf(asset, params);
+      let made: Rendition;
+      try {
+        made = await renditionOf(asset, params);
+      } catch (err) {
+        // Over a pixel cap (a very tall or wide logo): the bundle goes without that file; the original is in it.
+        if (err instanceof ApiError && err.status === 422) continue;
+        throw err;
+      }
       plan.push({ path: `${folder}/${item.folder}/${renditionFilename(brand.slug, asset.name, params, asset.format)}`, source: async () => made.body, size: made.body.length, asset });
     }
   }
