@@ -1,7 +1,7 @@
 // Brands and their people: creation, renaming, deletion, members and pending invitations.
 import { createHash, randomBytes } from 'node:crypto';
 import { Op, QueryTypes, type Transaction } from 'sequelize';
-import { Brand, BrandLogo, BrandMember, BrandTypeface, Invitation, Studio, StudioMember } from '../../../db/models';
+import { Brand, BrandMember, Invitation, Studio, StudioMember } from '../../../db/models';
 import { siteCache } from '../publishing/site-cache';
 import { storage } from '../storage/index.server';
 import { audit } from '../audit.server';
@@ -75,18 +75,15 @@ export async function updateBrand(caller: Caller, brand: Brand, changes: { name?
   });
 }
 
-/** Delete a brand and everything it holds; the audit rows stay, with the brand reference cleared. */
+/** Delete a brand and everything it holds, its stored files too; the audit rows stay, with the brand reference cleared. */
 export async function deleteBrand(caller: Caller, brand: Brand): Promise<void> {
-  const files = [
-    ...(await BrandLogo.findAll({ where: { brandId: brand.id }, attributes: ['storageKey'] })).map((l) => l.storageKey),
-    ...(await BrandTypeface.findAll({ where: { brandId: brand.id }, attributes: ['storageKey'] })).map((f) => f.storageKey),
-  ].filter((k): k is string => !!k);
   await sequelize.transaction(async (t) => {
     await audit({ actorId: caller.id, action: 'brand.delete', targetType: 'brand', targetId: brand.id, studioId: brand.studioId, details: { name: brand.name, slug: brand.slug } }, t);
     await brand.destroy({ transaction: t });
   });
   siteCache.forget();
-  await Promise.all(files.map((key) => storage.delete(key)));
+  // Every key of a brand lives under its id (newKey, renditionKey): originals, renditions, version copies, PDFs, boards.
+  await storage.deleteBrandFiles(brand.id);
 }
 
 export interface MemberView {

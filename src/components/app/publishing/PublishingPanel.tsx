@@ -71,10 +71,20 @@ function Publish({ brandId, canPublish, latest }: { brandId: string; canPublish:
   );
 }
 
-function Versions({ slug, versions }: { slug: string; versions: Version[] }) {
+/** The server cannot print PDFs (e.g. no browser installed): said once, above the PDF links. */
+function PdfProblem({ message }: { message: string }) {
+  return (
+    <p role="alert" className="mb-4 rounded-md bg-danger-wash px-3 py-2 text-sm text-danger" data-testid="pdf-problem">
+      {message}
+    </p>
+  );
+}
+
+function Versions({ slug, versions, pdfProblem }: { slug: string; versions: Version[]; pdfProblem: string | null }) {
   if (versions.length === 0) return <Card title="Versions" id="versions-title"><p className="text-ink-soft">No versions yet. Publish the draft to make the first one.</p></Card>;
   return (
     <Card title="Versions" id="versions-title">
+      {pdfProblem && <PdfProblem message={pdfProblem} />}
       <ol className="divide-y divide-rule">
         {versions.map((v, i) => (
           <li key={v.number} className="flex flex-wrap items-baseline gap-x-4 gap-y-1 py-3">
@@ -180,7 +190,16 @@ function ShareLinks({ brandId, versions }: { brandId: string; versions: Version[
   );
 }
 
-function Panel({ brandId, slug, canPublish, canShare }: { brandId: string; slug: string; canPublish: boolean; canShare: boolean }) {
+interface PanelProps {
+  brandId: string;
+  slug: string;
+  canPublish: boolean;
+  canShare: boolean;
+  /** Why the server cannot print PDFs right now, or null. */
+  pdfProblem?: string | null;
+}
+
+function Panel({ brandId, slug, canPublish, canShare, pdfProblem = null }: PanelProps) {
   const versions = useQuery({ queryKey: ['versions', brandId], queryFn: () => api<{ versions: Version[] }>(`/api/brands/${brandId}/versions`).then((r) => r.versions) });
   if (versions.isPending) return <p className="panel px-6 py-8 text-ink-soft" role="status">Loading versions…</p>;
   if (versions.isError) return <p className="panel px-6 py-8 text-danger" role="alert">{versions.error.message}</p>;
@@ -188,14 +207,14 @@ function Panel({ brandId, slug, canPublish, canShare }: { brandId: string; slug:
     <div className="grid gap-8 lg:grid-cols-2">
       <div className="space-y-8">
         {canPublish && <Publish brandId={brandId} canPublish={canPublish} latest={versions.data[0]?.number ?? null} />}
-        <Versions slug={slug} versions={versions.data} />
+        <Versions slug={slug} versions={versions.data} pdfProblem={pdfProblem} />
       </div>
       {canShare && <ShareLinks brandId={brandId} versions={versions.data} />}
     </div>
   );
 }
 
-export default function PublishingPanel(props: { brandId: string; slug: string; canPublish: boolean; canShare: boolean }) {
+export default function PublishingPanel(props: PanelProps) {
   return (
     <QueryRoot>
       <Panel {...props} />
