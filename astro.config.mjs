@@ -38,6 +38,10 @@ export default defineConfig({
       AUTH_SIGN_IN_LIMIT: envField.number({ context: 'server', access: 'secret', default: 5 }),
       // Proxies whose X-Forwarded-For is believed (comma-separated IPs or CIDRs); empty: only the socket counts.
       TRUSTED_PROXIES: envField.string({ context: 'server', access: 'secret', default: '' }),
+      // Renditions (src/lib/assets): custom renditions kept per asset beyond the standard set, and new (uncached)
+      // custom renditions one caller may have drawn per minute. The pixel caps are constants in kinds.ts.
+      RENDITION_CUSTOM_LIMIT: envField.number({ context: 'server', access: 'secret', default: 40 }),
+      RENDITION_RATE_LIMIT: envField.number({ context: 'server', access: 'secret', default: 30 }),
       // E-mail (src/lib/mail): an SMTP relay; without SMTP_HOST nothing is sent. MAIL_CAPTURE_DIR is set only
       // when the local fake server keeps the messages, and turns on the sent-mail page.
       SMTP_HOST: envField.string({ context: 'server', access: 'secret', optional: true }),

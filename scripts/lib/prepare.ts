@@ -46,6 +46,8 @@ export interface ServerEnv {
   filesDir?: string;
   /** E-mail: the SMTP relay and, when the local fake keeps the messages, its folder (src/lib/mail). */
   mail?: { smtpHost: string; smtpPort: number; from?: string; captureDir?: string };
+  /** Further settings from the astro:env schema by name (e.g. RENDITION_RATE_LIMIT for a test with small limits). */
+  settings?: Record<string, string>;
 }
 
 /** Start the built server (scripts/serve.mjs over outDir()) and resolve once it answers HTTP. */
@@ -76,6 +78,7 @@ export async function startServer(env: ServerEnv, opts: { quiet?: boolean } = {}
             ...(env.mail.captureDir ? { MAIL_CAPTURE_DIR: env.mail.captureDir } : {}),
           }
         : {}),
+      ...env.settings,
     },
   });
   const url = `http://${env.host}:${env.port}/`;

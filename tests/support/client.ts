@@ -15,16 +15,23 @@ export interface Reply<T = any> {
 export class Client {
   private cookies = new Map<string, string>();
 
+  /** `base`: another server than the suite's (a test that starts its own with other settings). */
+  constructor(private readonly base?: string) {}
+
+  private get root(): string {
+    return this.base ?? baseUrl();
+  }
+
   /** Send a request; `body` as an object is JSON, as a string is sent raw. */
   async request<T = any>(method: string, path: string, body?: unknown, headers: Record<string, string> = {}): Promise<Reply<T>> {
-    const h: Record<string, string> = { origin: baseUrl(), ...headers };
+    const h: Record<string, string> = { origin: this.root, ...headers };
     if (this.cookies.size) h.cookie = [...this.cookies].map(([k, v]) => `${k}=${v}`).join('; ');
     let payload: string | undefined;
     if (body !== undefined) {
       payload = typeof body === 'string' ? body : JSON.stringify(body);
       h['content-type'] ??= 'application/json';
     }
-    const res = await fetch(baseUrl() + path, { method, headers: h, body: payload, redirect: 'manual' });
+    const res = await fetch(this.root + path, { method, headers: h, body: payload, redirect: 'manual' });
     for (const c of res.headers.getSetCookie()) {
       const [pair] = c.split(';');
       const i = pair.indexOf('=');
@@ -48,9 +55,9 @@ export class Client {
     const form = new FormData();
     form.set('file', new Blob([typeof content === 'string' ? content : new Uint8Array(content)], { type }), filename);
     for (const [k, v] of Object.entries(fields)) form.set(k, v);
-    const h: Record<string, string> = { origin: baseUrl() };
+    const h: Record<string, string> = { origin: this.root };
     if (this.cookies.size) h.cookie = [...this.cookies].map(([k, v]) => `${k}=${v}`).join('; ');
-    const res = await fetch(baseUrl() + path, { method: 'POST', headers: h, body: form });
+    const res = await fetch(this.root + path, { method: 'POST', headers: h, body: form });
     const text = await res.text();
     let parsed: unknown = text;
     try {

@@ -1,5 +1,6 @@
 // The asset shelf: uploads that leave nothing behind when refused, states, renditions on request, bundles and the download log.
 import { createHash } from 'node:crypto';
+import { RENDITION_CUSTOM_LIMIT, RENDITION_RATE_LIMIT } from 'astro:env/server';
 import { Readable } from 'node:stream';
 import { ZipArchive } from 'archiver';
 import { Op, QueryTypes, UniqueConstraintError, type WhereOptions } from 'sequelize';
@@ -11,13 +12,15 @@ import { sequelize } from '../db.server';
 import { ApiError, notFound } from '../http/api';
 import { loadIdentity } from '../identity/identity.server';
 import { cleanName } from '../safe/values';
+import { LogoError } from '../logo/errors';
+import { consumeAttempt } from '../publishing/rate-limit.server';
 import { newKey } from '../storage/storage';
 import { storage } from '../storage/index.server';
 import type { AssetReader } from './access.server';
 import { inspectUpload, UploadRejection } from './inspect.server';
-import { canMoveState, FORMAT_INFO, PREVIEW_MAX_WIDTH, renditionFilename, type AssetKind, type AssetState, type RenditionParams, type RenditionQuery } from './kinds';
-import { cachedRendition, type Rendition } from './render.server';
-import { RenditionError, resolveRendition } from './renditions';
+import { canMoveState, FORMAT_INFO, PREVIEW_MAX_WIDTH, renditionFilename, STANDARD_RENDITIONS, type AssetKind, type AssetState, type RenditionParams, type RenditionQuery } from './kinds';
+import { cachedRendition, renditionKey, type Rendition } from './render.server';
+import { checkRenditionSize, RenditionError, resolveRendition } from './renditions';
 import { usageNote } from './usage';
 
 export interface AssetView {
@@ -227,8 +230,76 @@ export function renditionParams(asset: Asset, query: RenditionQuery): RenditionP
   try {
     return resolveRendition(query, asset);
   } catch (err) {
-    if (err instanceof RenditionError) throw new ApiError(400, err.code, err.message);
+    if (err instanceof RenditionError) throw new ApiError(err.status, err.code, err.message);
     throw err;
+  }
+}
+
+// ---------------------------------------------------------------- limits on what a caller can make us draw
+
+/** Window of the per-caller rate of new custom renditions. */
+const RENDITION_RATE_WINDOW_SECONDS = 60;
+
+/**
+ * Who asks for a rendition, for the per-caller rate: the member's id, or for a share-link holder the link together with
+ * the connection's address (one leaked link cannot be used from many places to spend one budget, nor one place to spend many).
+ */
+export function renditionRequester(reader: AssetReader, address: string): string {
+  return reader.caller ? `user:${reader.caller.id}` : `link:${reader.shareLinkId}:${address}`;
+}
+
+/** Renditions Plumbline itself links to (shelf, previews, downloads page, bundles): a fixed number per asset, so never capped. */
+function offeredQueries(): RenditionQuery[] {
+  return [
+    ...STANDARD_RENDITIONS.map((r) => r.query),
+    ...BUNDLE_LOGO_FILES.map((f) => f.query),
+    { format: 'png', width: PREVIEW_MAX_WIDTH },
+    { format: 'png', width: PREVIEW_MAX_WIDTH, variant: 'white' },
+    { format: 'png', width: 1024 },
+    { format: 'svg', variant: 'white' },
+    { preset: 'print' },
+  ];
+}
+
+/** The cache keys of the offered renditions that make sense for this asset. */
+function offeredKeys(asset: Asset): string[] {
+  const keys = new Set<string>();
+  for (const query of offeredQueries()) {
+    try {
+      keys.add(renditionKey(asset, resolveRendition(query, asset)).paramsKey);
+    } catch {
+      // Not offered for this kind of asset (e.g. a variant of a photo).
+    }
+  }
+  return [...keys];
+}
+
+/**
+ * Admits drawing a new (uncached) rendition: offered ones always; a custom one only while the asset has fewer than
+ * RENDITION_CUSTOM_LIMIT custom renditions (422) and the requester has drawn fewer than RENDITION_RATE_LIMIT in the
+ * last minute (429). Concurrent requests can pass the count together: the cap holds within the requests in flight.
+ */
+async function admitNewRendition(asset: Asset, paramsKey: string, requester: string | null): Promise<void> {
+  const offered = offeredKeys(asset);
+  if (offered.includes(paramsKey)) return;
+  // At most the offered set plus the cap: a small read.
+  const kept = await AssetRendition.findAll({ where: { assetId: asset.id }, attributes: ['paramsKey'] });
+  const count = kept.filter((r) => !offered.includes(r.paramsKey)).length;
+  if (count >= RENDITION_CUSTOM_LIMIT) {
+    throw new ApiError(
+      422,
+      'rendition_limit',
+      `“${asset.name}” already has ${count} custom renditions, the most Plumbline keeps for one asset (besides the standard set). Choose one of the standard files, a size made before, or download the original.`,
+      { limit: RENDITION_CUSTOM_LIMIT },
+    );
+  }
+  if (requester && !(await consumeAttempt(`rendition:${requester}`, RENDITION_RATE_LIMIT, RENDITION_RATE_WINDOW_SECONDS))) {
+    throw new ApiError(
+      429,
+      'rate_limited',
+      `You asked for more than ${RENDITION_RATE_LIMIT} new renditions in a minute. Files made before are still served at once; try a new size again in a minute.`,
+      { limit: RENDITION_RATE_LIMIT, windowSeconds: RENDITION_RATE_WINDOW_SECONDS },
+    );
   }
 }
 
@@ -238,19 +309,33 @@ async function originalBytes(asset: Asset): Promise<Buffer> {
   return bytes;
 }
 
-/** The rendition from the cache, or drawn now and remembered. */
-export async function renditionOf(asset: Asset, params: RenditionParams): Promise<Rendition> {
-  return cachedRendition(
-    storage,
-    { id: asset.id, brandId: asset.brandId, format: asset.format, drawnBounds: asset.drawnBounds, bytes: () => originalBytes(asset) },
-    params,
-    async (entry) => {
-      await AssetRendition.bulkCreate(
-        [{ assetId: asset.id, paramsKey: entry.paramsKey, storageKey: entry.key, contentType: entry.mime, byteSize: entry.size }],
-        { ignoreDuplicates: true },
-      );
-    },
-  );
+/**
+ * The rendition from the cache (free), or drawn now and remembered when it is within the pixel caps and admitted
+ * (see admitNewRendition; `requester` null for Plumbline's own work such as bundles, which asks only offered files).
+ */
+export async function renditionOf(asset: Asset, params: RenditionParams, requester: string | null = null): Promise<Rendition> {
+  try {
+    if (asset.width && asset.height) checkRenditionSize(params, { format: asset.format, width: asset.width, height: asset.height });
+    return await cachedRendition(
+      storage,
+      { id: asset.id, brandId: asset.brandId, format: asset.format, drawnBounds: asset.drawnBounds, bytes: () => originalBytes(asset) },
+      params,
+      {
+        beforeDraw: ({ paramsKey }) => admitNewRendition(asset, paramsKey, requester),
+        onStored: async (entry) => {
+          await AssetRendition.bulkCreate(
+            [{ assetId: asset.id, paramsKey: entry.paramsKey, storageKey: entry.key, contentType: entry.mime, byteSize: entry.size }],
+            { ignoreDuplicates: true },
+          );
+        },
+      },
+    );
+  } catch (err) {
+    if (err instanceof RenditionError) throw new ApiError(err.status, err.code, err.message);
+    // A stored SVG that today's upload checks refuse (e.g. an embedded image over the pixel cap) is not drawn.
+    if (err instanceof LogoError) throw new ApiError(422, err.code, err.message);
+    throw err;
+  }
 }
 
 const logRow = (reader: AssetReader, kind: 'file' | 'bundle', assetId: string | null, details: Record<string, unknown>) => ({
@@ -263,13 +348,13 @@ const logRow = (reader: AssetReader, kind: 'file' | 'bundle', assetId: string | 
 });
 
 /** One file download: the rendition asked for, its name, and a row in the download log. */
-export async function downloadFile(reader: AssetReader, asset: Asset, query: RenditionQuery): Promise<{ rendition: Rendition; filename: string; params: RenditionParams }> {
+export async function downloadFile(reader: AssetReader, asset: Asset, query: RenditionQuery, requester: string): Promise<{ rendition: Rendition; filename: string; params: RenditionParams }> {
   const { preview, ...wanted } = query;
   const params = renditionParams(asset, wanted);
   if (preview && (params.format !== 'png' || !params.width || params.width > PREVIEW_MAX_WIDTH || params.square)) {
     throw new ApiError(400, 'invalid_input', `A preview is a PNG at most ${PREVIEW_MAX_WIDTH} px wide; download anything else without preview=1.`);
   }
-  const rendition = await renditionOf(asset, params);
+  const rendition = await renditionOf(asset, params, requester);
   const filename = renditionFilename(reader.brand.slug, asset.name, params, asset.format);
   if (preview) return { rendition, filename, params };
   await AssetDownload.create(
@@ -344,7 +429,14 @@ export async function bundle(reader: AssetReader, request: { assetIds?: string[]
     for (const item of BUNDLE_LOGO_FILES) {
       if (item.svgOnly && asset.format !== 'svg') continue;
       const params = renditionParams(asset, item.query);
-      const made = await renditionOf(asset, params);
+      let made: Rendition;
+      try {
+        made = await renditionOf(asset, params);
+      } catch (err) {
+        // Over a pixel cap (a very tall or wide logo): the bundle goes without that file; the original is in it.
+        if (err instanceof ApiError && err.status === 422) continue;
+        throw err;
+      }
       plan.push({ path: `${folder}/${item.folder}/${renditionFilename(brand.slug, asset.name, params, asset.format)}`, source: async () => made.body, size: made.body.length, asset });
     }
   }

@@ -67,6 +67,15 @@ export type RenditionVariant = (typeof RENDITION_VARIANTS)[number];
 export const RENDITION_PRESETS = ['favicon', 'apple-touch', 'app-icon-192', 'app-icon-512', 'social-avatar', 'print'] as const;
 export type RenditionPreset = (typeof RENDITION_PRESETS)[number];
 
+/**
+ * Every drawn rendition holds at most 40 megapixels (width × height once the aspect ratio is applied) and at most
+ * 8192 px on either side: a 4 × 2000 px image asked 2000 px wide would be 2000 × 1,000,000 px. Larger asks are refused
+ * with the limit named, never clamped silently. Our own choice: 40 MP covers A3 at 300 ppi (3508 × 4961 px ≈ 17 MP)
+ * twice over; 8192 px (2^13) is the largest side we draw.
+ */
+export const MAX_RENDITION_PIXELS = 40_000_000;
+export const MAX_RENDITION_SIDE = 8192;
+
 export const MIN_WIDTH = 16;
 export const MAX_WIDTH = 8000;
 /** Sizes inside the favicon ICO (common practice: 16 and 32 for tabs, 48 for desktop shortcuts). */

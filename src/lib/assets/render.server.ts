@@ -8,7 +8,7 @@ import { toSanitizedSvg } from '../logo/sanitize';
 import type { Box } from '../logo/geometry';
 import type { FileStorage } from '../storage/storage';
 import { MAX_IMAGE_PIXELS, renditionType, type AssetFormat, type RenditionParams } from './kinds';
-import { paramsText } from './renditions';
+import { checkRenditionSize, DEFAULT_SVG_WIDTH, paramsText, RenditionError } from './renditions';
 import { escapeXml } from '../safe/escape';
 
 export interface RenditionSource {
@@ -27,8 +27,6 @@ export interface Rendition {
 }
 
 const TRANSPARENT = { r: 0, g: 0, b: 0, alpha: 0 };
-/** Default width of a raster drawn from an SVG when none is asked for. */
-const DEFAULT_SVG_WIDTH = 1024;
 /** Clear space of an avatar: a quarter of the logo's drawn height on each side (the identity's default unit, common practice). */
 const CLEAR_SPACE_OF_HEIGHT = 0.25;
 
@@ -69,7 +67,7 @@ async function drawn(source: RenditionSource, params: RenditionParams, contentWi
   if (source.format === 'svg') {
     const svg = svgFor(source.bytes, params);
     const canvasWidth = (contentWidth ?? DEFAULT_SVG_WIDTH) / crop.width;
-    const density = Math.min(100_000, Math.max(1, (72 * canvasWidth) / svg.width));
+    const density = boundedDensity(svg, canvasWidth);
     const img = sharp(Buffer.from(svg.text), { density, limitInputPixels: MAX_IMAGE_PIXELS });
     // Floor, so a crop never reaches past what libvips draws; the final resize sets the exact size.
     const w = Math.max(1, Math.floor((svg.width * density) / 72));
@@ -128,8 +126,8 @@ function encodeAs(img: Sharp, params: RenditionParams): Sharp {
   }
 }
 
-/** Draw one rendition (no cache). */
-export async function renderRendition(source: RenditionSource, params: RenditionParams): Promise<Rendition> {
+/** Draw one rendition (no cache), after the size guard. */
+async function drawRendition(source: RenditionSource, params: RenditionParams): Promise<Rendition> {
   const type = renditionType(params.format, source.format);
   if (params.format === 'original') return { body: source.bytes, ...type };
   if (params.format === 'svg') {
@@ -150,6 +148,38 @@ export async function renderRendition(source: RenditionSource, params: Rendition
   return { body: await encodeAs(img.resize({ width: target }), params).toBuffer(), ...type };
 }
 
+// ---------------------------------------------------------------- limits: what a request can make us draw
+
+/**
+ * The density that draws the SVG `canvasWidth` px wide, lowered where needed so the canvas never holds more than
+ * MAX_IMAGE_PIXELS (a crop to a thin drawn area would otherwise ask for a huge canvas); the final resize sets the size.
+ */
+function boundedDensity(svg: { width: number; height: number }, canvasWidth: number): number {
+  const wanted = Math.max(1, (72 * canvasWidth) / svg.width);
+  const ceiling = 72 * Math.sqrt(MAX_IMAGE_PIXELS / (svg.width * svg.height));
+  return Math.min(100_000, ceiling, wanted);
+}
+
+/** Refuses a rendition over the output caps before anything is drawn: an SVG's own size, or a raster's header only. */
+async function guardOutputSize(source: RenditionSource, params: RenditionParams): Promise<void> {
+  if (params.format === 'original' || params.format === 'svg') return;
+  const size = source.format === 'svg' ? svgFor(source.bytes, params) : await sharp(source.bytes, { limitInputPixels: MAX_IMAGE_PIXELS }).metadata();
+  checkRenditionSize(params, { format: source.format, width: size.width ?? 1, height: size.height ?? 1 });
+}
+
+/** Draw one rendition (no cache); over the caps → RenditionError 422 (rendition_too_large or too_many_pixels). */
+export async function renderRendition(source: RenditionSource, params: RenditionParams): Promise<Rendition> {
+  await guardOutputSize(source, params);
+  try {
+    return await drawRendition(source, params);
+  } catch (err) {
+    if (/pixel limit/i.test(String((err as Error).message))) {
+      throw new RenditionError('too_many_pixels', `Drawing this would read more than ${MAX_IMAGE_PIXELS / 1e6} million pixels, the most Plumbline reads from one image. Choose a smaller width.`, 422);
+    }
+    throw err;
+  }
+}
+
 /** Where a rendition is kept: a key derived from the asset and the parameters, in the storage's own key shape. */
 export function renditionKey(source: { id: string; brandId: string }, params: RenditionParams): { key: string; paramsKey: string } {
   const hash = createHash('sha256').update(`${source.id}\n${paramsText(params)}`).digest('hex');
@@ -158,21 +188,29 @@ export function renditionKey(source: { id: string; brandId: string }, params: Re
   return { key: `${source.brandId}/rendition/${uuidish}.${ext}`, paramsKey: hash };
 }
 
-/** A rendition from the store when it was made before, otherwise drawn and stored; `onStored` indexes new ones. */
+export interface RenditionHooks {
+  /** Runs only when the rendition must be drawn (not cached): may refuse by throwing (limits, rates). */
+  beforeDraw?: (entry: { paramsKey: string }) => Promise<void>;
+  /** Indexes a newly stored rendition. */
+  onStored?: (entry: { key: string; paramsKey: string; mime: string; size: number }) => Promise<void>;
+}
+
+/** A rendition from the store when it was made before (free), otherwise admitted by `beforeDraw`, drawn and stored. */
 export async function cachedRendition(
   store: FileStorage,
   source: Omit<RenditionSource, 'bytes'> & { bytes: () => Promise<Buffer> },
   params: RenditionParams,
-  onStored?: (entry: { key: string; paramsKey: string; mime: string; size: number }) => Promise<void>,
+  hooks: RenditionHooks = {},
 ): Promise<Rendition & { cached: boolean }> {
   const type = renditionType(params.format, source.format);
   if (params.format === 'original') return { body: await source.bytes(), ...type, cached: true };
   const { key, paramsKey } = renditionKey(source, params);
   const hit = await store.get(key);
   if (hit) return { body: hit, ...type, cached: true };
+  await hooks.beforeDraw?.({ paramsKey });
   const made = await renderRendition({ ...source, bytes: await source.bytes() }, params);
   await store.put(key, made.body, made.mime);
-  await onStored?.({ key, paramsKey, mime: made.mime, size: made.body.length });
+  await hooks.onStored?.({ key, paramsKey, mime: made.mime, size: made.body.length });
   return { ...made, cached: false };
 }
 

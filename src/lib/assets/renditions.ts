@@ -1,15 +1,20 @@
 // Turns a file request (format, width, preset, variant…) into one fully resolved rendition, or a plain-worded refusal.
 import { parseColor } from '../color/parse';
-import { FAVICON_SIZES, type AssetFormat, type AssetKind, type RenditionParams, type RenditionQuery } from './kinds';
+import { FAVICON_SIZES, MAX_RENDITION_PIXELS, MAX_RENDITION_SIDE, type AssetFormat, type AssetKind, type RenditionParams, type RenditionQuery } from './kinds';
 
+/** A refused rendition request; 400 for a request that makes no sense, 422 for one over a limit. */
 export class RenditionError extends Error {
   constructor(
     readonly code: string,
     message: string,
+    readonly status = 400,
   ) {
     super(message);
   }
 }
+
+/** Width of a raster drawn from an SVG when none is asked for. */
+export const DEFAULT_SVG_WIDTH = 1024;
 
 const RASTER_SOURCES: AssetFormat[] = ['svg', 'png', 'jpeg', 'webp'];
 
@@ -85,4 +90,33 @@ export function resolveRendition(query: RenditionQuery, asset: { kind: AssetKind
 export function paramsText(params: RenditionParams): string {
   const keys = Object.keys(params).sort() as (keyof RenditionParams)[];
   return JSON.stringify(keys.map((k) => [k, params[k]]));
+}
+
+/**
+ * The pixel size a rendition is drawn at, from the source's own size (an SVG's intrinsic size, a raster's header);
+ * null when nothing is drawn (the original, an SVG rendition).
+ */
+export function renditionSize(params: RenditionParams, source: { format: AssetFormat; width: number; height: number }): { width: number; height: number } | null {
+  if (params.format === 'original' || params.format === 'svg') return null;
+  if (params.format === 'ico') {
+    const side = Math.max(...(params.sizes ?? [0]));
+    return { width: side, height: side };
+  }
+  if (params.square) return { width: params.width!, height: params.width! };
+  const width = params.width ?? (source.format === 'svg' ? DEFAULT_SVG_WIDTH : source.width);
+  return { width, height: Math.max(1, Math.round((width * source.height) / Math.max(source.width, 1e-9))) };
+}
+
+/** Refuses (422 rendition_too_large) a rendition over MAX_RENDITION_PIXELS or MAX_RENDITION_SIDE, naming the limit. */
+export function checkRenditionSize(params: RenditionParams, source: { format: AssetFormat; width: number; height: number }): void {
+  const size = renditionSize(params, source);
+  if (!size) return;
+  const { width, height } = size;
+  const asked = `${width.toLocaleString('en')} × ${height.toLocaleString('en')} px`;
+  if (width > MAX_RENDITION_SIDE || height > MAX_RENDITION_SIDE) {
+    throw new RenditionError('rendition_too_large', `At that width this file would be ${asked}; a rendition can be at most ${MAX_RENDITION_SIDE} px on each side. Choose a smaller width.`, 422);
+  }
+  if (width * height > MAX_RENDITION_PIXELS) {
+    throw new RenditionError('rendition_too_large', `At that width this file would be ${asked}; a rendition can hold at most ${MAX_RENDITION_PIXELS / 1e6} million pixels. Choose a smaller width.`, 422);
+  }
 }

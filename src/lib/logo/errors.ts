@@ -5,6 +5,8 @@ export type LogoErrorCode =
   | 'svg_entity'
   | 'svg_foreign_object'
   | 'svg_external_reference'
+  | 'svg_embedded_image_too_large'
+  | 'svg_embedded_image_unreadable'
   | 'svg_absurd_size'
   | 'svg_no_size'
   | 'logo_unreadable'

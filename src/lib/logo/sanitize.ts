@@ -1,9 +1,12 @@
 // Upload policy for logo SVGs.
 // Rejected outright: DOCTYPE/ENTITY (entity expansion), <foreignObject>, any reference outside the file (href other than
 // '#fragment', url() other than url(#id), @import), embedded documents (data: other than PNG/JPEG/GIF/WebP raster images),
+// embedded images over the pixel cap (each, or all of them together, read from their headers without decoding),
 // absurd or missing dimensions, and text that is not an SVG. Stripped and reported: scripts, event handlers,
 // javascript: links, link targets on <a>, and anything else outside DOMPurify's SVG profile.
+import { imageSize } from 'image-size';
 import DOMPurify from 'isomorphic-dompurify';
+import { MAX_RENDITION_PIXELS } from '../assets/kinds';
 import { LogoError, type LogoErrorCode, type LogoErrorInfo } from './errors';
 import { MAX_SVG_UNITS, parseViewBox, svgLengthPx, type Box } from './geometry';
 
@@ -32,6 +35,23 @@ function externalUrl(text: string): string | undefined {
   return undefined;
 }
 
+/**
+ * Embedded images are decoded in full whenever the SVG is drawn, whatever size they are shown at: together they may
+ * hold at most as many pixels as one rendition (MAX_RENDITION_PIXELS).
+ */
+export const MAX_EMBEDDED_IMAGE_PIXELS = MAX_RENDITION_PIXELS;
+
+/** Width and height an embedded data: image declares in its header (never decoded), or undefined when unreadable. */
+function embeddedImageSize(uri: string): { width: number; height: number } | undefined {
+  try {
+    const base64 = uri.slice(uri.indexOf(',') + 1).replace(/\s+/g, '');
+    const { width, height } = imageSize(Uint8Array.from(atob(base64), (c) => c.charCodeAt(0)));
+    return width > 0 && height > 0 ? { width, height } : undefined;
+  } catch {
+    return undefined;
+  }
+}
+
 /** Collapses whitespace and control characters the way browsers do before reading a URL scheme. */
 const scheme = (href: string) => href.replace(/[\p{Cc}\s]/gu, "").toLowerCase();
 
@@ -55,7 +75,29 @@ export function sanitizeSvg(text: string): SanitizeResult {
   }
 
   let violation: LogoErrorInfo | undefined;
+  let embeddedPixels = 0;
   const removed = new Set<string>();
+  const millions = (n: number) => `${Math.round(n / 1e6).toLocaleString('en')} million`;
+  const measureEmbedded = (uri: string) => {
+    const size = embeddedImageSize(uri);
+    if (!size) {
+      violation ??= { code: 'svg_embedded_image_unreadable', message: 'An image embedded in the SVG could not be read (its size is unknown); embed a PNG, JPEG, GIF or WebP that opens on its own.' };
+      return;
+    }
+    const pixels = size.width * size.height;
+    embeddedPixels += pixels;
+    if (pixels > MAX_EMBEDDED_IMAGE_PIXELS) {
+      violation ??= {
+        code: 'svg_embedded_image_too_large',
+        message: `An image embedded in the SVG is ${size.width.toLocaleString('en')} × ${size.height.toLocaleString('en')} px (${millions(pixels)} pixels); embedded images can hold at most ${millions(MAX_EMBEDDED_IMAGE_PIXELS)} pixels. Embed a smaller image.`,
+      };
+    } else if (embeddedPixels > MAX_EMBEDDED_IMAGE_PIXELS) {
+      violation ??= {
+        code: 'svg_embedded_image_too_large',
+        message: `The images embedded in the SVG hold ${millions(embeddedPixels)} pixels together; at most ${millions(MAX_EMBEDDED_IMAGE_PIXELS)} are allowed. Embed fewer or smaller images.`,
+      };
+    }
+  };
   const reject = (message: string) => (violation ??= { code: 'svg_external_reference', message });
   const onElement = (node: Node, data: { tagName: string }) => {
     const tag = data.tagName?.toLowerCase();
@@ -81,7 +123,9 @@ export function sanitizeSvg(text: string): SanitizeResult {
           removed.add('link target on <a>');
           data.keepAttr = false;
         }
-      } else if (!value.trim().startsWith('#') && !(tag === 'image' && RASTER_DATA_URI.test(value.trim()))) {
+      } else if (tag === 'image' && RASTER_DATA_URI.test(value.trim())) {
+        measureEmbedded(value.trim());
+      } else if (!value.trim().startsWith('#')) {
         reject(`<${tag}> refers to "${value.slice(0, 80)}" outside the file; only #references and embedded PNG, JPEG, GIF or WebP images are allowed.`);
       }
     }

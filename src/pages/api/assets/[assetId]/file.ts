@@ -1,14 +1,16 @@
 import { Asset } from '../../../../../db/models/assets';
 import { authorizeAssetRead } from '../../../../lib/assets/access.server';
-import { assetFor, downloadFile } from '../../../../lib/assets/assets.server';
+import { assetFor, downloadFile, renditionRequester } from '../../../../lib/assets/assets.server';
 import { renditionQuerySchema } from '../../../../lib/assets/kinds';
 import { queryObject } from '../../../../lib/assets/schemas';
 import { PRINT_CAUTION } from '../../../../lib/cautions';
 import { ApiError, endpoint, fileResponse, idParam, methodNotAllowed, notFound, parseWith } from '../../../../lib/http/api';
+import { requestClientAddress } from '../../../../lib/http/client-address.server';
 import '../../../../lib/db.server';
 
 /** An asset's original or a rendition (?format, width, background, variant, color, preset, colorSpace); every call is logged. */
-export const GET = endpoint(async ({ locals, params, url }) => {
+export const GET = endpoint(async (context) => {
+  const { locals, params, url } = context;
   // Anonymous callers without a share link learn nothing, not even whether the asset exists.
   if (!locals.user && !locals.shareGrant) throw new ApiError(401, 'unauthenticated', 'Sign in to continue.');
   // A share link that allows no downloads answers alike for every id, existing or not.
@@ -22,7 +24,7 @@ export const GET = endpoint(async ({ locals, params, url }) => {
     throw err instanceof ApiError && (err.status === 401 || err.status === 404) ? notFound('That asset') : err;
   });
   const asset = await assetFor(reader.brand.id, assetId, reader.approvedOnly);
-  const { rendition, filename, params: resolved } = await downloadFile(reader, asset, query);
+  const { rendition, filename, params: resolved } = await downloadFile(reader, asset, query, renditionRequester(reader, requestClientAddress(context)));
   const response = fileResponse(rendition.body, rendition.mime, filename, { inline: query.download !== '1' });
   if (resolved.colorSpace === 'cmyk') response.headers.set('x-print-caution', PRINT_CAUTION);
   return response;
