@@ -117,7 +117,7 @@ export interface RenditionParams {
   /** '#rrggbb' or null for transparent. */
   background: string | null;
   variant: RenditionVariant;
-  /** Ink for one-colour, field colour for reversed. */
+  /** Ink for one-colour; for reversed, the field it is placed on (the background when none is given). */
   color: string | null;
   colorSpace: 'rgb' | 'cmyk';
   /** Only for ICO: the sizes inside. */

@@ -24,9 +24,10 @@ function colour(value: string | undefined, field: string): string | null | undef
 
 /** Resolve a request against an asset; presets fix sizes, the rest is checked for sense (no SVG from a photo, no transparent JPEG). */
 export function resolveRendition(query: RenditionQuery, asset: { kind: AssetKind; format: AssetFormat }): RenditionParams {
-  const background = colour(query.background, 'background');
   const color = colour(query.color, 'color') ?? null;
   const variant = query.variant ?? 'original';
+  // A reversed logo is white on a transparent ground; a colour given with it is the field it is shown on.
+  const background = colour(query.background, 'background') ?? (variant === 'reversed' && color ? color : undefined);
   const wantsWork = query.preset || query.width || (query.format && query.format !== 'original') || variant !== 'original' || query.colorSpace;
   const base: RenditionParams = { format: 'original', width: null, square: false, padding: 0, background: null, variant, color, colorSpace: 'rgb', sizes: null };
   if (!wantsWork) {

@@ -90,9 +90,9 @@ export function RenditionPicker({ asset, brandColors }: { asset: ShelfAsset; bra
             <label className="label" htmlFor={id('variant')}>Colour version</label>
             <select id={id('variant')} className="field py-1.5 text-sm" value={variant} onChange={(e) => setVariant(e.target.value as Variant)}>
               <option value="original">As designed</option>
-              <option value="black">All black</option>
-              <option value="white">All white</option>
-              <option value="reversed">White on a colour field</option>
+              <option value="black">One colour: black</option>
+              <option value="white">One colour: white, transparent ground</option>
+              <option value="reversed">White on a colour field (shapes in the ground colour cut out)</option>
               <option value="one-colour">One brand colour</option>
             </select>
           </div>

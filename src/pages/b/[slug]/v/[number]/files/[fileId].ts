@@ -1,23 +1,34 @@
 import type { APIRoute } from 'astro';
-import { recolorSvg, reverseOnGround } from '../../../../../../lib/logo';
+import { oneColourLogo, type OneColourVariant } from '../../../../../../lib/logo/knockout.server';
 import { siteAccess } from '../../../../../../lib/publishing/site-access.server';
+import { versionVariantFileId } from '../../../../../../lib/publishing/versions.server';
 import { storage } from '../../../../../../lib/storage/index.server';
 
-const VARIANTS = new Set(['black', 'white', 'reversed']);
+const VARIANTS = new Set(['black', 'white', 'reversed', 'on-dark']);
 
-/** A file of a published version (its own copy of a logo or a licensed font), recoloured for logo variants. */
+/** A file of a published version (its own copy of a logo or a licensed font); logo versions from the one knockout function. */
 export const GET: APIRoute = async (context) => {
   const access = await siteAccess(context, context.params.slug!, Number(context.params.number));
   if (access instanceof Response) return new Response('Not found', { status: 404 });
-  const file = access.version.files[context.params.fileId ?? ''];
-  if (!file) return new Response('Not found', { status: 404 });
+  const fileId = context.params.fileId ?? '';
+  let file = access.version.files[fileId];
+  if (!file || fileId.includes('~')) return new Response('Not found', { status: 404 });
   let body = await storage.get(file.key);
   if (!body) return new Response('Not found', { status: 404 });
   const variant = context.url.searchParams.get('variant');
-  const on = context.url.searchParams.get('on');
-  if (variant && VARIANTS.has(variant) && file.contentType === 'image/svg+xml') {
-    const svg = body.toString('utf8');
-    body = Buffer.from(variant === 'white' && on && /^#[0-9a-f]{6}$/i.test(on) ? reverseOnGround(svg, on) : recolorSvg(svg, variant as 'black' | 'white' | 'reversed'));
+  const isLogo = file.contentType === 'image/svg+xml' || file.contentType === 'image/png';
+  if (variant && VARIANTS.has(variant) && isLogo) {
+    // The designer's own file for the slot wins; 'on-dark' without one is the logo as drawn.
+    const own = access.version.files[versionVariantFileId(fileId, variant)];
+    const ownBody = own ? await storage.get(own.key) : null;
+    if (own && ownBody) {
+      body = ownBody;
+      file = own;
+    } else if (variant !== 'on-dark') {
+      const made = await oneColourLogo({ bytes: body, format: file.contentType === 'image/svg+xml' ? 'svg' : 'png' }, variant as OneColourVariant);
+      body = made.body;
+      file = { ...file, contentType: made.contentType };
+    }
   }
   return new Response(new Uint8Array(body), {
     headers: {
