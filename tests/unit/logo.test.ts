@@ -148,7 +148,7 @@ describe('knockoutSvg: one ink on a transparent ground', () => {
     const { data, info } = await sharp(Buffer.from(out)).ensureAlpha().raw().toBuffer({ resolveWithObject: true });
     let opaque = 0;
     for (let i = 0; i < data.length; i += info.channels) {
-      if (data[i + 3] > 0) {
+      if (data[i + 3] === 255) {
         opaque++;
         expect([data[i], data[i + 1], data[i + 2]]).toEqual([0x0a, 0x7e, 0x8c]);
       }

@@ -5,6 +5,7 @@ import sharp, { type Sharp } from 'sharp';
 import { encode as encodeIco } from 'sharp-ico';
 import { knockoutSvg } from '../logo/knockout';
 import { knockoutRaster, variantInk } from '../logo/knockout.server';
+import { logoPrintFile } from '../logo/print-files.server';
 import { toSanitizedSvg } from '../logo/sanitize';
 import type { Box } from '../logo/geometry';
 import type { FileStorage } from '../storage/storage';
@@ -129,6 +130,9 @@ export async function renderRendition(source: RenditionSource, params: Rendition
     }
     return { body: Buffer.from(text), ...type };
   }
+  if (params.format === 'pdf' || params.format === 'eps') {
+    return { body: await logoPrintFile(source.bytes.toString('utf8'), source.drawnBounds, params.format, params.colorSpace), ...type };
+  }
   if (params.format === 'ico') {
     const pngs = await Promise.all((params.sizes ?? []).map(async (s) => (await square(source, { ...params, format: 'png' }, s)).png().toBuffer()));
     return { body: encodeIco(pngs), ...type };
@@ -141,7 +145,9 @@ export async function renderRendition(source: RenditionSource, params: Rendition
 
 /** Where a rendition is kept: a key derived from the asset and the parameters, in the storage's own key shape. */
 export function renditionKey(source: { id: string; brandId: string }, params: RenditionParams): { key: string; paramsKey: string } {
-  const hash = createHash('sha256').update(`${source.id}\n${paramsText(params)}`).digest('hex');
+  // Variants drawn before knockouts were filled silhouettes: a new salt keeps those cached files from being served.
+  const salt = params.variant === 'original' ? '' : '\nknockout-1';
+  const hash = createHash('sha256').update(`${source.id}\n${paramsText(params)}${salt}`).digest('hex');
   const uuidish = `${hash.slice(0, 8)}-${hash.slice(8, 12)}-${hash.slice(12, 16)}-${hash.slice(16, 20)}-${hash.slice(20, 32)}`;
   const ext = renditionType(params.format, 'png').ext;
   return { key: `${source.brandId}/rendition/${uuidish}.${ext}`, paramsKey: hash };

@@ -71,13 +71,22 @@ export function resolveRendition(query: RenditionQuery, asset: { kind: AssetKind
         return { ...base, format: 'svg', background: background ?? null };
       }
       if (format === 'ico') return resolveRendition({ ...query, preset: 'favicon' }, asset);
+      if (format === 'pdf' || format === 'eps') {
+        if (asset.format !== 'svg') {
+          throw new RenditionError('vector_from_raster', `A print-ready ${format.toUpperCase()} is made from an SVG original only: this logo is a raster image, and wrapping its pixels would not make a vector file. Ask for the SVG, or use the CMYK TIFF.`);
+        }
+        if (query.width || variant !== 'original' || background) {
+          throw new RenditionError('invalid_input', `A print-ready ${format.toUpperCase()} is the logo as drawn, at its own size: drop width, variant and background.`);
+        }
+        return { ...base, format, colorSpace: query.colorSpace ?? 'cmyk' };
+      }
       const opaque = format === 'jpg' || format === 'tiff';
       if (opaque && background === null) throw new RenditionError('invalid_input', `${format.toUpperCase()} has no transparency: choose a background colour.`);
       params = { ...base, format, width: query.width ?? null, background: opaque ? (background ?? '#ffffff') : (background ?? null), colorSpace: query.colorSpace ?? (format === 'tiff' ? 'cmyk' : 'rgb') };
     }
   }
   if (params.colorSpace === 'cmyk' && params.format !== 'jpg' && params.format !== 'tiff') {
-    throw new RenditionError('invalid_input', 'CMYK is for print files: choose format=tiff or format=jpg.');
+    throw new RenditionError('invalid_input', 'CMYK is for print files: choose format=tiff, jpg, pdf or eps.');
   }
   return params;
 }
