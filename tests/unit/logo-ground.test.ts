@@ -1,6 +1,5 @@
 // The thinnest-stroke estimate, checked on drawings of our own with known geometry.
 import { describe, expect, test } from 'vitest';
-import sharp from 'sharp';
 import { thinnestStroke } from '../../src/lib/logo/stroke.server';
 
 describe('thinnestStroke (common practice: the finest line decides the minimum size)', () => {
