@@ -81,7 +81,10 @@ describe("the designer's own version file wins", () => {
     expect(up.body.logo.ownVariants).toEqual(['white']);
     expect((await bytes(owner, logoFile(treeId, 'variant=white'))).body.toString()).toContain('<rect');
     // Published versions carry the file with them.
-    expect((await owner.post(`/api/brands/${brandId}/versions`, { note: 'With own white' })).status).toBe(201);
+    const doc = { type: 'doc', content: [{ type: 'paragraph', attrs: { id: 'p1' }, content: [{ type: 'text', text: 'Our mark.' }] }] };
+    expect((await owner.request('PUT', `/api/brands/${brandId}/guideline`, { baseRevision: 0, doc })).status).toBe(200);
+    const published1 = await owner.post(`/api/brands/${brandId}/versions`, { note: 'With own white' });
+    expect(published1.status, JSON.stringify(published1.body)).toBe(201);
     const published = await bytes(owner, `/b/${slug}/v/1/files/${treeId}?variant=white`);
     expect(published.status).toBe(200);
     expect(published.body.toString()).toContain('<rect');

@@ -27,7 +27,8 @@ export function resolveRendition(query: RenditionQuery, asset: { kind: AssetKind
   const color = colour(query.color, 'color') ?? null;
   const variant = query.variant ?? 'original';
   // A reversed logo is white on a transparent ground; a colour given with it is the field it is shown on.
-  const background = colour(query.background, 'background') ?? (variant === 'reversed' && color ? color : undefined);
+  const asked = colour(query.background, 'background');
+  const background = asked === undefined && variant === 'reversed' && color ? color : asked;
   const wantsWork = query.preset || query.width || (query.format && query.format !== 'original') || variant !== 'original' || query.colorSpace;
   const base: RenditionParams = { format: 'original', width: null, square: false, padding: 0, background: null, variant, color, colorSpace: 'rgb', sizes: null };
   if (!wantsWork) {
