@@ -5,6 +5,8 @@ import { versionVariantFileId } from '../../../../../../lib/publishing/versions.
 import { storage } from '../../../../../../lib/storage/index.server';
 
 const VARIANTS = new Set(['black', 'white', 'reversed', 'on-dark']);
+/** Computed versions of a version's files, which never change: the last hundred kept in memory. */
+const made = new Map<string, { body: Buffer; contentType: string }>();
 
 /** A file of a published version (its own copy of a logo or a licensed font); logo versions from the one knockout function. */
 export const GET: APIRoute = async (context) => {
@@ -25,9 +27,15 @@ export const GET: APIRoute = async (context) => {
       body = ownBody;
       file = own;
     } else if (variant !== 'on-dark') {
-      const made = await oneColourLogo({ bytes: body, format: file.contentType === 'image/svg+xml' ? 'svg' : 'png' }, variant as OneColourVariant);
-      body = made.body;
-      file = { ...file, contentType: made.contentType };
+      const memoKey = `${file.key}|${variant}`;
+      let version = made.get(memoKey);
+      if (!version) {
+        version = await oneColourLogo({ bytes: body, format: file.contentType === 'image/svg+xml' ? 'svg' : 'png' }, variant as OneColourVariant);
+        made.set(memoKey, version);
+        if (made.size > 100) made.delete(made.keys().next().value!);
+      }
+      body = version.body;
+      file = { ...file, contentType: version.contentType };
     }
   }
   return new Response(new Uint8Array(body), {
