@@ -18,7 +18,8 @@ export default defineConfig({
   output: 'server',
   // A second build (tests, a parallel checkout) can go elsewhere without touching dist/.
   outDir: process.env.PLUMBLINE_OUT_DIR ?? './dist',
-  adapter: node({ mode: 'standalone' }),
+  // Middleware mode: scripts/serve.mjs is the server, so it can hand each request its socket's own address.
+  adapter: node({ mode: 'middleware' }),
   integrations: [react(), mdx()],
   security: { checkOrigin: true, allowedDomains },
   server: { host: '127.0.0.1', port: 4321 },
@@ -35,6 +36,8 @@ export default defineConfig({
       FILES_DIR: envField.string({ context: 'server', access: 'secret', default: '.data/files' }),
       CHROMIUM_PATH: envField.string({ context: 'server', access: 'secret', default: '/usr/bin/chromium' }),
       AUTH_SIGN_IN_LIMIT: envField.number({ context: 'server', access: 'secret', default: 5 }),
+      // Proxies whose X-Forwarded-For is believed (comma-separated IPs or CIDRs); empty: only the socket counts.
+      TRUSTED_PROXIES: envField.string({ context: 'server', access: 'secret', default: '' }),
       // E-mail (src/lib/mail): an SMTP relay; without SMTP_HOST nothing is sent. MAIL_CAPTURE_DIR is set only
       // when the local fake server keeps the messages, and turns on the sent-mail page.
       SMTP_HOST: envField.string({ context: 'server', access: 'secret', optional: true }),

@@ -1,23 +1,41 @@
-// `npm start`: PostgreSQL (installed if missing), migrations, demo, build, serve, and the sign-ins printed.
+// `npm start`: Debian packages (installed if missing), PostgreSQL, migrations, demo, build, serve, a readiness list.
 import { join } from 'node:path';
+import pg from 'pg';
 import { DEMO_PASSWORD, DEMO_PEOPLE } from '../db/seeders/demo';
+import { CHROMIUM, CHROMIUM_PATH, ensureDebianPackages, GHOSTSCRIPT, MACHINE_PACKAGES, POSTGRESQL } from './lib/debian';
 import { publishDemo } from './lib/demo-publish';
 import { buildApp, prepareDatabase, startServer } from './lib/prepare';
 import { startCluster } from './lib/postgres';
+import { checkBrowser, checkDatabase, checkMail, checkStorage, formatChecks } from './lib/readiness';
 import { startFakeSmtp } from '../src/lib/mail/fake-smtp';
-import { authSecret, dataDir, host, pgPort, port, siteUrl } from './lib/settings';
+import { authSecret, dataDir, demoEnabled, filesDir, host, pgPort, port, siteUrl } from './lib/settings';
 
 const started = Date.now();
 const step = (what: string) => console.log(`\n▸ ${what}`);
+const demo = demoEnabled();
+
+// One apt run for everything missing (as root); otherwise the missing packages and the command are named.
+step('Debian packages: postgresql, chromium, ghostscript');
+const externalDb = Boolean(process.env.DATABASE_URL);
+try {
+  const installed = ensureDebianPackages(externalDb ? [CHROMIUM, GHOSTSCRIPT] : MACHINE_PACKAGES);
+  if (installed.length === 0) console.log('  all present');
+} catch (err) {
+  // Without PostgreSQL nothing can start; without chromium or ghostscript the rest still can, and the list below says so.
+  if (!externalDb && !POSTGRESQL.present()) {
+    console.error(`\n${(err as Error).message}\n`);
+    process.exit(1);
+  }
+  console.warn(`  ${(err as Error).message.replace(/\n/g, '\n  ')}`);
+}
 
 step(`PostgreSQL on 127.0.0.1:${pgPort} (data in ${join(dataDir, 'postgres')})`);
 const databaseUrl = process.env.DATABASE_URL ?? startCluster(join(dataDir, 'postgres'), pgPort).url;
 const secret = authSecret();
 const signInLimit = Number(process.env.AUTH_SIGN_IN_LIMIT ?? 5);
 
-step('Migrations and demo data');
-const filesDir = join(dataDir, 'files');
-const { migrations } = await prepareDatabase({ databaseUrl, siteUrl, secret, signInLimit }, { filesDir });
+step(demo ? 'Migrations and demo data' : 'Migrations (PLUMBLINE_DEMO=0: no demo data)');
+const { migrations } = await prepareDatabase({ databaseUrl, siteUrl, secret, signInLimit }, { filesDir, seed: demo });
 console.log(migrations.length ? `  applied ${migrations.length} migration(s)` : '  schema up to date');
 
 if (process.env.PLUMBLINE_SKIP_BUILD !== '1') {
@@ -32,27 +50,59 @@ if (process.env.SMTP_HOST) {
 } else {
   const fake = await startFakeSmtp({ dir: join(dataDir, 'mail'), port: Number(process.env.PLUMBLINE_SMTP_PORT ?? 0) });
   mail = { smtpHost: fake.host, smtpPort: fake.port, captureDir: fake.dir };
-  step(`Local mail catcher on ${fake.host}:${fake.port} (messages in ${fake.dir}; read them at ${siteUrl}/app/mail)`);
 }
 
 step('Starting the server');
 const server = await startServer({ host, port, databaseUrl, siteUrl, secret, signInLimit, filesDir, mail });
 let shareUrl: string | null = null;
-try {
-  shareUrl = await publishDemo(siteUrl, dataDir);
-  // The demo review anchors its comments to the published draft's blocks: seed again now that they exist.
-  await prepareDatabase({ databaseUrl, siteUrl, secret, signInLimit }, { filesDir });
-} catch (err) {
-  console.warn(`  (the demo version could not be published: ${(err as Error).message})`);
+if (demo) {
+  try {
+    shareUrl = await publishDemo(siteUrl, dataDir);
+    // The demo review anchors its comments to the published draft's blocks: seed again now that they exist.
+    await prepareDatabase({ databaseUrl, siteUrl, secret, signInLimit }, { filesDir });
+  } catch (err) {
+    console.warn(`  (the demo version could not be published: ${(err as Error).message})`);
+  }
 }
-const width = Math.max(...DEMO_PEOPLE.map((p) => p.email.length));
-console.log(`
-Plumbline is running at ${siteUrl}   (ready in ${((Date.now() - started) / 1000).toFixed(1)} s)
 
-Demo sign-ins (password for all: ${DEMO_PASSWORD})
+step('Readiness');
+const checks = await Promise.all([checkDatabase(databaseUrl), checkBrowser(CHROMIUM_PATH), checkMail(mail, siteUrl), Promise.resolve(checkStorage(filesDir))]);
+console.log(formatChecks(checks));
+
+/** Demo people left in the database by an earlier start with the demo on. */
+async function leftoverDemoPeople(): Promise<number> {
+  const client = new pg.Client({ connectionString: databaseUrl });
+  try {
+    await client.connect();
+    const { rows } = await client.query<{ n: string }>('SELECT count(*) AS n FROM "user" WHERE email = ANY($1)', [DEMO_PEOPLE.map((p) => p.email)]);
+    return Number(rows[0].n);
+  } catch {
+    return 0;
+  } finally {
+    await client.end().catch(() => {});
+  }
+}
+
+const width = Math.max(...DEMO_PEOPLE.map((p) => p.email.length));
+const failed = checks.filter((c) => !c.ok).map((c) => c.part);
+const people = demo
+  ? `DEMO ACCOUNTS, for trying Plumbline only. They share one published password (${DEMO_PASSWORD}), so anyone who
+reads this can sign in as them: keep no real work in them, and start with PLUMBLINE_DEMO=0 for real use.
 ${DEMO_PEOPLE.map((p) => `  ${p.email.padEnd(width)}  ${p.says}`).join('\n')}
 
-${shareUrl ? `Demo share link (no account needed): ${shareUrl}\n\n` : ''}Ctrl-C stops the server; \`npm run db:stop\` stops PostgreSQL.
+${shareUrl ? `Demo share link (no account needed): ${shareUrl}\n` : ''}`
+  : `No demo accounts (PLUMBLINE_DEMO=0): sign up at ${siteUrl}/sign-up.\n${
+      (await leftoverDemoPeople()) > 0
+        ? `Caution: demo accounts from an earlier start are still in this database, with the shared demo password.\n`
+        : ''
+    }`;
+console.log(`
+Plumbline is running at ${siteUrl}   (ready in ${((Date.now() - started) / 1000).toFixed(1)} s)${
+  failed.length ? `\nNot working: ${failed.join(', ')} (see the readiness list above for what to do).` : ''
+}
+
+${people}
+Ctrl-C stops the server; \`npm run db:stop\` stops PostgreSQL.
 `);
 
 const stop = () => server.kill('SIGTERM');

@@ -7,5 +7,7 @@ declare namespace App {
     session: import('./lib/auth/auth.server').AuthSession['session'] | null;
     /** Read access to one brand's published site through a share link (no account), when its cookie is present. */
     shareGrant: { brandId: string; linkId: string; allowDownloads: boolean; version: number | null } | null;
+    /** The TCP peer's address, set by scripts/serve.mjs; read it through requestClientAddress(), never directly. */
+    socketAddress?: string;
   }
 }

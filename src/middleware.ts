@@ -2,13 +2,10 @@
 // src/lib/auth/policy.ts (members) and src/lib/publishing/site-access.server.ts (published sites).
 import { defineMiddleware } from 'astro:middleware';
 import { auth } from './lib/auth/auth.server';
-import { TtlCache } from './lib/http/ttl-cache';
 import { shareGrants } from './lib/publishing/grant-cache';
 import { linkForToken, linkState, SHARE_COOKIE, tokenFromCookie } from './lib/publishing/share-links.server';
 
-type Found = Awaited<ReturnType<typeof auth.api.getSession>>;
-// Two seconds of memory for the question every page view asks again (a signed-out cookie is dropped by the browser).
-const sessions = new TtlCache<Found>(2000);
+// No memory of sessions here: a signed-out or revoked session is refused on the very next request, in every process.
 const sessionKey = (cookie: string) => /session_token=([^;]+)/.exec(cookie)?.[1] ?? null;
 
 export const onRequest = defineMiddleware(async (context, next) => {
@@ -20,11 +17,7 @@ export const onRequest = defineMiddleware(async (context, next) => {
   const headers = context.request.headers;
   const key = sessionKey(headers.get('cookie') ?? '');
   if (key) {
-    let found = sessions.get(key);
-    if (found === undefined) {
-      found = await auth.api.getSession({ headers });
-      sessions.set(key, found);
-    }
+    const found = await auth.api.getSession({ headers });
     if (found) {
       context.locals.user = found.user;
       context.locals.session = found.session;

@@ -23,6 +23,7 @@ import type { FontMetrics } from '../../src/lib/type/metrics';
 import { initAssetModels } from './assets';
 import { initCollaborationModels } from './collaboration';
 import { initPublishingModels } from './publishing';
+import { initAddressModels } from './addresses';
 
 export class Studio extends Model<InferAttributes<Studio>, InferCreationAttributes<Studio>> {
   declare id: CreationOptional<string>;
@@ -299,6 +300,7 @@ export function initModels(sequelize: Sequelize): void {
   initAssetModels(sequelize);
   initCollaborationModels(sequelize);
   initPublishingModels(sequelize);
+  initAddressModels(sequelize);
 }
 
 /** A Sequelize instance on PostgreSQL through pg, with the models bound. */
@@ -314,3 +316,4 @@ export function connect(databaseUrl: string, opts: { logging?: boolean } = {}): 
 }
 export * from './publishing';
 export * from './assets';
+export * from './addresses';

@@ -3,6 +3,7 @@
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { DEMO_BRANDS, DEMO_PASSWORD, DEMO_PEOPLE } from '../../db/seeders/demo';
+import { withDemoCopy } from './demo-copy';
 
 async function call(siteUrl: string, cookie: string, method: string, path: string, body?: unknown) {
   const res = await fetch(siteUrl + path, {
@@ -72,7 +73,10 @@ export async function publishDemo(siteUrl: string, dataDir: string): Promise<str
   const linkFile = join(dataDir, 'demo-share-link.txt');
   if (versions.length === 0) {
     const draft = await call(siteUrl, cookie, 'GET', `${base}/guideline`);
-    if (draft.doc.content.length === 0) await call(siteUrl, cookie, 'POST', `${base}/guideline/template`, { template: 'brand-book', baseRevision: draft.revision });
+    if (draft.doc.content.length === 0) {
+      const started = await call(siteUrl, cookie, 'POST', `${base}/guideline/template`, { template: 'brand-book', baseRevision: draft.revision });
+      await call(siteUrl, cookie, 'PUT', `${base}/guideline`, { baseRevision: started.revision, doc: withDemoCopy(started.doc) });
+    }
     await call(siteUrl, cookie, 'POST', `${base}/versions`, { note: 'First edition of the Larchmere guidelines: logo, colour, type and imagery.' });
   }
   if (!existsSync(linkFile)) {

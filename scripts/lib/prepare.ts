@@ -39,14 +39,16 @@ export interface ServerEnv {
   siteUrl: string;
   secret: string;
   signInLimit?: number;
+  /** Proxies whose X-Forwarded-For is believed (TRUSTED_PROXIES); none when unset. */
+  trustedProxies?: string;
   filesDir?: string;
   /** E-mail: the SMTP relay and, when the local fake keeps the messages, its folder (src/lib/mail). */
   mail?: { smtpHost: string; smtpPort: number; from?: string; captureDir?: string };
 }
 
-/** Start the built server and resolve once it answers HTTP. */
+/** Start the built server (scripts/serve.mjs over outDir()) and resolve once it answers HTTP. */
 export async function startServer(env: ServerEnv, opts: { quiet?: boolean } = {}): Promise<ChildProcess> {
-  const child = spawn(process.execPath, [join(outDir(), 'server', 'entry.mjs')], {
+  const child = spawn(process.execPath, [join(projectRoot, 'scripts', 'serve.mjs'), outDir()], {
     cwd: projectRoot,
     stdio: opts.quiet ? ['ignore', 'ignore', 'inherit'] : 'inherit',
     env: {
@@ -59,6 +61,7 @@ export async function startServer(env: ServerEnv, opts: { quiet?: boolean } = {}
       SITE_URL: env.siteUrl,
       AUTH_SECRET: env.secret,
       ...(env.signInLimit ? { AUTH_SIGN_IN_LIMIT: String(env.signInLimit) } : {}),
+      ...(env.trustedProxies ? { TRUSTED_PROXIES: env.trustedProxies } : {}),
       ...(env.filesDir ? { FILES_DIR: env.filesDir } : {}),
       ...(env.mail
         ? {

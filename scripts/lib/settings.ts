@@ -21,3 +21,7 @@ export const pgPort = Number(process.env.PLUMBLINE_PG_PORT ?? 54320);
 export const host = process.env.HOST ?? '127.0.0.1';
 export const port = Number(process.env.PORT ?? 4321);
 export const siteUrl = process.env.SITE_URL ?? `http://${host}:${port}`;
+
+/** PLUMBLINE_DEMO=0 (or false/no/off) leaves the demo studio, brands and people out; `npm start` seeds them by default. */
+export const demoEnabled = (value = process.env.PLUMBLINE_DEMO): boolean => !['0', 'false', 'no', 'off'].includes((value ?? '1').trim().toLowerCase());
+export const filesDir = resolve(process.env.FILES_DIR ?? join(dataDir, 'files'));

@@ -6,6 +6,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { TestProject } from 'vitest/node';
 import { buildApp, prepareDatabase, startServer } from '../../scripts/lib/prepare';
+import { ensureDebianPackages, MACHINE_PACKAGES, POSTGRESQL } from '../../scripts/lib/debian';
 import { dropCluster, freePort, startCluster } from '../../scripts/lib/postgres';
 import { startFakeSmtp, type FakeSmtp } from '../../src/lib/mail/fake-smtp';
 
@@ -14,6 +15,15 @@ let clusterDir: string | undefined;
 let smtp: FakeSmtp | undefined;
 
 export async function setup(project: TestProject): Promise<void> {
+  // The same packages as `npm start`, in one apt run: PostgreSQL, the browser the browser tests and PDFs use, Ghostscript.
+  // As root they are installed. Otherwise the missing ones are named with the command: without PostgreSQL the run
+  // stops here; without chromium the browser and PDF tests fail with that same advice (they never skip).
+  try {
+    ensureDebianPackages(MACHINE_PACKAGES);
+  } catch (err) {
+    if (!POSTGRESQL.present()) throw err;
+    console.warn(`\n${(err as Error).message}\n`);
+  }
   // The suite builds into its own folder, so it never disturbs a running `npm start`.
   process.env.PLUMBLINE_OUT_DIR ??= join(process.cwd(), 'dist-test');
   clusterDir = mkdtempSync(join(tmpdir(), 'plumbline-test-'));
@@ -33,6 +43,8 @@ export async function setup(project: TestProject): Promise<void> {
   project.provide('baseUrl', siteUrl);
   project.provide('databaseUrl', cluster.url);
   project.provide('mailDir', smtp.dir);
+  project.provide('filesDir', filesDir);
+  project.provide('clusterDir', clusterDir);
 }
 
 export async function teardown(): Promise<void> {
@@ -51,5 +63,9 @@ declare module 'vitest' {
     baseUrl: string;
     databaseUrl: string;
     mailDir: string;
+    /** The built server's FILES_DIR. */
+    filesDir: string;
+    /** The throwaway cluster's folder (pgdata, socket, kept passwords). */
+    clusterDir: string;
   }
 }

@@ -179,6 +179,10 @@ describe('templates', () => {
     const pairs = suggestedPairs(identity);
     expect(pairs[0]).toEqual({ foreground: 'c-espresso', background: 'c-filter-paper' });
     expect(pairs.every((p) => p.foreground !== p.background)).toBe(true);
+    // Beyond text on ground, every suggestion reaches WCAG 2.2 AA for body text (SC 1.4.3: 4.5:1).
+    const value = (id: string) => identity.colors.find((c) => c.id === id)!.value;
+    expect(pairs.slice(1).every((p) => contrastRatio(value(p.foreground), value(p.background)) >= 4.5)).toBe(true);
+    expect(pairs.length).toBeGreaterThan(1);
     expect(starterAttrs({ colorIds: ['$all'] }, identity).colorIds).toHaveLength(identity.colors.length);
   });
 });
@@ -222,6 +226,13 @@ describe('drafts kept in the browser', () => {
     expect(decideRestore(draft, { revision: 5, doc: saved }).kind).toBe('conflict');
     expect(decideRestore({ ...draft, doc: saved }, { revision: 5, doc: saved }).kind).toBe('none');
     expect(decideRestore(null, { revision: 5, doc: saved }).kind).toBe('none');
+  });
+  test('a blank page kept by the browser never competes with a saved template', () => {
+    // The editor normalises an empty document to one empty paragraph (ProseMirror's schema needs a block: from memory).
+    const blank = { baseRevision: 0, doc: { type: 'doc', content: [{ type: 'paragraph' }] } as GuidelineDoc, savedAt: 1 };
+    expect(decideRestore(blank, { revision: 1, doc: saved }).kind).toBe('none');
+    const nothing = { baseRevision: 0, doc: { type: 'doc', content: [] } as unknown as GuidelineDoc, savedAt: 1 };
+    expect(decideRestore(nothing, { revision: 1, doc: saved }).kind).toBe('none');
   });
 });
 

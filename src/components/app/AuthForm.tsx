@@ -4,6 +4,7 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { api, ApiClientError } from '../../lib/client/api';
+import { safeNext } from '../../lib/http/redirect';
 
 const PASSWORD_MIN = 10;
 
@@ -44,7 +45,7 @@ export default function AuthForm({ mode, next }: { mode: 'sign-in' | 'sign-up'; 
     setServerError(null);
     try {
       await api(`/api/auth/${mode}/email`, { method: 'POST', body: values });
-      location.assign(next);
+      location.assign(safeNext(next));
     } catch (err) {
       if (err instanceof ApiClientError) {
         if (err.status === 429) setServerError('Too many attempts from here. Wait a minute, then try again.');

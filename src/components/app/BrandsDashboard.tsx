@@ -9,6 +9,7 @@ import type { BrandRole } from '../../lib/auth/roles';
 import { ROLE_LABELS } from '../../lib/auth/roles';
 import { api, ApiClientError } from '../../lib/client/api';
 import { QueryRoot } from './QueryRoot';
+import { When } from '../ui/When';
 
 interface BrandRow {
   id: string;
@@ -19,7 +20,6 @@ interface BrandRow {
 }
 
 const column = createColumnHelper<BrandRow>();
-const dateFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
 
 const columns = [
   column.accessor('name', {
@@ -32,7 +32,7 @@ const columns = [
   }),
   column.accessor('slug', { header: 'Public address', cell: (c) => <span className="font-mono text-sm text-ink-soft">/b/{c.getValue()}</span> }),
   column.accessor('role', { header: 'Your role', cell: (c) => <RoleBadge role={c.getValue()} /> }),
-  column.accessor('updatedAt', { header: 'Last changed', cell: (c) => <span className="text-ink-soft">{dateFormat.format(new Date(c.getValue()))}</span> }),
+  column.accessor('updatedAt', { header: 'Last changed', cell: (c) => <When className="text-ink-soft" value={c.getValue()} /> }),
 ];
 
 export function RoleBadge({ role }: { role: BrandRole }) {

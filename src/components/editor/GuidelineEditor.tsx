@@ -36,20 +36,21 @@ function StatusLine({ state }: { state: SaveState }) {
 function ConflictPanel({ state, onKeepMine, onTakeTheirs }: { state: SaveState; onKeepMine: () => void; onTakeTheirs: () => void }) {
   if (!state.conflict) return null;
   const { mine, theirs } = state.conflict;
+  // The highlighted answer is the one that keeps what is already saved; replacing it takes a second, deliberate click.
   return (
     <section role="alertdialog" aria-labelledby="conflict-title" className="panel mb-4 border-danger/40 p-4">
-      <h2 id="conflict-title" className="text-base font-semibold text-ink">Two versions of these guidelines</h2>
-      <p className="hint mt-1">{state.message} Choose which one to keep; the other is replaced.</p>
+      <h2 id="conflict-title" className="text-base font-semibold text-ink">These guidelines were saved elsewhere</h2>
+      <p className="hint mt-1">{state.message} Choose which copy to keep; the other is replaced.</p>
       <div className="mt-3 grid gap-3 sm:grid-cols-2">
-        <div className="rounded-lg border border-rule p-3">
-          <p className="eyebrow">Yours, in this browser</p>
-          <p className="mt-1 text-sm">{mine.text}</p>
-          <button type="button" className="btn-primary mt-3" onClick={onKeepMine}>Keep mine</button>
+        <div className="rounded-lg border border-plumb/40 p-3">
+          <p className="eyebrow">Saved copy, on the server</p>
+          <p className="mt-1 text-sm">{theirs.summary?.text ?? 'Its contents could not be loaded.'}</p>
+          <button type="button" className="btn-primary mt-3" onClick={onTakeTheirs} autoFocus>Keep the saved copy</button>
         </div>
         <div className="rounded-lg border border-rule p-3">
-          <p className="eyebrow">Saved on the server (version {theirs.revision})</p>
-          <p className="mt-1 text-sm">{theirs.summary?.text ?? 'Its contents could not be loaded.'}</p>
-          <button type="button" className="btn-quiet mt-3" onClick={onTakeTheirs}>Use the saved version</button>
+          <p className="eyebrow">Unsaved copy, in this browser</p>
+          <p className="mt-1 text-sm">{mine.text}</p>
+          <button type="button" className="btn-quiet mt-3" onClick={onKeepMine}>Replace it with this browser’s copy</button>
         </div>
       </div>
     </section>

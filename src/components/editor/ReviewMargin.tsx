@@ -2,7 +2,7 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { api } from '../../lib/client/api';
-import { blockDefinition } from '../../lib/guideline/blocks';
+import { blockLabel } from '../../lib/guideline/block-label';
 import type { CommentView } from '../../lib/reviews/reviews.server';
 import { QueryRoot } from '../app/QueryRoot';
 
@@ -10,15 +10,6 @@ interface DraftBlock {
   type: string;
   attrs?: { id?: string; title?: string };
   content?: { text?: string; content?: { text?: string }[] }[];
-}
-
-/** A reader's name for a top-level block: a section's title, a block's label, or the first words of text. */
-function blockLabel(b: DraftBlock): string {
-  if (b.type === 'sectionHeading') return `Section: ${b.attrs?.title || 'untitled'}`;
-  const def = blockDefinition(b.type);
-  if (def) return def.label;
-  const words = (b.content ?? []).map((n) => n.text ?? (n.content ?? []).map((m) => m.text ?? '').join('')).join(' ').trim();
-  return words ? `“${words.slice(0, 40)}${words.length > 40 ? '…' : ''}”` : 'Text';
 }
 
 /** Start a thread on one block of the draft. */

@@ -221,7 +221,7 @@ export function useAutosave({ brandId, initialRevision, initialDoc, delayMs = 80
 export function statusText(state: SaveState): string {
   switch (state.status) {
     case 'saved':
-      return state.savedAt ? `All changes saved (version ${state.revision})` : 'Up to date';
+      return state.savedAt ? `All changes saved at ${new Date(state.savedAt).toLocaleTimeString(undefined, { hour: '2-digit', minute: '2-digit' })}` : 'All changes saved';
     case 'pending':
       return state.message ?? 'Unsaved changes…';
     case 'saving':

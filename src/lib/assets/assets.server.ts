@@ -8,7 +8,7 @@ import type { Brand } from '../../../db/models';
 import { audit } from '../audit.server';
 import type { Caller } from '../auth/access.server';
 import { sequelize } from '../db.server';
-import { ApiError } from '../http/api';
+import { ApiError, notFound } from '../http/api';
 import { loadIdentity } from '../identity/identity.server';
 import { newKey } from '../storage/storage';
 import { storage } from '../storage/index.server';
@@ -171,7 +171,7 @@ export async function listAssets(reader: AssetReader, filters: AssetFilters): Pr
 /** An asset of the brand the reader may see; drafts and retired assets are 404 for approved-only readers. */
 export async function assetFor(brandId: string, assetId: string, approvedOnly: boolean): Promise<Asset> {
   const asset = await Asset.findOne({ where: { id: assetId, brandId } });
-  if (!asset || (approvedOnly && asset.state !== 'approved')) throw new ApiError(404, 'not_found', 'That asset was not found on this brand’s shelf.');
+  if (!asset || (approvedOnly && asset.state !== 'approved')) throw notFound('That asset');
   return asset;
 }
 

@@ -35,8 +35,8 @@ export function authOptions(settings: AuthSettings): BetterAuthOptions {
       maxPasswordLength: PASSWORD_MAX,
       autoSignIn: true,
     },
-    // Signed session data rides in a cookie for a minute, so most requests need no session query.
-    session: { expiresIn: 60 * 60 * 24 * 14, updateAge: 60 * 60 * 24, cookieCache: { enabled: true, maxAge: 60 } },
+    // No cookie cache: every request asks the session table, so signing out ends the session everywhere at once.
+    session: { expiresIn: 60 * 60 * 24 * 14, updateAge: 60 * 60 * 24, cookieCache: { enabled: false } },
     rateLimit: {
       enabled: true,
       storage: 'database',

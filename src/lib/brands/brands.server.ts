@@ -1,7 +1,7 @@
 // Brands and their people: creation, renaming, deletion, members and pending invitations.
 import { createHash, randomBytes } from 'node:crypto';
 import { Op, QueryTypes, type Transaction } from 'sequelize';
-import { Brand, BrandLogo, BrandMember, BrandTypeface, Invitation, Studio, StudioMember } from '../../../db/models';
+import { Brand, BrandFormerSlug, BrandMember, Invitation, Studio, StudioMember } from '../../../db/models';
 import { siteCache } from '../publishing/site-cache';
 import { storage } from '../storage/index.server';
 import { audit } from '../audit.server';
@@ -24,12 +24,13 @@ const INVITATION_DAYS = 14;
 /** A slug not used by any brand yet, derived from the name. */
 async function freeSlug(name: string, t: Transaction): Promise<string> {
   const base = slugify(name);
-  const rows = await Brand.findAll({
-    where: { slug: { [Op.or]: [base, { [Op.like]: `${base}-%` }] } },
-    attributes: ['slug'],
-    transaction: t,
-  });
-  return firstFreeSlug(base, new Set(rows.map((r) => r.slug)));
+  const near = { slug: { [Op.or]: [base, { [Op.like]: `${base}-%` }] } };
+  const [rows, former] = await Promise.all([
+    Brand.findAll({ where: near, attributes: ['slug'], transaction: t }),
+    // An address a brand used before still redirects to it, so it is not free for another brand.
+    BrandFormerSlug.findAll({ where: near, attributes: ['slug'], transaction: t }),
+  ]);
+  return firstFreeSlug(base, new Set([...rows, ...former].map((r) => r.slug)));
 }
 
 /** The studio a new brand goes into: the one asked for, else the caller's first, else a new one of theirs. */
@@ -60,12 +61,19 @@ export async function createBrand(caller: Caller, name: string, studioId?: strin
   });
 }
 
-/** Rename a brand or change its public slug (a taken slug is a 409). */
+/**
+ * Rename a brand or change its public slug (a taken slug is a 409). The old slug is kept as a former address that
+ * redirects, so published links and bookmarks keep working; a brand may take back one of its own former addresses.
+ */
 export async function updateBrand(caller: Caller, brand: Brand, changes: { name?: string; slug?: string }): Promise<Brand> {
   return sequelize.transaction(async (t) => {
     if (changes.slug && changes.slug !== brand.slug) {
+      await sequelize.query('SELECT pg_advisory_xact_lock(hashtext(:key))', { replacements: { key: 'brand-slug' }, transaction: t });
       const taken = await Brand.findOne({ where: { slug: changes.slug }, transaction: t });
-      if (taken) throw new ApiError(409, 'slug_taken', `The address "${changes.slug}" is already used by another brand.`);
+      const former = await BrandFormerSlug.findByPk(changes.slug, { transaction: t });
+      if (taken || (former && former.brandId !== brand.id)) throw new ApiError(409, 'slug_taken', `The address "${changes.slug}" is already used by another brand.`);
+      if (former) await former.destroy({ transaction: t });
+      await BrandFormerSlug.upsert({ slug: brand.slug, brandId: brand.id }, { transaction: t });
     }
     const before = { name: brand.name, slug: brand.slug };
     await brand.update(changes, { transaction: t });
@@ -75,18 +83,15 @@ export async function updateBrand(caller: Caller, brand: Brand, changes: { name?
   });
 }
 
-/** Delete a brand and everything it holds; the audit rows stay, with the brand reference cleared. */
+/** Delete a brand and everything it holds, its stored files too; the audit rows stay, with the brand reference cleared. */
 export async function deleteBrand(caller: Caller, brand: Brand): Promise<void> {
-  const files = [
-    ...(await BrandLogo.findAll({ where: { brandId: brand.id }, attributes: ['storageKey'] })).map((l) => l.storageKey),
-    ...(await BrandTypeface.findAll({ where: { brandId: brand.id }, attributes: ['storageKey'] })).map((f) => f.storageKey),
-  ].filter((k): k is string => !!k);
   await sequelize.transaction(async (t) => {
     await audit({ actorId: caller.id, action: 'brand.delete', targetType: 'brand', targetId: brand.id, studioId: brand.studioId, details: { name: brand.name, slug: brand.slug } }, t);
     await brand.destroy({ transaction: t });
   });
   siteCache.forget();
-  await Promise.all(files.map((key) => storage.delete(key)));
+  // Every key of a brand lives under its id (newKey, renditionKey): originals, renditions, version copies, PDFs, boards.
+  await storage.deleteBrandFiles(brand.id);
 }
 
 export interface MemberView {

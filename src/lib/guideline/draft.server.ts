@@ -9,7 +9,7 @@ import { sequelize } from '../db.server';
 import { ApiError } from '../http/api';
 import type { Identity } from '../identity/types';
 import { validateGuideline, type GuidelineDoc } from './document';
-import { instantiateTemplate } from './templates';
+import { instantiateTemplate, templateInstructions } from './templates';
 
 export const TEMPLATES = ['essentials', 'brand-book'] as const;
 export type TemplateName = (typeof TEMPLATES)[number];
@@ -55,8 +55,14 @@ export async function saveDraft(caller: Caller, brand: Brand, baseRevision: numb
   });
 }
 
+const readTemplate = async (name: TemplateName): Promise<unknown> => JSON.parse(await readFile(join(process.cwd(), 'templates', 'guidelines', `${name}.json`), 'utf8'));
+
 /** A starter template filled with this brand's identity (its colours, logos, faces), ready to save. */
 export async function templateDoc(name: TemplateName, identity: Identity): Promise<GuidelineDoc> {
-  const raw = JSON.parse(await readFile(join(process.cwd(), 'templates', 'guidelines', `${name}.json`), 'utf8'));
-  return checkDoc(instantiateTemplate(raw, identity));
+  return checkDoc(instantiateTemplate(await readTemplate(name), identity));
+}
+
+/** Every instruction text of every starter template, for the check before publishing. */
+export async function allTemplateInstructions(): Promise<string[]> {
+  return (await Promise.all(TEMPLATES.map(async (name) => templateInstructions(await readTemplate(name))))).flat();
 }

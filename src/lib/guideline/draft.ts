@@ -52,9 +52,17 @@ export type RestoreDecision =
   /** The server moved on since the draft was made: the designer chooses. */
   | { kind: 'conflict'; draft: StoredDraft };
 
+/** True when a document holds nothing a person typed: no blocks, or only empty paragraphs. */
+export function isBlankDoc(doc: GuidelineDoc): boolean {
+  const blocks = (doc.content ?? []) as { type?: string; content?: unknown[] }[];
+  return blocks.every((b) => b.type === 'paragraph' && !(b.content && b.content.length));
+}
+
 /** Compares a stored draft with what the server sent. */
 export function decideRestore(draft: StoredDraft | null, server: { revision: number; doc: unknown }): RestoreDecision {
   if (!draft) return { kind: 'none' };
   if (JSON.stringify(draft.doc) === JSON.stringify(server.doc)) return { kind: 'none' };
+  // A blank page kept by the browser has nothing to lose: it must never compete with a saved document (a template, say).
+  if (isBlankDoc(draft.doc)) return { kind: 'none' };
   return draft.baseRevision === server.revision ? { kind: 'restore', draft } : { kind: 'conflict', draft };
 }

@@ -2,6 +2,7 @@
 import * as z from 'zod';
 import type { ColorRole, Identity } from '../identity/types';
 import { COLOR_ROLES } from '../identity/types';
+import { contrastRatio } from '../color/contrast';
 import { validateGuideline, type GuidelineDoc } from './document';
 import { newBlockId } from './ids';
 import { colorForRole, colorsInOrder, extremes, logosInOrder, markLogo, primaryLogo } from './identity';
@@ -31,21 +32,29 @@ export class TemplateError extends Error {
 const COLOR_KEY = /(colou?rIds?|^foreground|^background)$/i;
 const LOGO_KEY = /logoIds?$/i;
 
-/** Pairs worth checking first: text on the ground, each key colour on the lightest colour, the lightest on the primary. */
+/**
+ * Pairs worth showing first: text on the ground, then each key colour with whichever extreme (lightest or darkest)
+ * it reads best against. Only pairs that reach WCAG 2.2 AA for body text (SC 1.4.3, 4.5:1) are suggested, since the
+ * block presents pairs to use; the text-on-ground pair is always kept so that a failing one is seen.
+ */
 export function suggestedPairs(identity: Identity): ContrastPair[] {
-  const { lightest } = extremes(identity);
+  const { lightest, darkest } = extremes(identity);
   const text = colorForRole(identity, 'text');
   const ground = colorForRole(identity, 'background');
-  const primary = colorForRole(identity, 'primary');
-  const candidates: [string | undefined, string | undefined][] = [[text?.id, ground?.id]];
+  const ratio = (fg?: { value: string }, bg?: { value: string }) => (fg && bg ? contrastRatio(fg.value, bg.value) : 0);
+  const candidates: [string | undefined, string | undefined, boolean][] = [[text?.id, ground?.id, true]];
   for (const c of colorsInOrder(identity)) {
-    if (c.role === 'primary' || c.role === 'secondary' || c.role === 'accent') candidates.push([c.id, lightest?.id]);
+    if (c.role !== 'primary' && c.role !== 'secondary' && c.role !== 'accent') continue;
+    candidates.push(ratio(c, lightest) >= ratio(darkest, c) ? [c.id, lightest?.id, false] : [darkest?.id, c.id, false]);
   }
-  candidates.push([lightest?.id, primary?.id]);
+  const primary = colorForRole(identity, 'primary');
+  candidates.push([lightest?.id, primary?.id, false]);
+  const byId = new Map(identity.colors.map((c) => [c.id, c]));
   const seen = new Set<string>();
   const pairs: ContrastPair[] = [];
-  for (const [foreground, background] of candidates) {
+  for (const [foreground, background, always] of candidates) {
     if (!foreground || !background || foreground === background || seen.has(`${foreground}/${background}`)) continue;
+    if (!always && ratio(byId.get(foreground), byId.get(background)) < 4.5) continue;
     seen.add(`${foreground}/${background}`);
     pairs.push({ foreground, background });
   }
@@ -103,7 +112,7 @@ export function instantiateTemplate(template: unknown, identity: Identity): Guid
     const issue = parsed.error.issues[0];
     throw new TemplateError(issue.path.join('.') || '(template)', issue.message);
   }
-  const content = parsed.data.doc.content.map((node, i) => {
+  const content = parsed.data.doc.content.map(({ instruction: _instruction, ...node }, i) => {
     const attrs = (node.attrs ?? {}) as Record<string, unknown>;
     const resolved = Object.fromEntries(
       Object.entries(attrs).map(([key, value]) => {
@@ -116,6 +125,22 @@ export function instantiateTemplate(template: unknown, identity: Identity): Guid
   const result = validateGuideline({ type: 'doc', content });
   if (!result.ok) throw new TemplateError(result.error.path, result.error.message);
   return result.doc;
+}
+
+type TextTree = { type?: string; text?: string; content?: TextTree[] };
+const paragraphTexts = (node: TextTree, out: string[]): string[] => {
+  if (node.type === 'paragraph' || node.type === 'heading') out.push((node.content ?? []).map((n) => n.text ?? '').join(''));
+  else for (const child of node.content ?? []) paragraphTexts(child, out);
+  return out;
+};
+
+/**
+ * The instruction texts a template marks with `"instruction": true` on a top-level node ("Write two or three short
+ * paragraphs…"): text meant for the designer, which the check before publishing finds if it was left in.
+ */
+export function templateInstructions(template: unknown): string[] {
+  const nodes = ((template as { doc?: { content?: unknown[] } })?.doc?.content ?? []) as (TextTree & { instruction?: unknown })[];
+  return nodes.filter((n) => n.instruction === true).flatMap((n) => paragraphTexts(n, []));
 }
 
 /** Attributes for a newly inserted block: its registry starter resolved against the identity. */

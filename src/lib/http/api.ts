@@ -1,5 +1,6 @@
 // The API's conventions: JSON in and out, one error shape, zod at the boundary.
 import type { APIContext, APIRoute } from 'astro';
+import busboy from 'busboy';
 import { z } from 'zod';
 
 export interface ApiErrorBody {
@@ -59,14 +60,44 @@ export function parseWith<T extends z.ZodType>(schema: T, value: unknown, where 
 
 const MAX_JSON_BYTES = 1_000_000;
 
-/** Read a JSON request body through a schema: malformed JSON, wrong type or unknown fields → 400. */
+const size = (bytes: number) => (bytes >= 1024 * 1024 ? `${Math.round(bytes / 1024 / 1024)} MB` : `${Math.ceil(bytes / 1024)} kB`);
+const tooLarge = (maxBytes: number) => new ApiError(413, 'too_large', `The request body is too large: at most ${size(maxBytes)} is accepted here.`);
+
+/** The request body's chunks, stopping with a 413 as soon as more than `maxBytes` arrive (chunked bodies too). */
+export async function* cappedBody(request: Request, maxBytes: number): AsyncGenerator<Uint8Array> {
+  const declared = Number(request.headers.get('content-length') ?? 0);
+  if (declared > maxBytes) throw tooLarge(maxBytes);
+  if (!request.body) return;
+  const reader = request.body.getReader();
+  let total = 0;
+  try {
+    for (;;) {
+      const { done, value } = await reader.read();
+      if (done) return;
+      total += value.byteLength;
+      // Stop pulling, without cancelling: cancelling would reset the connection before the 413 is sent.
+      if (total > maxBytes) throw tooLarge(maxBytes);
+      yield value;
+    }
+  } finally {
+    reader.releaseLock();
+  }
+}
+
+/** The whole request body as bytes, or a 413 the moment it passes `maxBytes`. */
+export async function readBody(request: Request, maxBytes: number): Promise<Buffer> {
+  const chunks: Uint8Array[] = [];
+  for await (const chunk of cappedBody(request, maxBytes)) chunks.push(chunk);
+  return Buffer.concat(chunks);
+}
+
+/** Read a JSON request body through a schema: malformed JSON, wrong type or unknown fields → 400; over the cap → 413. */
 export async function readJson<T extends z.ZodType>(request: Request, schema: T, maxBytes = MAX_JSON_BYTES): Promise<z.infer<T>> {
   const type = request.headers.get('content-type') ?? '';
   if (!type.includes('application/json')) {
     throw new ApiError(415, 'unsupported_media_type', 'Send the request body as JSON (Content-Type: application/json).');
   }
-  const text = await request.text();
-  if (Buffer.byteLength(text) > maxBytes) throw new ApiError(413, 'too_large', 'The request body is too large.');
+  const text = (await readBody(request, maxBytes)).toString('utf8');
   let value: unknown;
   try {
     value = JSON.parse(text);
@@ -101,19 +132,66 @@ export function idParam(value: string | undefined, what = 'That brand'): string 
 export const methodNotAllowed: APIRoute = ({ request }) =>
   errorResponse(new ApiError(405, 'method_not_allowed', `${request.method} is not offered here.`));
 
-/** Read a multipart form, refusing other bodies and anything over `maxBytes` before it is parsed. */
-export async function readForm(request: Request, maxBytes: number): Promise<FormData> {
+export interface FormLimits {
+  /** The most one file may hold; the default is the whole request's cap. */
+  maxFileBytes?: number;
+  /** The error for a file over maxFileBytes (default: 413 too_large), raised as soon as it is passed. */
+  fileTooLarge?: (filename: string) => ApiError;
+}
+
+/**
+ * Read a multipart form as it streams in: 413 once the request passes `maxBytes`, and an error as soon as one
+ * file passes `maxFileBytes`, so no oversized body is ever held whole.
+ */
+export async function readForm(request: Request, maxBytes: number, limits: FormLimits = {}): Promise<FormData> {
   const type = request.headers.get('content-type') ?? '';
   if (!type.includes('multipart/form-data')) {
     throw new ApiError(415, 'unsupported_media_type', 'Send files as multipart/form-data, in a field named "file".');
   }
-  const length = Number(request.headers.get('content-length') ?? 0);
-  if (length > maxBytes) throw new ApiError(413, 'too_large', `The upload is larger than ${Math.round(maxBytes / 1024 / 1024)} MB.`);
+  const maxFileBytes = limits.maxFileBytes ?? maxBytes;
+  const fileTooLarge = limits.fileTooLarge ?? (() => new ApiError(413, 'too_large', `The file is too large: at most ${size(maxFileBytes)} is accepted here.`));
+  const malformed = () => new ApiError(400, 'malformed_form', 'The upload could not be read as a form.');
+  let parser: busboy.Busboy;
   try {
-    return await request.formData();
+    parser = busboy({ headers: { 'content-type': type }, limits: { fileSize: maxFileBytes, fields: 100, fieldSize: 64 * 1024, parts: 200 } });
   } catch {
-    throw new ApiError(400, 'malformed_form', 'The upload could not be read as a form.');
+    throw malformed();
   }
+  const form = new FormData();
+  const pending: Promise<void>[] = [];
+  let oversized: string | null = null;
+  parser.on('field', (name, value) => form.append(name, value));
+  parser.on('file', (name, stream, info) => {
+    const chunks: Uint8Array<ArrayBuffer>[] = [];
+    stream.on('data', (chunk: Buffer) => chunks.push(new Uint8Array(chunk)));
+    stream.on('limit', () => (oversized ??= info.filename ?? 'upload'));
+    // A refused upload destroys the parser, which errors its open file: handled here, or the process would stop.
+    stream.on('error', () => {});
+    pending.push(new Promise((done) => stream.once('close', () => {
+      form.append(name, new File(chunks, info.filename ?? 'upload', { type: info.mimeType }));
+      done();
+    })));
+  });
+  const finished = new Promise<void>((resolve, reject) => {
+    parser.on('close', resolve);
+    parser.on('error', reject);
+  });
+  finished.catch(() => {});
+  try {
+    for await (const chunk of cappedBody(request, maxBytes)) {
+      if (!parser.write(chunk)) await Promise.race([new Promise((r) => parser.once('drain', r)), finished]);
+      if (oversized) throw fileTooLarge(oversized);
+    }
+    parser.end();
+    await finished;
+    await Promise.all(pending);
+    if (oversized) throw fileTooLarge(oversized);
+  } catch (err) {
+    parser.destroy();
+    if (err instanceof ApiError) throw err;
+    throw malformed();
+  }
+  return form;
 }
 
 /** The single file in a form's "file" field, or a 400 saying it is missing. */

@@ -28,7 +28,9 @@ export async function pdfResponse(context: APIContext, number: number | null): P
     });
   }
   const { status } = result;
-  if (wantsJson) return Response.json(status, { status: status.state === 'failed' ? 500 : 202 });
+  const failedStatus = status.printerMissing ? 503 : 500;
+  if (wantsJson) return Response.json(status, { status: status.state === 'failed' ? failedStatus : 202 });
+  if (status.printerMissing) return simplePage(503, 'PDFs cannot be printed on this server', status.error ?? 'The browser that prints PDFs is missing.');
   if (status.state === 'failed') return simplePage(500, 'The PDF could not be made', `Plumbline could not print this version: ${status.error ?? 'unknown error'}. Try again in a minute.`);
   return new Response(progressPage(access.brand.name, access.version.number, size), {
     status: 202,

@@ -15,22 +15,46 @@ export type PaperSize = (typeof PAPER_SIZES)[number];
 const QUEUE = 'pdf-export';
 
 let browser: Promise<Browser> | null = null;
+/** The last time Chromium failed to start, remembered for a minute so readers get the reason at once. */
+let launchFailure: { at: number; message: string } | null = null;
+const LAUNCH_FAILURE_MS = 60_000;
+
+/** Why this server cannot print PDFs right now, in words for the reader; null when it can. */
+export function pdfPrinterProblem(): string | null {
+  if (!existsSync(CHROMIUM_PATH)) {
+    return (
+      `This server cannot print PDFs: the browser that prints them, Chromium (Debian's "chromium" package), is not installed at ${CHROMIUM_PATH}. ` +
+      'Whoever runs this Plumbline can install it by running `npm start` once as root, or with `apt-get install chromium`.'
+    );
+  }
+  if (launchFailure && Date.now() - launchFailure.at < LAUNCH_FAILURE_MS) {
+    return `This server cannot print PDFs: the browser that prints them (Chromium at ${CHROMIUM_PATH}) did not start: ${launchFailure.message}`;
+  }
+  return null;
+}
 
 /** The one warm Chromium of this process, started on first use. */
 export function warmBrowser(): Promise<Browser> {
-  if (!existsSync(CHROMIUM_PATH)) {
-    throw new Error(`Chromium was not found at ${CHROMIUM_PATH}. Install Debian's "chromium" package (apt-get install chromium) or set CHROMIUM_PATH.`);
-  }
+  const problem = pdfPrinterProblem();
+  if (problem) return Promise.reject(new Error(problem));
   browser ??= puppeteer
     .launch({
       executablePath: CHROMIUM_PATH,
       headless: true,
       args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-dev-shm-usage'],
     })
-    .then((b) => {
-      b.on('disconnected', () => (browser = null));
-      return b;
-    });
+    .then(
+      (b) => {
+        launchFailure = null;
+        b.on('disconnected', () => (browser = null));
+        return b;
+      },
+      (err: Error) => {
+        browser = null;
+        launchFailure = { at: Date.now(), message: String(err.message).split('\n')[0].slice(0, 300) };
+        throw new Error(pdfPrinterProblem() ?? err.message);
+      },
+    );
   return browser;
 }
 
@@ -95,6 +119,8 @@ export interface PdfStatus {
   state: PdfExport['state'];
   progress: number;
   error: string | null;
+  /** True when the server has no working browser to print with (the reason is in `error`). */
+  printerMissing?: boolean;
 }
 
 /** The PDF of a version at a size: its bytes when ready, otherwise its progress (queued on first ask). */
@@ -104,7 +130,10 @@ export async function versionPdf(version: GuidelineVersion, size: PaperSize): Pr
     const pdf = await storage.get(job.storageKey);
     if (pdf) return { pdf };
   }
-  // A failure is shown for a minute (say, Chromium missing), then the next ask tries again.
+  // No browser to print with: say so now, naming it, instead of queueing a job that can only fail.
+  const problem = pdfPrinterProblem();
+  if (problem) return { status: { state: 'failed', progress: 0, error: problem, printerMissing: true } };
+  // A failure is shown for a minute, then the next ask tries again.
   const stale = Date.now() - job.updatedAt.getTime() > 60_000;
   const retry = (job.state === 'failed' && stale) || (job.state === 'done' && !created);
   if (created || retry) {

@@ -1,6 +1,6 @@
 // Who may read a published guideline site: members by role, or a visitor holding that brand's share link.
 import type { APIContext } from 'astro';
-import { Brand, type GuidelineVersion } from '../../../db/models';
+import { Brand, BrandFormerSlug, type GuidelineVersion } from '../../../db/models';
 import { roleOn } from '../auth/access.server';
 import { can } from '../auth/policy';
 import type { BrandRole } from '../auth/roles';
@@ -29,20 +29,41 @@ export interface SiteAccess {
   isEditor: boolean;
 }
 
+const escapeHtml = (text: string) => text.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
+
+/** A small plain page; title and message are text (escaped here), never HTML. */
 const page = (status: number, title: string, message: string) =>
   new Response(
-    `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1"><title>${title}</title>` +
+    `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1"><title>${escapeHtml(title)}</title>` +
       `<style>body{font-family:system-ui,sans-serif;background:#f8f6f2;color:#211e1a;display:grid;place-items:center;min-height:100vh;margin:0}main{max-width:32rem;padding:2rem}h1{font-size:1.6rem}p{color:#57514a;line-height:1.5}a{color:#4b3a8c}</style></head>` +
-      `<body><main><h1>${title}</h1><p>${message}</p></main></body></html>`,
+      `<body><main><h1>${escapeHtml(title)}</h1><p>${escapeHtml(message)}</p></main></body></html>`,
     { status, headers: { 'content-type': 'text/html; charset=utf-8', 'cache-control': 'no-store' } },
   );
 
 export const notFoundPage = () => page(404, 'Nothing here', 'This guideline site does not exist, or you do not have access to it.');
 
+/** The brand's current slug when `slug` is one of its former addresses. */
+async function formerAddress(slug: string): Promise<string | null> {
+  const former = await BrandFormerSlug.findByPk(slug, { attributes: ['brandId'] });
+  if (!former) return null;
+  return (await Brand.findByPk(former.brandId, { attributes: ['slug'] }))?.slug ?? null;
+}
+
+/** A permanent redirect from /b/<old>/… to /b/<new>/…, path and query kept. */
+function movedTo(url: URL, from: string, to: string): Response {
+  const rest = url.pathname.slice(`/b/${from}`.length);
+  return new Response(null, { status: 301, headers: { location: `/b/${encodeURIComponent(to)}${rest}${url.search}`, 'cache-control': 'no-store' } });
+}
+
 /** The version a visitor may read at /b/:slug[/v/:number], or the response to send instead. */
 export async function siteAccess(Astro: Pick<APIContext, 'locals' | 'url' | 'redirect' | 'cookies'>, slug: string, number: number | null): Promise<SiteAccess | Response> {
   const { user, shareGrant } = Astro.locals;
   const brand = await remembered(siteCache.brands, slug, () => Brand.findOne({ where: { slug } }));
+  if (!brand) {
+    // A former address of a renamed brand: send the visitor on to the current one, which checks access as usual.
+    const moved = await formerAddress(slug);
+    if (moved) return movedTo(Astro.url, slug, moved);
+  }
   const role = brand && user ? await remembered(siteCache.roles, `${user.id}:${brand.id}`, () => roleOn(user.id, brand)) : null;
   const share = brand && shareGrant?.brandId === brand.id ? shareGrant : null;
 

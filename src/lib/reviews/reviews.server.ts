@@ -1,5 +1,6 @@
 // Reviews of the working draft: requests to reviewers, comments anchored to a block id, replies, decisions.
 import { Brand, GuidelineDraft } from '../../../db/models';
+import { blockLabels } from '../guideline/block-label';
 import { ReviewComment, ReviewRequest, type ReviewStatus } from '../../../db/models/collaboration';
 import { audit } from '../audit.server';
 import type { Caller } from '../auth/access.server';
@@ -33,6 +34,8 @@ export interface CommentView {
   resolvedBy: string | null;
   /** Whether the block is still in the current draft (false: its block was removed since). */
   blockPresent: boolean;
+  /** A reader's name for the block ("Colour palette in “Colour”"), or null when the block was removed. */
+  blockLabel: string | null;
 }
 
 export interface ReviewSummary {
@@ -44,10 +47,10 @@ export interface ReviewSummary {
 const brandAudit = (caller: Caller, brand: Brand, action: string, targetType: string, targetId: string, details: Record<string, unknown> = {}) =>
   ({ actorId: caller.id, action, targetType, targetId, brandId: brand.id, studioId: brand.studioId, details });
 
-async function draftOf(brandId: string): Promise<{ revision: number; blockIds: Set<string> }> {
+async function draftOf(brandId: string): Promise<{ revision: number; blockIds: Set<string>; labels: Map<string, string> }> {
   const draft = await GuidelineDraft.findByPk(brandId);
   const ids = (draft?.doc.content ?? []).map((n) => (n as { attrs?: { id?: unknown } }).attrs?.id).filter((x): x is string => typeof x === 'string');
-  return { revision: draft?.revision ?? 0, blockIds: new Set(ids) };
+  return { revision: draft?.revision ?? 0, blockIds: new Set(ids), labels: blockLabels(draft?.doc) };
 }
 
 async function reviewViews(rows: ReviewRequest[]): Promise<ReviewView[]> {
@@ -139,6 +142,7 @@ async function commentViews(brandId: string, rows: ReviewComment[]): Promise<Com
     resolvedAt: c.resolvedAt?.toISOString() ?? null,
     resolvedBy: people.get(c.resolvedById ?? '')?.name ?? null,
     blockPresent: draft.blockIds.has(c.blockId),
+    blockLabel: draft.labels.get(c.blockId) ?? null,
   }));
 }
 

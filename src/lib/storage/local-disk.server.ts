@@ -1,7 +1,7 @@
 // Files on local disk under FILES_DIR (default .data/files), outside public/.
 import { mkdir, readFile, rm, writeFile, rename } from 'node:fs/promises';
 import { dirname, join, resolve } from 'node:path';
-import { SAFE_KEY, type FileStorage } from './storage';
+import { SAFE_BRAND_ID, SAFE_KEY, type FileStorage } from './storage';
 
 export class LocalDiskStorage implements FileStorage {
   private readonly root: string;
@@ -37,5 +37,10 @@ export class LocalDiskStorage implements FileStorage {
 
   async delete(key: string): Promise<void> {
     await rm(this.path(key), { force: true });
+  }
+
+  async deleteBrandFiles(brandId: string): Promise<void> {
+    if (!SAFE_BRAND_ID.test(brandId)) throw new Error(`refusing an unexpected brand id: ${brandId}`);
+    await rm(join(this.root, brandId), { recursive: true, force: true });
   }
 }

@@ -12,6 +12,8 @@ export interface FileStorage {
   get(key: string): Promise<Buffer | null>;
   /** Remove a key; a missing key is not an error. */
   delete(key: string): Promise<void>;
+  /** Remove every file kept for a brand (all its keys start with its id); none left is not an error. */
+  deleteBrandFiles(brandId: string): Promise<void>;
 }
 
 /** A generated, unguessable key inside a brand's folder, keeping only a safe extension. */
@@ -19,5 +21,8 @@ export function newKey(brandId: string, kind: string, extension: string): string
   const ext = extension.replace(/[^a-z0-9]/gi, '').toLowerCase().slice(0, 8);
   return `${brandId}/${kind}/${crypto.randomUUID()}${ext ? `.${ext}` : ''}`;
 }
+
+/** A brand's folder name: its UUID, nothing that could climb out of the store. */
+export const SAFE_BRAND_ID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/;
 
 export const SAFE_KEY = /^[0-9a-f-]{36}\/[a-z-]+\/[0-9a-f-]{36}(\.[a-z0-9]{1,8})?$/;

@@ -7,6 +7,7 @@ const everyone = only(200, ['owner', 'editor', 'reviewer', 'partner', 'viewer'])
 export default [
   { method: 'GET', file: 'brands/[id]/versions/index.ts', path: (f) => `${b(f)}/versions`, expect: everyone },
   { method: 'POST', file: 'brands/[id]/versions/index.ts', path: (f) => `${b(f)}/versions`, body: () => ({ note: 'Matrix publish' }), expect: only(201, ['owner', 'editor']) },
+  { method: 'GET', file: 'brands/[id]/versions/check.ts', path: (f) => `${b(f)}/versions/check`, expect: only(200, ['owner', 'editor']) },
   { method: 'GET', file: 'brands/[id]/versions/compare.ts', path: (f) => `${b(f)}/versions/compare?from=1&to=draft`, expect: only(200, ['owner', 'editor', 'reviewer']) },
   { method: 'GET', file: 'brands/[id]/share-links/index.ts', path: (f) => `${b(f)}/share-links`, expect: only(200, ['owner']) },
   { method: 'POST', file: 'brands/[id]/share-links/index.ts', path: (f) => `${b(f)}/share-links`, body: () => ({ allowDownloads: true }), expect: only(201, ['owner']) },

@@ -2,6 +2,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { api } from '../../../lib/client/api';
+import { When } from '../../ui/When';
 
 interface Entry {
   id: string;
@@ -76,7 +77,7 @@ export function DownloadLog({ brandId }: { brandId: string }) {
           <tbody>
             {log.data.downloads.map((d) => (
               <tr key={d.id} className="border-b border-rule last:border-0">
-                <td className="whitespace-nowrap px-6 py-3 text-ink-soft">{new Date(d.at).toLocaleString()}</td>
+                <td className="whitespace-nowrap px-6 py-3 text-ink-soft"><When value={d.at} as="dateTime" /></td>
                 <td className="px-6 py-3">{d.who.type === 'member' ? <><span className="font-semibold">{d.who.name}</span> <span className="text-ink-soft">{d.who.email}</span></> : d.who.type === 'share-link' ? 'Share link' : 'Unknown'}</td>
                 <td className="px-6 py-3">{d.kind === 'bundle' ? `Bundle of ${d.details.assetIds?.length ?? 0} assets (${d.details.entries ?? 0} files)` : <><span className="font-semibold">{d.asset?.name}</span> <span className="font-mono text-xs text-ink-soft">{d.details.filename}</span></>}</td>
               </tr>

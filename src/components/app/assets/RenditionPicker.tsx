@@ -50,6 +50,13 @@ export function RenditionPicker({ asset, brandColors }: { asset: ShelfAsset; bra
   const print = preset === 'print' || (!preset && (format === 'tiff' || format === 'pdf' || format === 'eps'));
   const needsWidth = preset === '' ? format !== 'svg' && !vectorPrint : preset === 'social-avatar' || preset === 'print';
   const id = (s: string) => `${s}-${asset.id}`;
+  // What the button gives, in words: "PNG, 1024 px wide, on a transparent ground".
+  const describe = () => {
+    if (preset) return `${PRESET_INFO[preset].label}${needsWidth && widthOk ? `, ${width} px wide` : ''}.`;
+    const parts = [format === 'svg' ? 'SVG, scales to any size' : `${format.toUpperCase()}${widthOk ? `, ${width} px wide` : ''}`];
+    parts.push(background === 'transparent' && format !== 'jpg' && format !== 'tiff' ? 'on a transparent ground' : `on ${background === 'transparent' ? 'white' : brandColors.find((c) => c.hex === background)?.name ?? background}`);
+    return `${parts.join(', ')}.`;
+  };
 
   return (
     <form className="space-y-3 rounded-md bg-paper p-3 text-sm" onSubmit={(e) => e.preventDefault()} aria-label={`Rendition of ${asset.name}`}>
@@ -126,7 +133,7 @@ export function RenditionPicker({ asset, brandColors }: { asset: ShelfAsset; bra
       </div>
       {print && <p className="rounded bg-warn-wash p-2 text-warn">{PRINT_CAUTION}{vectorPrint ? ` ${VECTOR_PRINT_NOTE}` : ''}</p>}
       <a className={`btn-primary px-3 py-1.5 ${needsWidth && !widthOk ? 'pointer-events-none opacity-60' : ''}`} href={href} aria-disabled={needsWidth && !widthOk}>Download</a>
-      <p className="break-all font-mono text-xs text-ink-faint">{href.replace('&download=1', '').replace('?download=1', '')}</p>
+      <p className="text-xs text-ink-soft">{describe()}</p>
     </form>
   );
 }

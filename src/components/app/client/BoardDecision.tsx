@@ -3,6 +3,7 @@ import { useState } from 'react';
 import { api, type ApiClientError } from '../../../lib/client/api';
 import type { PublicBoard } from '../../../lib/moodboards/moodboards.server';
 import { BoardPiece } from './BoardPiece';
+import { When } from '../../ui/When';
 
 type Verdict = 'keep' | 'drop';
 
@@ -44,7 +45,7 @@ export default function BoardDecision({ token, initial }: { token: string; initi
       {board.intro && <p className="mt-3 max-w-2xl whitespace-pre-line text-ink-soft">{board.intro}</p>}
       {!open && last && (
         <p className="mt-6 rounded-md bg-plumb-wash px-4 py-3 text-plumb-deep" role="status">
-          {last.outcome === 'approved' ? 'Direction approved' : 'Changes asked for'} by {last.decidedBy} on {new Date(last.decidedAt).toLocaleDateString()}: {last.kept} kept, {last.dropped} dropped. Thank you.
+          {last.outcome === 'approved' ? 'Direction approved' : 'Changes asked for'} by {last.decidedBy} on <When value={last.decidedAt} as="long" />: {last.kept} kept, {last.dropped} dropped. Thank you.
         </p>
       )}
       <ul className="mt-8 grid gap-6 sm:grid-cols-2 lg:grid-cols-3" aria-label="Pieces on the board">

@@ -3,6 +3,8 @@ import { useEffect, useRef, useState } from 'react';
 import { ApiClientError, api } from '../../../lib/client/api';
 import { ANSWER_LIMITS, type Question } from '../../../lib/briefs/questionnaire';
 import type { PublicBrief } from '../../../lib/briefs/briefs.server';
+import { When } from '../../ui/When';
+import { formatDateTime, formatTime, SITE_LOCALE } from '../../../lib/format';
 
 type Answers = Record<string, string | string[]>;
 type SaveState = { kind: 'idle' | 'saving' | 'saved' | 'error'; text: string };
@@ -64,7 +66,7 @@ function Field({ q, value, onChange, disabled, error }: { q: Question; value: st
 export default function BriefForm({ token, brief }: { token: string; brief: PublicBrief }) {
   const [answers, setAnswers] = useState<Answers>(brief.answers);
   const [submittedAt, setSubmittedAt] = useState(brief.submittedAt);
-  const [save, setSave] = useState<SaveState>({ kind: 'idle', text: brief.savedAt ? `Last saved ${new Date(brief.savedAt).toLocaleString()}` : 'Answers are saved as you type.' });
+  const [save, setSave] = useState<SaveState>({ kind: 'idle', text: brief.savedAt ? `Last saved ${formatDateTime(brief.savedAt, SITE_LOCALE)}` : 'Answers are saved as you type.' });
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [submitError, setSubmitError] = useState<string | null>(null);
   const pending = useRef<Answers>({});
@@ -80,7 +82,7 @@ export default function BriefForm({ token, brief }: { token: string; brief: Publ
     setSave({ kind: 'saving', text: 'Saving…' });
     try {
       await api(url, { method: 'PUT', body: { answers: patch } });
-      setSave({ kind: 'saved', text: `Saved at ${new Date().toLocaleTimeString()}` });
+      setSave({ kind: 'saved', text: `Saved at ${formatTime(Date.now())}` });
       setErrors((e) => Object.fromEntries(Object.entries(e).filter(([k]) => !(k in patch))));
       return true;
     } catch (err) {
@@ -133,7 +135,7 @@ export default function BriefForm({ token, brief }: { token: string; brief: Publ
       <p className="mt-3 max-w-2xl text-ink-soft">Hello {brief.contactName}. {brief.questionnaire.intro}</p>
       {done ? (
         <p className="mt-6 rounded-md bg-plumb-wash px-4 py-3 text-plumb-deep" role="status">
-          Thank you — your answers were sent on {new Date(submittedAt!).toLocaleDateString()}. They are shown below for your records.
+          Thank you — your answers were sent on <When value={submittedAt!} as="long" />. They are shown below for your records.
         </p>
       ) : (
         <p className={`sticky top-0 z-10 mt-6 rounded-md px-4 py-2 text-sm ${save.kind === 'error' ? 'bg-danger-wash text-danger' : 'bg-paper text-ink-soft'}`} role="status" aria-live="polite">

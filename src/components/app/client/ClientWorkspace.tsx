@@ -8,6 +8,7 @@ import type { DirectionStatus } from '../../../lib/moodboards/direction.server';
 import type { CommentView, ReviewSummary, ReviewView } from '../../../lib/reviews/reviews.server';
 import { QueryRoot } from '../QueryRoot';
 import { BoardPiece } from './BoardPiece';
+import { formatDate } from '../../../lib/format';
 
 export interface ClientCaps {
   manageMembers: boolean;
@@ -22,7 +23,7 @@ function Notice({ note }: { note: Note }) {
   return <p role={note.kind === 'error' ? 'alert' : 'status'} className={`mt-3 rounded-md px-3 py-2 text-sm ${note.kind === 'error' ? 'bg-danger-wash text-danger' : 'bg-plumb-wash text-plumb-deep'}`}>{note.text}</p>;
 }
 const mailed = (r: { mailed?: boolean; mailProblem?: string }, ok: string): Note => (r.mailed === false ? { kind: 'error', text: `Saved, but ${r.mailProblem ?? 'the e-mail was not sent.'}` } : { kind: 'ok', text: ok });
-const date = (iso: string | null) => (iso ? new Date(iso).toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric' }) : '');
+const date = (iso: string | null) => (iso ? formatDate(iso) : '');
 
 function Panel({ id, title, intro, children }: { id: string; title: string; intro: string; children: ReactNode }) {
   return (
@@ -307,13 +308,13 @@ function Reviews({ brandId, caps }: { brandId: string; caps: ClientCaps }) {
   return (
     <Panel id="reviews" title="Reviews" intro="Reviewers read the working draft, comment on its blocks, and approve it or ask for changes.">
       <Notice note={note} />
-      {reviews.data && <p className="mt-3 text-sm text-ink-soft">Draft revision {reviews.data.draftRevision} · {reviews.data.openComments} open comment thread{reviews.data.openComments === 1 ? '' : 's'}</p>}
+      {reviews.data && <p className="mt-3 text-sm text-ink-soft">{reviews.data.openComments} open comment thread{reviews.data.openComments === 1 ? '' : 's'}</p>}
       {reviews.isError && <p className="mt-4 text-danger" role="alert">{reviews.error.message}</p>}
       {reviews.data?.reviews.length === 0 && <p className="mt-4 text-ink-soft">No review yet. {caps.edit ? 'When the draft is ready, ask the brand’s reviewers below.' : ''}</p>}
       <ul className="mt-2 divide-y divide-rule">
         {reviews.data?.reviews.map((r) => (
           <li key={r.id} id={`review-${r.id}`} className="py-3">
-            <p className="font-semibold">Revision {r.revision} · <span className={r.status === 'approved' ? 'text-ok' : r.status === 'changes_requested' ? 'text-warn' : 'text-ink-soft'}>{REVIEW_STATUS[r.status]}</span></p>
+            <p className="font-semibold">Review of the draft as of {date(r.requestedAt)} · <span className={r.status === 'approved' ? 'text-ok' : r.status === 'changes_requested' ? 'text-warn' : 'text-ink-soft'}>{REVIEW_STATUS[r.status]}</span></p>
             <p className="text-sm text-ink-soft">Asked by {r.requestedBy ?? 'a former member'} on {date(r.requestedAt)}{r.message ? `: “${r.message}”` : ''}</p>
             {r.decidedAt && <p className="text-sm">{r.decidedBy} decided on {date(r.decidedAt)}{r.decisionNote ? `: “${r.decisionNote}”` : ''}</p>}
             {caps.decide && r.status === 'open' && (
@@ -337,7 +338,7 @@ function Reviews({ brandId, caps }: { brandId: string; caps: ClientCaps }) {
         <ul className="mt-2 space-y-3">
           {threads.map((t) => (
             <li key={t.id} className={`rounded-lg border border-rule p-3 ${t.resolvedAt ? 'opacity-70' : ''}`}>
-              <p className="text-xs text-ink-faint">On block <span className="font-mono">{t.blockId}</span>{t.blockPresent ? '' : ' (since removed)'} · revision {t.revision}{t.resolvedAt ? ` · resolved by ${t.resolvedBy}` : ''}</p>
+              <p className="text-xs text-ink-soft">{t.blockPresent ? `On ${t.blockLabel ?? 'a block'}` : 'On a block removed since'} · {date(t.createdAt)}{t.resolvedAt ? ` · resolved by ${t.resolvedBy}` : ''}</p>
               {[t, ...(comments.data?.comments ?? []).filter((c) => c.parentId === t.id)].map((c) => (
                 <p key={c.id} className={`mt-1 text-sm ${c.parentId ? 'ml-4 border-l-2 border-rule pl-3' : ''}`}><strong>{c.author.name}</strong> {c.body}</p>
               ))}

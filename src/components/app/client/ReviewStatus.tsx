@@ -3,6 +3,7 @@ import { useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/client/api';
 import type { ReviewSummary, ReviewView } from '../../../lib/reviews/reviews.server';
 import { QueryRoot } from '../QueryRoot';
+import { formatDate } from '../../../lib/format';
 
 function Status({ brandId }: { brandId: string }) {
   const q = useQuery({ queryKey: ['reviews', brandId], queryFn: () => api<{ reviews: ReviewView[] } & ReviewSummary>(`/api/brands/${brandId}/reviews`) });
@@ -12,9 +13,9 @@ function Status({ brandId }: { brandId: string }) {
   const tone = latest?.status === 'approved' && latest.revision === draftRevision && openComments === 0 ? 'bg-ok/10 text-ok' : 'bg-warn-wash text-warn';
   let text: string;
   if (!latest) text = 'No review yet: the draft has not been approved by a reviewer.';
-  else if (latest.status === 'open') text = `A review of revision ${latest.revision} is waiting for a decision.`;
-  else if (latest.status === 'approved') text = `${latest.decidedBy ?? 'A reviewer'} approved revision ${latest.revision}${latest.revision === draftRevision ? '' : ` (the draft has changed since: it is now revision ${draftRevision})`}.`;
-  else text = `${latest.decidedBy ?? 'A reviewer'} asked for changes to revision ${latest.revision}${latest.decisionNote ? `: “${latest.decisionNote}”` : '.'}`;
+  else if (latest.status === 'open') text = `A review of the draft, asked for on ${formatDate(latest.requestedAt)}, is waiting for a decision.`;
+  else if (latest.status === 'approved') text = `${latest.decidedBy ?? 'A reviewer'} approved the draft${latest.decidedAt ? ` on ${formatDate(latest.decidedAt)}` : ''}${latest.revision === draftRevision ? '' : ' (it has been changed since)'}.`;
+  else text = `${latest.decidedBy ?? 'A reviewer'} asked for changes to the draft${latest.decisionNote ? `: “${latest.decisionNote}”` : '.'}`;
   return (
     <div className={`rounded-md px-4 py-3 text-sm ${tone}`} role="status" aria-label="Review status">
       <p className="font-semibold">{text}</p>

@@ -1,6 +1,7 @@
 // Shown on an empty draft: start the guidelines from a starter template filled with the brand's identity.
 import { useState } from 'react';
 import { api } from '../../../lib/client/api';
+import { clearDraft } from '../../../lib/guideline/draft';
 
 const CHOICES = [
   {
@@ -23,6 +24,8 @@ export default function TemplatePicker({ brandId, revision }: { brandId: string;
     setError(null);
     try {
       await api(`/api/brands/${brandId}/guideline/template`, { method: 'POST', body: { template, baseRevision: revision } });
+      // The blank page this browser kept is replaced by the template on the server: nothing of it is worth restoring.
+      clearDraft(window.localStorage, brandId);
       location.reload();
     } catch (err) {
       setError((err as Error).message);

@@ -12,6 +12,7 @@ import { TYPEFACE_ROLES, type Identity, type IdentityTypeface, type TypefaceRole
 import { SCALE_RATIOS } from '../../../lib/type/scale';
 import { SHIPPED_FONTS } from '../../../lib/type/shipped-fonts';
 import { Caution, IdentityRoot, LoadState, messageOf, Notice, uploadWithProgress, useIdentity, useRefreshIdentity } from './shared';
+import { When } from '../../ui/When';
 
 const ROLE_LABEL: Record<TypefaceRole, string> = { heading: 'Headings', body: 'Body text', accent: 'Accent' };
 const SPECIMEN = 'Quiet harbours, bright kites & 24 jars of quince jam.';
@@ -122,7 +123,7 @@ function TypefaceCard({ brandId, face, canEdit, onNotice }: { brandId: string; f
               <span>
                 <span className="font-semibold">The licence allows this font on the web.</span>{' '}
                 {face.licence.confirmed
-                  ? `Confirmed${face.licence.confirmedAt ? ` on ${new Date(face.licence.confirmedAt).toLocaleDateString('en-GB')}` : ''}: published pages serve this font.`
+                  ? <>Confirmed{face.licence.confirmedAt ? <> on <When value={face.licence.confirmedAt} /></> : ''}: published pages serve this font.</>
                   : 'Until this is ticked, published pages show the fallback fonts instead.'}
               </span>
             </label>

@@ -3,19 +3,52 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState, type ReactNode } from 'react';
 import { api } from '../../../lib/client/api';
 import type { ShareLinkView } from '../../../lib/publishing/share-links.server';
+import type { Finding, FindingCode } from '../../../lib/publishing/preflight';
 import { QueryRoot } from '../QueryRoot';
+import { When } from '../../ui/When';
+import { formatDate } from '../../../lib/format';
 
 interface Version { number: number; publishedAt: string; note: string; author: { name: string | null } }
 interface Compare { summary: string[] }
 type ShareLink = ShareLinkView;
 
-const when = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit' });
 
 function Card({ title, children, id }: { title: string; children: ReactNode; id: string }) {
   return (
     <section className="panel" aria-labelledby={id}>
       <h2 id={id} className="border-b border-rule px-6 py-4 text-lg font-bold">{title}</h2>
       <div className="px-6 py-5">{children}</div>
+    </section>
+  );
+}
+
+const FINDING_TITLES: Record<FindingCode, string> = {
+  template_text: 'Template text left in',
+  image_placeholder: 'Stand-in image',
+  missing_alt: 'Missing alternative text',
+  contrast_below_claim: 'Contrast below the claimed level',
+  font_unlicensed: 'Font licence not confirmed',
+  file_not_approved: 'File not approved',
+  file_retired: 'Retired file',
+};
+
+/** The check before publishing, as a list the designer works through; each item leads to its block in the editor. */
+function Preflight({ brandId, pending, error, findings }: { brandId: string; pending: boolean; error: string | null; findings: Finding[] }) {
+  if (pending) return <p className="text-sm text-ink-soft" role="status">Checking the draft before publishing…</p>;
+  if (error) return <p className="text-sm text-danger" role="alert">The check before publishing could not run: {error}</p>;
+  if (findings.length === 0) return <p className="rounded-md bg-ok/10 px-3 py-2 text-sm text-ok" role="status">Checked: no template text, stand-in images, missing alt text, low contrast, unlicensed fonts or unapproved files.</p>;
+  return (
+    <section className="rounded-md border border-warn/40 bg-warn-wash px-4 py-3" aria-labelledby="preflight-title">
+      <h3 id="preflight-title" className="text-sm font-semibold text-warn">{findings.length} thing{findings.length === 1 ? '' : 's'} to look at before publishing</h3>
+      <ul className="mt-2 space-y-2 text-sm">
+        {findings.map((f, i) => (
+          <li key={i}>
+            <span className="font-semibold text-ink">{FINDING_TITLES[f.code]}</span>
+            <span className="text-ink-soft"> · {f.blockId ? <a className="underline" href={`/app/brands/${brandId}/guidelines#block-${f.blockId}`}>{f.where}</a> : f.code === 'font_unlicensed' ? <a className="underline" href={`/app/brands/${brandId}/identity#typefaces`}>{f.where}</a> : f.where}</span>
+            <p className="text-ink">{f.message}</p>
+          </li>
+        ))}
+      </ul>
     </section>
   );
 }
@@ -28,13 +61,22 @@ function Publish({ brandId, canPublish, latest }: { brandId: string; canPublish:
     enabled: latest !== null,
     queryFn: () => api<Compare>(`/api/brands/${brandId}/versions/compare?from=${latest}&to=draft`),
   });
+  const [anyway, setAnyway] = useState(false);
+  const check = useQuery({
+    queryKey: ['preflight', brandId],
+    enabled: canPublish,
+    queryFn: () => api<{ findings: Finding[] }>(`/api/brands/${brandId}/versions/check`),
+  });
+  const findings = check.data?.findings ?? [];
   const publish = useMutation({
     mutationFn: () => api<{ version: Version }>(`/api/brands/${brandId}/versions`, { method: 'POST', body: { note } }),
     onSuccess: () => {
       setNote('');
+      setAnyway(false);
       return queryClient.invalidateQueries();
     },
   });
+  const blocked = findings.length > 0 && !anyway;
   return (
     <Card title="Publish a version" id="publish-title">
       <h3 className="text-sm font-semibold text-ink">{latest === null ? 'Nothing is published yet' : `Changes since version ${latest}`}</h3>
@@ -60,9 +102,16 @@ function Publish({ brandId, canPublish, latest }: { brandId: string; canPublish:
             <textarea id="version-note" className="field min-h-20" value={note} maxLength={2000} onChange={(e) => setNote(e.target.value)} placeholder="e.g. New secondary palette and a larger minimum size for the mark" />
             <p className="hint">Readers see this note beside the version; people who follow the brand get it by e-mail.</p>
           </div>
+          <Preflight brandId={brandId} pending={check.isPending} error={check.isError ? check.error.message : null} findings={findings} />
+          {findings.length > 0 && (
+            <label className="flex items-start gap-2 text-sm">
+              <input type="checkbox" className="mt-1" checked={anyway} onChange={(e) => setAnyway(e.target.checked)} />
+              <span>I have looked at these and want to publish anyway. <span className="text-ink-soft">Say why in the note above; the audit trail keeps what was still open.</span></span>
+            </label>
+          )}
           {publish.isError && <p role="alert" className="rounded-md bg-danger-wash px-3 py-2 text-sm text-danger">{publish.error.message}</p>}
           {publish.isSuccess && <p role="status" className="text-sm text-ok">Version {publish.data.version.number} is live.</p>}
-          <button className="btn-primary" disabled={publish.isPending || note.trim() === ''}>{publish.isPending ? 'Publishing…' : 'Publish'}</button>
+          <button className="btn-primary" disabled={publish.isPending || note.trim() === '' || blocked}>{publish.isPending ? 'Publishing…' : findings.length > 0 ? 'Publish anyway' : 'Publish'}</button>
         </form>
       ) : (
         <p className="mt-4 text-sm text-ink-soft">Owners and editors publish versions.</p>
@@ -71,16 +120,26 @@ function Publish({ brandId, canPublish, latest }: { brandId: string; canPublish:
   );
 }
 
-function Versions({ slug, versions }: { slug: string; versions: Version[] }) {
+/** The server cannot print PDFs (e.g. no browser installed): said once, above the PDF links. */
+function PdfProblem({ message }: { message: string }) {
+  return (
+    <p role="alert" className="mb-4 rounded-md bg-danger-wash px-3 py-2 text-sm text-danger" data-testid="pdf-problem">
+      {message}
+    </p>
+  );
+}
+
+function Versions({ slug, versions, pdfProblem }: { slug: string; versions: Version[]; pdfProblem: string | null }) {
   if (versions.length === 0) return <Card title="Versions" id="versions-title"><p className="text-ink-soft">No versions yet. Publish the draft to make the first one.</p></Card>;
   return (
     <Card title="Versions" id="versions-title">
+      {pdfProblem && <PdfProblem message={pdfProblem} />}
       <ol className="divide-y divide-rule">
         {versions.map((v, i) => (
           <li key={v.number} className="flex flex-wrap items-baseline gap-x-4 gap-y-1 py-3">
             <a className="font-semibold text-plumb hover:underline" href={`/b/${slug}/v/${v.number}`}>Version {v.number}</a>
             {i === 0 && <span className="rounded-full bg-plumb-wash px-2 py-0.5 text-xs font-semibold text-plumb-deep">current</span>}
-            <span className="text-sm text-ink-soft">{when.format(new Date(v.publishedAt))}{v.author.name ? ` · ${v.author.name}` : ''}</span>
+            <span className="text-sm text-ink-soft"><When value={v.publishedAt} as="dateTime" />{v.author.name ? ` · ${v.author.name}` : ''}</span>
             <span className="ml-auto flex gap-3 text-sm">
               <a className="hover:underline" href={`/b/${slug}/v/${v.number}/guideline.pdf?size=a4`}>PDF A4</a>
               <a className="hover:underline" href={`/b/${slug}/v/${v.number}/guideline.pdf?size=letter`}>PDF Letter</a>
@@ -161,15 +220,15 @@ function ShareLinks({ brandId, versions }: { brandId: string; versions: Version[
           <p className="text-sm text-ink-soft">No links yet.</p>
         ) : (
           <table className="w-full text-left text-sm" aria-label="Share links">
-            <thead className="text-xs uppercase tracking-wider text-ink-faint"><tr><th className="py-2">For</th><th>Opens</th><th>Last used</th><th>State</th><th><span className="sr-only">Actions</span></th></tr></thead>
+            <thead className="text-xs uppercase tracking-wider text-ink-faint"><tr><th scope="col" className="py-2 pr-4">For</th><th scope="col" className="pr-4">Opens</th><th scope="col" className="pr-4">Last used</th><th scope="col" className="pr-4">State</th><th scope="col"><span className="sr-only">Actions</span></th></tr></thead>
             <tbody>
               {links.data.map((l) => (
                 <tr key={l.id} className="border-t border-rule">
-                  <td className="py-2.5">{l.label ?? 'Unnamed link'}<div className="text-xs text-ink-soft">{[l.hasPassword && 'password', l.allowDownloads && 'downloads', l.expiresAt && `until ${when.format(new Date(l.expiresAt))}`].filter(Boolean).join(' · ')}</div></td>
-                  <td>{l.version ? `Version ${l.version}` : 'Current'}</td>
-                  <td>{l.lastUsedAt ? `${when.format(new Date(l.lastUsedAt))} (${l.useCount}×)` : 'Never'}</td>
-                  <td><span className={l.state === 'active' ? 'font-semibold text-ok' : 'text-ink-soft'}>{l.state === 'active' ? 'Working' : l.state === 'expired' ? 'Expired' : 'Withdrawn'}</span></td>
-                  <td className="text-right">{l.state === 'active' && <button type="button" className="btn-danger px-3 py-1" onClick={() => revoke.mutate(l.id)}>Withdraw</button>}</td>
+                  <td className="py-2.5 pr-4 align-top">{l.label ?? 'Unnamed link'}<div className="text-xs text-ink-soft">{[l.hasPassword && 'password', l.allowDownloads && 'downloads', l.expiresAt && `until ${formatDate(l.expiresAt)}`].filter(Boolean).join(' · ')}</div></td>
+                  <td className="pr-4 align-top py-2.5 whitespace-nowrap">{l.version ? `Version ${l.version}` : 'Current'}</td>
+                  <td className="pr-4 align-top py-2.5">{l.lastUsedAt ? <><When value={l.lastUsedAt} as="dateTime" /> ({l.useCount}×)</> : 'Never'}</td>
+                  <td className="pr-4 align-top py-2.5"><span className={l.state === 'active' ? 'font-semibold text-ok' : 'text-ink-soft'}>{l.state === 'active' ? 'Working' : l.state === 'expired' ? 'Expired' : 'Withdrawn'}</span></td>
+                  <td className="py-2 text-right align-top">{l.state === 'active' && <button type="button" className="btn-danger px-3 py-1" onClick={() => revoke.mutate(l.id)}>Withdraw</button>}</td>
                 </tr>
               ))}
             </tbody>
@@ -180,7 +239,16 @@ function ShareLinks({ brandId, versions }: { brandId: string; versions: Version[
   );
 }
 
-function Panel({ brandId, slug, canPublish, canShare }: { brandId: string; slug: string; canPublish: boolean; canShare: boolean }) {
+interface PanelProps {
+  brandId: string;
+  slug: string;
+  canPublish: boolean;
+  canShare: boolean;
+  /** Why the server cannot print PDFs right now, or null. */
+  pdfProblem?: string | null;
+}
+
+function Panel({ brandId, slug, canPublish, canShare, pdfProblem = null }: PanelProps) {
   const versions = useQuery({ queryKey: ['versions', brandId], queryFn: () => api<{ versions: Version[] }>(`/api/brands/${brandId}/versions`).then((r) => r.versions) });
   if (versions.isPending) return <p className="panel px-6 py-8 text-ink-soft" role="status">Loading versions…</p>;
   if (versions.isError) return <p className="panel px-6 py-8 text-danger" role="alert">{versions.error.message}</p>;
@@ -188,14 +256,14 @@ function Panel({ brandId, slug, canPublish, canShare }: { brandId: string; slug:
     <div className="grid gap-8 lg:grid-cols-2">
       <div className="space-y-8">
         {canPublish && <Publish brandId={brandId} canPublish={canPublish} latest={versions.data[0]?.number ?? null} />}
-        <Versions slug={slug} versions={versions.data} />
+        <Versions slug={slug} versions={versions.data} pdfProblem={pdfProblem} />
       </div>
       {canShare && <ShareLinks brandId={brandId} versions={versions.data} />}
     </div>
   );
 }
 
-export default function PublishingPanel(props: { brandId: string; slug: string; canPublish: boolean; canShare: boolean }) {
+export default function PublishingPanel(props: PanelProps) {
   return (
     <QueryRoot>
       <Panel {...props} />

@@ -36,6 +36,7 @@ export function BlockFrame({ props, settings, preview, startOpen }: { props: Rea
     <NodeViewWrapper
       as="div"
       data-block-frame={node.type.name}
+      id={typeof node.attrs.id === 'string' ? `block-${node.attrs.id}` : undefined}
       className={`my-4 rounded-xl border bg-card ${selected ? 'border-plumb ring-2 ring-plumb/25' : 'border-rule'}`}
     >
       <div contentEditable={false} className="flex items-center gap-2 border-b border-rule px-2 py-1" role="toolbar" aria-label={`${label} block`}>

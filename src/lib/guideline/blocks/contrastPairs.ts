@@ -3,6 +3,8 @@ import * as z from 'zod';
 import { refIdSchema } from '../ids';
 import { defineBlock, distinctList, text } from './define';
 
+export const CONTRAST_CLAIMS = ['AA', 'AAA'] as const;
+
 export const contrastPairSchema = z.strictObject({
   foreground: refIdSchema('colour'),
   background: refIdSchema('colour'),
@@ -17,6 +19,8 @@ export const contrastPairsBlock = defineBlock({
   fields: {
     pairs: distinctList(contrastPairSchema, 48, 'pairs').default(() => []),
     note: text(500),
+    /** The WCAG 2.2 level the brand claims for text; the check before publishing flags pairs below it. */
+    claim: z.enum(CONTRAST_CLAIMS, { error: 'The level must be "AA" or "AAA".' }).default('AA'),
   },
   starter: { pairs: '$suggested' },
 });

@@ -3,7 +3,8 @@ import * as z from 'zod';
 import { TYPEFACE_ROLES } from '../../identity/types';
 import { defineBlock, distinctList, text } from './define';
 
-export const SPECIMEN_DEFAULT = 'Roasted slowly, poured with care: quiet mornings start here.';
+// A pangram shows every letter of the alphabet (common practice for type specimens); each brand sets its own line.
+export const SPECIMEN_DEFAULT = 'Sphinx of black quartz, judge my vow.';
 
 export const typographyBlock = defineBlock({
   type: 'typography',

@@ -2,15 +2,27 @@
 import type { APIRoute } from 'astro';
 import { CLIENT_IP_HEADER } from '../../../lib/auth/auth-options';
 import { auth } from '../../../lib/auth/auth.server';
+import { ApiError, errorResponse, readBody } from '../../../lib/http/api';
+import { requestClientAddress } from '../../../lib/http/client-address.server';
 
-/** Hand the request to better-auth with the socket's address, so a client cannot pick its own limiter key. */
-export const ALL: APIRoute = async ({ request, clientAddress }) => {
+/** Sign-in, sign-up and the rest carry a few fields; anything bigger is refused as it streams in. */
+const MAX_AUTH_BODY_BYTES = 16 * 1024;
+
+/** Hand the request to better-auth with the connection's own address, so a client cannot pick its own limiter key. */
+export const ALL: APIRoute = async (context) => {
+  const { request } = context;
   const headers = new Headers(request.headers);
-  headers.set(CLIENT_IP_HEADER, clientAddress);
-  const init: RequestInit & { duplex?: 'half' } = { method: request.method, headers };
+  headers.set(CLIENT_IP_HEADER, requestClientAddress(context));
+  const init: RequestInit = { method: request.method, headers };
   if (request.method !== 'GET' && request.method !== 'HEAD') {
-    init.body = request.body;
-    init.duplex = 'half';
+    try {
+      init.body = new Uint8Array(await readBody(request, MAX_AUTH_BODY_BYTES));
+    } catch (err) {
+      if (err instanceof ApiError) return errorResponse(err);
+      throw err;
+    }
+    headers.delete('content-length');
+    headers.delete('transfer-encoding');
   }
   return auth.handler(new Request(request.url, init));
 };

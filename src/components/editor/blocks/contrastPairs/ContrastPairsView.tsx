@@ -4,7 +4,7 @@ import type { ContrastPair, ContrastPairsAttrs } from '../../../../lib/guideline
 import { suggestedPairs } from '../../../../lib/guideline/templates';
 import { colorsInOrder } from '../../../../lib/guideline/identity';
 import { BlockFrame } from '../BlockFrame';
-import { ColorSelect, TextInput } from '../controls';
+import { ColorSelect, Select, TextInput } from '../controls';
 import { useIdentity } from '../../IdentityContext';
 
 export function ContrastPairsView(props: ReactNodeViewProps) {
@@ -40,6 +40,13 @@ export function ContrastPairsView(props: ReactNodeViewProps) {
             </button>
             {colors.length < 2 ? <p className="hint">Add at least two colours to the identity to compare them.</p> : null}
           </div>
+          <Select
+            label="Level the brand claims for text"
+            value={a.claim ?? 'AA'}
+            options={[{ value: 'AA', label: 'WCAG 2.2 AA (4.5:1 for body text)' }, { value: 'AAA', label: 'WCAG 2.2 AAA (7:1 for body text)' }]}
+            onChange={(claim) => set({ claim })}
+            hint="Pairs below this level are listed in the check before publishing."
+          />
           <TextInput label="Note (optional)" value={a.note} max={500} onChange={(note) => set({ note })} />
         </>
       }

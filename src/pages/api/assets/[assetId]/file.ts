@@ -11,11 +11,16 @@ import '../../../../lib/db.server';
 export const GET = endpoint(async ({ locals, params, url }) => {
   // Anonymous callers without a share link learn nothing, not even whether the asset exists.
   if (!locals.user && !locals.shareGrant) throw new ApiError(401, 'unauthenticated', 'Sign in to continue.');
+  // A share link that allows no downloads answers alike for every id, existing or not.
+  if (!locals.user && locals.shareGrant && !locals.shareGrant.allowDownloads) await authorizeAssetRead(locals, locals.shareGrant.brandId);
   const assetId = idParam(params.assetId, 'That asset');
   const query = parseWith(renditionQuerySchema, queryObject(url), 'query');
   const found = await Asset.findByPk(assetId, { attributes: ['id', 'brandId'] });
   if (!found) throw notFound('That asset');
-  const reader = await authorizeAssetRead(locals, found.brandId);
+  // An asset of a brand the caller cannot read is answered exactly like a random id: no existence leak.
+  const reader = await authorizeAssetRead(locals, found.brandId).catch((err) => {
+    throw err instanceof ApiError && (err.status === 401 || err.status === 404) ? notFound('That asset') : err;
+  });
   const asset = await assetFor(reader.brand.id, assetId, reader.approvedOnly);
   const { rendition, filename, params: resolved } = await downloadFile(reader, asset, query);
   const response = fileResponse(rendition.body, rendition.mime, filename, { inline: query.download !== '1' });

@@ -12,11 +12,17 @@ export const GET = endpoint(async ({ locals, params, url }) => {
   return json({ assets: await listAssets(reader, filters), approvedOnly: reader.approvedOnly });
 });
 
+/** A file over the per-file limit, refused the moment it passes it (the whole request with it). */
+function assetTooLarge(filename: string): ApiError {
+  const message = `“${filename}” is larger than ${MAX_ASSET_BYTES / 1024 / 1024} MB, the most one file can be.`;
+  return new ApiError(400, 'too_large', message, undefined, { rejected: [{ filename, code: 'too_large', message }] });
+}
+
 /** Upload one or more files (field "file", repeated); each is accepted or refused with its reason. */
 export const POST = endpoint(async ({ locals, params, request }) => {
   const { caller, brand } = await authorizeBrand(locals, idParam(params.id), 'asset.upload');
   // The whole request may hold several files; each file's own limit is checked as it is read.
-  const form = await readForm(request, MAX_FILES_PER_UPLOAD * MAX_ASSET_BYTES);
+  const form = await readForm(request, MAX_FILES_PER_UPLOAD * MAX_ASSET_BYTES, { maxFileBytes: MAX_ASSET_BYTES, fileTooLarge: assetTooLarge });
   const files = form.getAll('file').filter((f): f is File => f instanceof File);
   if (!files.length) throw new ApiError(400, 'missing_file', 'Attach one or more files in the "file" field.');
   if (files.length > MAX_FILES_PER_UPLOAD) throw new ApiError(400, 'too_many_files', `Upload at most ${MAX_FILES_PER_UPLOAD} files at once.`);

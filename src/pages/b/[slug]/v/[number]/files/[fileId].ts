@@ -12,16 +12,18 @@ const made = new Map<string, { body: Buffer; contentType: string }>();
 export const GET: APIRoute = async (context) => {
   const access = await siteAccess(context, context.params.slug!, Number(context.params.number));
   if (access instanceof Response) return new Response('Not found', { status: 404 });
+  // Own keys only: `__proto__`, `constructor` and the like name no file; "<logo>~<slot>" files come through ?variant.
   const fileId = context.params.fileId ?? '';
-  let file = access.version.files[fileId];
-  if (!file || fileId.includes('~')) return new Response('Not found', { status: 404 });
+  let file = Object.hasOwn(access.version.files, fileId) && !fileId.includes('~') ? access.version.files[fileId] : undefined;
+  if (!file) return new Response('Not found', { status: 404 });
   let body = await storage.get(file.key);
   if (!body) return new Response('Not found', { status: 404 });
   const variant = context.url.searchParams.get('variant');
   const isLogo = file.contentType === 'image/svg+xml' || file.contentType === 'image/png';
   if (variant && VARIANTS.has(variant) && isLogo) {
     // The designer's own file for the slot wins; 'on-dark' without one is the logo as drawn.
-    const own = access.version.files[versionVariantFileId(fileId, variant)];
+    const ownId = versionVariantFileId(fileId, variant);
+    const own = Object.hasOwn(access.version.files, ownId) ? access.version.files[ownId] : undefined;
     const ownBody = own ? await storage.get(own.key) : null;
     if (own && ownBody) {
       body = ownBody;

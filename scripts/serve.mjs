@@ -1,0 +1,68 @@
+// The production server: static files from the build's client folder, everything else through Astro's handler
+// (the node adapter in middleware mode). It exists to hand each request its TCP peer's own address as
+// locals.socketAddress: the adapter alone derives the client address from X-Forwarded-For, which any visitor can set.
+// Usage: node scripts/serve.mjs [outDir]   (outDir: PLUMBLINE_OUT_DIR or dist/; HOST and PORT as for the adapter)
+import { statSync } from 'node:fs';
+import http from 'node:http';
+import { join, resolve } from 'node:path';
+import { setTimeout } from 'node:timers';
+import { pathToFileURL } from 'node:url';
+import send from 'send';
+
+const outDir = resolve(process.argv[2] ?? process.env.PLUMBLINE_OUT_DIR ?? 'dist');
+const clientDir = join(outDir, 'client');
+const { handler } = await import(pathToFileURL(join(outDir, 'server', 'entry.mjs')).href);
+const host = process.env.HOST ?? '127.0.0.1';
+const port = Number(process.env.PORT ?? 4321);
+
+/** The built file a GET may be answered with, or null (routes, missing files, folders). */
+function staticFile(pathname) {
+  if (pathname.includes('\0')) return null;
+  const file = join(clientDir, pathname);
+  if (!file.startsWith(clientDir + '/')) return null;
+  try {
+    return statSync(file).isFile() ? pathname : null;
+  } catch {
+    return null;
+  }
+}
+
+const server = http.createServer((req, res) => {
+  const encoded = (req.url ?? '/').split(/[?#]/)[0];
+  let pathname;
+  try {
+    pathname = decodeURI(encoded);
+  } catch {
+    res.writeHead(400).end('Bad request.');
+    return;
+  }
+  const file = req.method === 'GET' || req.method === 'HEAD' ? staticFile(pathname) : null;
+  if (file) {
+    // send decodes the path itself.
+    send(req, encoded, { root: clientDir, dotfiles: 'deny', index: false })
+      .on('headers', (r) => {
+        // Hashed build assets never change.
+        if (file.startsWith('/_astro/')) r.setHeader('cache-control', 'public, max-age=31536000, immutable');
+      })
+      .on('error', () => {
+        if (!res.headersSent) res.writeHead(404).end('Not found.');
+      })
+      .pipe(res);
+    return;
+  }
+  // A body refused part-way (413) is never read to its end, so the connection cannot carry another request: say so
+  // in the answer, and if the client still has not stopped a moment later (time to read the answer), drop it.
+  const writeHead = res.writeHead;
+  res.writeHead = function (...args) {
+    if (!req.complete) res.setHeader('connection', 'close');
+    return writeHead.apply(this, args);
+  };
+  res.on('finish', () => {
+    if (!req.complete) setTimeout(() => !req.complete && req.socket.destroy(), 2000).unref();
+  });
+  // No `next`: a path no route matches gets Astro's own 404 page.
+  handler(req, res, undefined, { socketAddress: req.socket.remoteAddress });
+});
+
+server.listen(port, host, () => console.log(`Plumbline listening on http://${host}:${port}`));
+for (const signal of ['SIGINT', 'SIGTERM']) process.on(signal, () => process.exit(0));
