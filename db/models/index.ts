@@ -11,7 +11,14 @@ import {
 } from 'sequelize';
 import pg from 'pg';
 import { BRAND_ROLES, STUDIO_ROLES, type BrandRole, type StudioRole } from '../../src/lib/auth/roles';
-import type { Box, ColorRole, LogoVariant, TypefaceRole, TypeScaleSettings } from '../../src/lib/identity/types';
+import type { Box, ColorRole, LogoVariant, LogoVariantSlot, TypefaceRole, TypeScaleSettings } from '../../src/lib/identity/types';
+
+/** A designer's own file for one variant slot of a logo. */
+export interface LogoVariantFile {
+  key: string;
+  format: 'svg' | 'png';
+  byteSize: number;
+}
 import type { FontMetrics } from '../../src/lib/type/metrics';
 import { initAssetModels } from './assets';
 import { initCollaborationModels } from './collaboration';
@@ -111,6 +118,8 @@ export class BrandLogo extends Model<InferAttributes<BrandLogo>, InferCreationAt
   declare thinnestStroke: number;
   declare minScreenPx: number | null;
   declare minPrintMm: number | null;
+  /** Files the designer supplied for one-colour or dark-ground versions, by slot; each wins over the computed one. */
+  declare variantFiles: CreationOptional<Partial<Record<LogoVariantSlot, LogoVariantFile>>>;
   declare position: number;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -242,6 +251,7 @@ export function initModels(sequelize: Sequelize): void {
       thinnestStroke: { type: DataTypes.DOUBLE, allowNull: false },
       minScreenPx: { type: DataTypes.INTEGER, allowNull: true },
       minPrintMm: { type: DataTypes.DOUBLE, allowNull: true },
+      variantFiles: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
       position: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
       ...timestamps,
     },

@@ -5,6 +5,12 @@ export const PRINT_CAUTION =
   'CMYK values here are estimates converted from screen colour with a generic profile. Press results depend on the ' +
   'printer, the ink and the paper stock: ask your printer for their profile and approve a physical proof before a print run.';
 
+/** Shown where print-ready PDF and EPS logo files are offered, beside PRINT_CAUTION. */
+export const VECTOR_PRINT_NOTE =
+  'Print PDF and EPS files are vectors made from the SVG logo, one page cut to its drawn bounds. In the CMYK files the colours ' +
+  'are converted by formula and a generic profile, not your printer’s: replace them with the proofed or spot values your printer ' +
+  'gives you. Logos uploaded as PNG get no PDF or EPS, since wrapping pixels would not make a vector file.';
+
 /** Shown beside contrast results: guidance, not an accessibility certification. */
 export const CONTRAST_CAUTION =
   'Contrast checks follow the WCAG 2.2 formula and are guidance only, not an accessibility certification. ' +

@@ -137,7 +137,16 @@ describe('renditions have the exact sizes asked for (read back with sharp metada
     expect(r.headers.get('content-type')).toBe('image/svg+xml');
     const text = r.body.toString();
     expect(text).toMatch(/^<svg/);
-    expect(text.match(/#[0-9a-f]{6}/gi)!.every((c) => c.toLowerCase() === '#335c4a')).toBe(true);
+    // Drawn back, every fully drawn pixel is the ink (the mask's own black and white never show).
+    const { data } = await sharp(r.body).ensureAlpha().raw().toBuffer({ resolveWithObject: true });
+    let drawn = 0;
+    for (let i = 0; i < data.length; i += 4) {
+      if (data[i + 3] === 255) {
+        drawn++;
+        expect([data[i], data[i + 1], data[i + 2]]).toEqual([0x33, 0x5c, 0x4a]);
+      }
+    }
+    expect(drawn).toBeGreaterThan(0);
   });
 
   test.each([
@@ -178,6 +187,9 @@ describe('bundles', () => {
       'shelf-mark/original/shelf-mark.svg',
       expect.stringMatching(/^shelf-mark\/web-icons\/.*favicon\.ico$/),
       expect.stringMatching(/^shelf-mark\/print\/.*-cmyk\.tif$/),
+      expect.stringMatching(/^shelf-mark\/print\/.*-print-cmyk\.pdf$/),
+      expect.stringMatching(/^shelf-mark\/print\/.*-print-cmyk\.eps$/),
+      expect.stringMatching(/^shelf-mark\/print\/.*-print\.pdf$/),
       expect.stringMatching(/^shelf-mark\/screen\/.*-2048w\.png$/),
     ]));
     expect(Number(r.headers.get('x-bundle-entries'))).toBe(entries.length);

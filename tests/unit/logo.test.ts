@@ -7,7 +7,7 @@ import {
   minimumSize,
   MIN_STROKE_PRINT_PT,
   MIN_STROKE_SCREEN_PX,
-  recolorSvg,
+  knockoutSvg,
   sanitizeSvg,
   type LogoErrorCode,
 } from '../../src/lib/logo';
@@ -141,35 +141,10 @@ describe('minimumSize (common practice: thinnest stroke ≥ 1 px on screen, ≥ 
   });
 });
 
-/** Every paint value used in an SVG: fill/stroke/stop-color attributes and declarations. */
-function paints(svg: string): Set<string> {
-  const found = new Set<string>();
-  for (const m of svg.matchAll(/(?<![\w-])(fill|stroke|stop-color|color)\s*(?:=\s*"([^"]*)"|:\s*([^;}"]+))/gi)) {
-    found.add((m[2] ?? m[3]).trim().toLowerCase());
-  }
-  return found;
-}
-
-describe('recolorSvg produces only the chosen colours', () => {
+describe('knockoutSvg: one ink on a transparent ground', () => {
   const logo = fixture('clean-logo.svg');
-  test.each([
-    ['black', undefined, '#000000'],
-    ['white', undefined, '#ffffff'],
-    ['one-colour', '#0a7e8c', '#0a7e8c'],
-  ] as const)('%s', (mode, hex, ink) => {
-    const out = recolorSvg(logo, mode, hex);
-    for (const p of paints(out)) expect(['none', 'url(#fade)', ink, `${ink}80`]).toContain(p);
-    expect(out).toContain('fill="none"');
-    expect(out).toContain('stop-opacity="0.4"');
-  });
-  test('reversed: white marks on a field of the given colour', () => {
-    const out = recolorSvg(logo, 'reversed', '#29335c');
-    expect(out).toMatch(/<rect data-role="field" x="0" y="0" width="200" height="100" fill="#29335c"\/>/);
-    const marks = out.replace(/<rect data-role="field"[^>]*>/, '');
-    for (const p of paints(marks)) expect(['none', 'url(#fade)', '#ffffff', '#ffffff80']).toContain(p);
-  });
   test('the drawn result has only the ink in opaque pixels (librsvg render as an independent check)', async () => {
-    const out = recolorSvg(logo, 'one-colour', '#0a7e8c');
+    const out = knockoutSvg(logo, { ink: '#0a7e8c' });
     const { data, info } = await sharp(Buffer.from(out)).ensureAlpha().raw().toBuffer({ resolveWithObject: true });
     let opaque = 0;
     for (let i = 0; i < data.length; i += info.channels) {
@@ -180,9 +155,8 @@ describe('recolorSvg produces only the chosen colours', () => {
     }
     expect(opaque).toBeGreaterThan(100);
   });
-  test('bad mode or ink is a typed error', () => {
-    expect(() => recolorSvg(logo, 'one-colour', 'nope')).toThrow(LogoError);
-    expect(() => recolorSvg(logo, 'sepia' as 'black')).toThrow(LogoError);
-    expect(() => recolorSvg(fixture('billion-laughs.svg'), 'black')).toThrow(LogoError);
+  test('bad ink or hostile SVG is a typed error', () => {
+    expect(() => knockoutSvg(logo, { ink: 'nope' })).toThrow(LogoError);
+    expect(() => knockoutSvg(fixture('billion-laughs.svg'), { ink: '#000000' })).toThrow(LogoError);
   });
 });

@@ -63,11 +63,9 @@ export function Note({ text }: { text: string }) {
   return text ? <p className="mt-3 text-sm leading-relaxed opacity-80">{text}</p> : null;
 }
 
-/** A logo file as an <img>, or nothing when the address is not one we may load. */
-export function LogoImage({ logo, file = 'original', on, className, style, mode = 'site' }: { logo: IdentityLogo; file?: keyof IdentityLogo['files']; on?: string; className?: string; style?: React.CSSProperties; mode?: RenderMode }) {
-  const base = safeAssetUrl(logo.files[file]);
-  // A white logo on a known ground keeps its light details in the ground's colour (see reverseOnGround).
-  const src = base && on && file === 'white' && /^#[0-9a-f]{6}$/i.test(on) ? `${base}${base.includes('?') ? '&' : '?'}on=${encodeURIComponent(on)}` : base;
+/** A logo file as an <img>, or nothing when the address is not one we may load; one-colour files have transparent grounds. */
+export function LogoImage({ logo, file = 'original', className, style, mode = 'site' }: { logo: IdentityLogo; file?: keyof IdentityLogo['files']; on?: string; className?: string; style?: React.CSSProperties; mode?: RenderMode }) {
+  const src = safeAssetUrl(logo.files[file] ?? logo.files.original);
   if (!src) return <Missing what="logo" detail="Its file address could not be used." />;
   // The print edition loads every image before Chromium prints; the site loads them as the reader scrolls.
   return <img src={src} alt={logo.name} className={className} style={style} loading={mode === 'print' ? 'eager' : 'lazy'} decoding="async" />;

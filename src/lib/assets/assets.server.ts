@@ -18,7 +18,7 @@ import { newKey } from '../storage/storage';
 import { storage } from '../storage/index.server';
 import type { AssetReader } from './access.server';
 import { inspectUpload, UploadRejection } from './inspect.server';
-import { canMoveState, FORMAT_INFO, PREVIEW_MAX_WIDTH, renditionFilename, STANDARD_RENDITIONS, type AssetKind, type AssetState, type RenditionParams, type RenditionQuery } from './kinds';
+import { canMoveState, FORMAT_INFO, PREVIEW_MAX_WIDTH, renditionFilename, STANDARD_RENDITIONS, VECTOR_PRINT_RENDITIONS, type AssetKind, type AssetState, type RenditionParams, type RenditionQuery } from './kinds';
 import { cachedRendition, renditionKey, type Rendition } from './render.server';
 import { checkRenditionSize, RenditionError, resolveRendition } from './renditions';
 import { usageNote } from './usage';
@@ -384,6 +384,7 @@ const BUNDLE_LOGO_FILES: { folder: string; query: RenditionQuery; svgOnly?: bool
   { folder: 'web-icons', query: { preset: 'favicon' } },
   { folder: 'web-icons', query: { preset: 'apple-touch' } },
   { folder: 'print', query: { preset: 'print', width: 2048 } },
+  ...VECTOR_PRINT_RENDITIONS.map((r) => ({ folder: 'print', query: r.query, svgOnly: true })),
 ];
 export const MAX_BUNDLE_ASSETS = 100;
 

@@ -60,7 +60,9 @@ export const MAX_FILES_PER_UPLOAD = 20;
 /** Images above this many pixels are refused before they are decoded (decompression bombs). */
 export const MAX_IMAGE_PIXELS = 60_000_000;
 
-export const RENDITION_FORMATS = ['original', 'svg', 'png', 'jpg', 'webp', 'ico', 'tiff'] as const;
+export const RENDITION_FORMATS = ['original', 'svg', 'png', 'jpg', 'webp', 'ico', 'tiff', 'pdf', 'eps'] as const;
+/** Print-ready vector formats, made from SVG logos only (a raster would only be wrapped, not turned into vectors). */
+export const VECTOR_PRINT_FORMATS = ['pdf', 'eps'] as const;
 export type RenditionFormat = (typeof RENDITION_FORMATS)[number];
 export const RENDITION_VARIANTS = ['original', 'black', 'white', 'reversed', 'one-colour'] as const;
 export type RenditionVariant = (typeof RENDITION_VARIANTS)[number];
@@ -126,7 +128,7 @@ export interface RenditionParams {
   /** '#rrggbb' or null for transparent. */
   background: string | null;
   variant: RenditionVariant;
-  /** Ink for one-colour, field colour for reversed. */
+  /** Ink for one-colour; for reversed, the field it is placed on (the background when none is given). */
   color: string | null;
   colorSpace: 'rgb' | 'cmyk';
   /** Only for ICO: the sizes inside. */
@@ -149,6 +151,14 @@ export const STANDARD_RENDITIONS: { name: string; query: RenditionQuery }[] = [
   { name: 'print-cmyk-2048', query: { preset: 'print', width: 2048 } },
 ];
 
+/** The print-ready vector files the shelf, the downloads page and the bundle offer for every SVG logo. */
+export const VECTOR_PRINT_RENDITIONS: { name: string; label: string; query: RenditionQuery }[] = [
+  { name: 'pdf-rgb', label: 'PDF (vector, RGB)', query: { format: 'pdf', colorSpace: 'rgb' } },
+  { name: 'pdf-cmyk', label: 'PDF (vector, CMYK)', query: { format: 'pdf', colorSpace: 'cmyk' } },
+  { name: 'eps-rgb', label: 'EPS (vector, RGB)', query: { format: 'eps', colorSpace: 'rgb' } },
+  { name: 'eps-cmyk', label: 'EPS (vector, CMYK)', query: { format: 'eps', colorSpace: 'cmyk' } },
+];
+
 /** The file extension and media type a rendition is served with. */
 export function renditionType(format: RenditionParams['format'], original: AssetFormat): { ext: string; mime: string } {
   switch (format) {
@@ -166,6 +176,10 @@ export function renditionType(format: RenditionParams['format'], original: Asset
       return { ext: 'ico', mime: 'image/x-icon' };
     case 'tiff':
       return { ext: 'tif', mime: 'image/tiff' };
+    case 'pdf':
+      return { ext: 'pdf', mime: 'application/pdf' };
+    case 'eps':
+      return { ext: 'eps', mime: 'application/postscript' };
   }
 }
 
@@ -175,6 +189,7 @@ export function renditionFilename(brandSlug: string, assetName: string, params: 
   const parts = [slug(brandSlug), slug(assetName)];
   if (params.variant !== 'original') parts.push(params.variant);
   if (params.format === 'ico') parts.push('favicon');
+  else if (params.format === 'pdf' || params.format === 'eps') parts.push('print');
   else if (params.width) parts.push(params.square ? `${params.width}x${params.width}` : `${params.width}w`);
   if (params.colorSpace === 'cmyk') parts.push('cmyk');
   return `${parts.join('-')}.${renditionType(params.format, original).ext}`;

@@ -3,7 +3,9 @@
 import { createHash } from 'node:crypto';
 import sharp, { type Sharp } from 'sharp';
 import { encode as encodeIco } from 'sharp-ico';
-import { recolorSvg } from '../logo/recolor';
+import { knockoutSvg } from '../logo/knockout';
+import { knockoutRaster, variantInk } from '../logo/knockout.server';
+import { logoPrintFile } from '../logo/print-files.server';
 import { toSanitizedSvg } from '../logo/sanitize';
 import type { Box } from '../logo/geometry';
 import type { FileStorage } from '../storage/storage';
@@ -40,22 +42,11 @@ function svgFor(bytes: Buffer, params: RenditionParams): { text: string; width: 
   const known = svgMemo.get(memoKey);
   if (known) return known;
   const clean = toSanitizedSvg(bytes.toString('utf8'));
-  const text = params.variant === 'original' ? clean.svg : recolorSvg(clean.svg, params.variant, params.color ?? undefined);
+  const text = params.variant === 'original' ? clean.svg : knockoutSvg(clean.svg, { ink: variantInk(params.variant, params.color) });
   const made = { text, width: clean.width, height: clean.height };
   svgMemo.set(memoKey, made);
   if (svgMemo.size > 200) svgMemo.delete(svgMemo.keys().next().value!);
   return made;
-}
-
-/** A one-ink raster from a raster logo: its alpha kept, every pixel filled with the ink (reversed: white on a field). */
-async function recolouredRaster(bytes: Buffer, params: RenditionParams): Promise<Buffer> {
-  const img = sharp(bytes, { limitInputPixels: MAX_IMAGE_PIXELS });
-  const { width = 1, height = 1 } = await img.metadata();
-  const ink = params.variant === 'black' ? '#000000' : params.variant === 'one-colour' ? params.color! : '#ffffff';
-  const alpha = await sharp(bytes, { limitInputPixels: MAX_IMAGE_PIXELS }).ensureAlpha().extractChannel(3).toBuffer();
-  const marks = await sharp({ create: { width, height, channels: 3, background: ink } }).joinChannel(alpha).png().toBuffer();
-  if (params.variant !== 'reversed') return marks;
-  return sharp({ create: { width, height, channels: 4, background: params.color ?? '#000000' } }).composite([{ input: marks }]).png().toBuffer();
 }
 
 /**
@@ -74,7 +65,7 @@ async function drawn(source: RenditionSource, params: RenditionParams, contentWi
     const h = Math.max(1, Math.floor((svg.height * density) / 72));
     return cropTo(img, w, h, box);
   }
-  const bytes = params.variant === 'original' ? source.bytes : await recolouredRaster(source.bytes, params);
+  const bytes = params.variant === 'original' ? source.bytes : await knockoutRaster(source.bytes, variantInk(params.variant, params.color));
   const img = sharp(bytes, { limitInputPixels: MAX_IMAGE_PIXELS });
   const meta = await img.metadata();
   const w = meta.width ?? 1;
@@ -138,6 +129,9 @@ async function drawRendition(source: RenditionSource, params: RenditionParams): 
     }
     return { body: Buffer.from(text), ...type };
   }
+  if (params.format === 'pdf' || params.format === 'eps') {
+    return { body: await logoPrintFile(source.bytes.toString('utf8'), source.drawnBounds, params.format, params.colorSpace), ...type };
+  }
   if (params.format === 'ico') {
     const pngs = await Promise.all((params.sizes ?? []).map(async (s) => (await square(source, { ...params, format: 'png' }, s)).png().toBuffer()));
     return { body: encodeIco(pngs), ...type };
@@ -182,7 +176,9 @@ export async function renderRendition(source: RenditionSource, params: Rendition
 
 /** Where a rendition is kept: a key derived from the asset and the parameters, in the storage's own key shape. */
 export function renditionKey(source: { id: string; brandId: string }, params: RenditionParams): { key: string; paramsKey: string } {
-  const hash = createHash('sha256').update(`${source.id}\n${paramsText(params)}`).digest('hex');
+  // Variants drawn before knockouts were filled silhouettes: a new salt keeps those cached files from being served.
+  const salt = params.variant === 'original' ? '' : '\nknockout-1';
+  const hash = createHash('sha256').update(`${source.id}\n${paramsText(params)}${salt}`).digest('hex');
   const uuidish = `${hash.slice(0, 8)}-${hash.slice(8, 12)}-${hash.slice(12, 16)}-${hash.slice(16, 20)}-${hash.slice(20, 32)}`;
   const ext = renditionType(params.format, 'png').ext;
   return { key: `${source.brandId}/rendition/${uuidish}.${ext}`, paramsKey: hash };

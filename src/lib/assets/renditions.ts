@@ -29,9 +29,11 @@ function colour(value: string | undefined, field: string): string | null | undef
 
 /** Resolve a request against an asset; presets fix sizes, the rest is checked for sense (no SVG from a photo, no transparent JPEG). */
 export function resolveRendition(query: RenditionQuery, asset: { kind: AssetKind; format: AssetFormat }): RenditionParams {
-  const background = colour(query.background, 'background');
   const color = colour(query.color, 'color') ?? null;
   const variant = query.variant ?? 'original';
+  // A reversed logo is white on a transparent ground; a colour given with it is the field it is shown on.
+  const asked = colour(query.background, 'background');
+  const background = asked === undefined && variant === 'reversed' && color ? color : asked;
   const wantsWork = query.preset || query.width || (query.format && query.format !== 'original') || variant !== 'original' || query.colorSpace;
   const base: RenditionParams = { format: 'original', width: null, square: false, padding: 0, background: null, variant, color, colorSpace: 'rgb', sizes: null };
   if (!wantsWork) {
@@ -75,13 +77,22 @@ export function resolveRendition(query: RenditionQuery, asset: { kind: AssetKind
         return { ...base, format: 'svg', background: background ?? null };
       }
       if (format === 'ico') return resolveRendition({ ...query, preset: 'favicon' }, asset);
+      if (format === 'pdf' || format === 'eps') {
+        if (asset.format !== 'svg') {
+          throw new RenditionError('vector_from_raster', `A print-ready ${format.toUpperCase()} is made from an SVG original only: this logo is a raster image, and wrapping its pixels would not make a vector file. Ask for the SVG, or use the CMYK TIFF.`);
+        }
+        if (query.width || variant !== 'original' || background) {
+          throw new RenditionError('invalid_input', `A print-ready ${format.toUpperCase()} is the logo as drawn, at its own size: drop width, variant and background.`);
+        }
+        return { ...base, format, colorSpace: query.colorSpace ?? 'cmyk' };
+      }
       const opaque = format === 'jpg' || format === 'tiff';
       if (opaque && background === null) throw new RenditionError('invalid_input', `${format.toUpperCase()} has no transparency: choose a background colour.`);
       params = { ...base, format, width: query.width ?? null, background: opaque ? (background ?? '#ffffff') : (background ?? null), colorSpace: query.colorSpace ?? (format === 'tiff' ? 'cmyk' : 'rgb') };
     }
   }
   if (params.colorSpace === 'cmyk' && params.format !== 'jpg' && params.format !== 'tiff') {
-    throw new RenditionError('invalid_input', 'CMYK is for print files: choose format=tiff or format=jpg.');
+    throw new RenditionError('invalid_input', 'CMYK is for print files: choose format=tiff, jpg, pdf or eps.');
   }
   return params;
 }

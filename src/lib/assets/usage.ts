@@ -1,5 +1,5 @@
 // The short usage note packed into every bundle, written from the identity so the numbers match the guidelines.
-import { PRINT_CAUTION, TRADEMARK_CAUTION } from '../cautions';
+import { PRINT_CAUTION, TRADEMARK_CAUTION, VECTOR_PRINT_NOTE } from '../cautions';
 import type { Identity } from '../identity/types';
 
 const round = (n: number, places = 2) => Number(n.toFixed(places));
@@ -34,6 +34,7 @@ export function usageNote(identity: Identity, files: { path: string; name: strin
     }
     lines.push('');
     lines.push(`  ${PRINT_CAUTION}`);
+    lines.push(`  ${VECTOR_PRINT_NOTE}`);
     lines.push('');
   }
   lines.push('PLEASE DO NOT');

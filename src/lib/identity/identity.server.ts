@@ -10,7 +10,8 @@ import { colorValues, parseColor } from '../color';
 import { iccCmyk } from '../color/print.server';
 import { sequelize } from '../db.server';
 import { ApiError } from '../http/api';
-import { clearSpace, minimumSize, recolorSvg, reverseOnGround, sanitizeSvg, type RecolorMode } from '../logo';
+import { clearSpace, minimumSize, sanitizeSvg } from '../logo';
+import { oneColourLogo, type OneColourVariant } from '../logo/knockout.server';
 import { drawnBounds } from '../logo/bounds.server';
 import { thinnestStroke } from '../logo/stroke.server';
 import { newKey } from '../storage/storage';
@@ -27,6 +28,7 @@ import type {
   IdentityLogo,
   IdentityTypeface,
   LogoVariant,
+  LogoVariantSlot,
   TypefaceRole,
   TypeScaleSettings,
   TypeScaleStep,
@@ -249,7 +251,8 @@ export function logoView(row: BrandLogo): IdentityLogo {
       screenPx: row.minScreenPx ?? suggested.screenPx,
       printMm: row.minPrintMm ?? suggested.printMm,
     },
-    files: { original: base, black: `${base}?variant=black`, white: `${base}?variant=white`, reversed: `${base}?variant=reversed` },
+    files: { original: base, black: `${base}?variant=black`, white: `${base}?variant=white`, reversed: `${base}?variant=reversed`, onDark: `${base}?variant=on-dark` },
+    ownVariants: Object.keys(row.variantFiles ?? {}) as LogoVariantSlot[],
     position: row.position,
   };
 }
@@ -276,33 +279,63 @@ export async function deleteLogo(caller: Caller, brand: Brand, logoId: string): 
     await audit(brandAudit(caller, brand, 'logo.delete', 'logo', logo.id, { name: logo.name }), t);
   });
   await storage.delete(logo.storageKey);
+  for (const own of Object.values(logo.variantFiles ?? {})) await storage.delete(own.key);
 }
 
-export type LogoFileVariant = 'original' | Exclude<RecolorMode, 'one-colour'> | 'one-colour';
+export type LogoFileVariant = 'original' | OneColourVariant | 'on-dark';
 
-/** The logo's bytes, recoloured when asked: SVGs by repainting, PNGs by keeping the alpha and filling the ink. */
-export async function logoFile(brand: Brand, logoId: string, variant: LogoFileVariant, ink?: string, on?: string): Promise<{ body: Buffer; contentType: string; filename: string }> {
+/**
+ * The logo's bytes, or one of its versions: the designer's own file for the slot when there is one, otherwise a
+ * knockout computed from the drawing (oneColourLogo); 'on-dark' falls back to the original.
+ */
+export async function logoFile(brand: Brand, logoId: string, variant: LogoFileVariant, ink?: string): Promise<{ body: Buffer; contentType: string; filename: string }> {
   const logo = await logoOf(brand, logoId);
+  const own = variant === 'original' || variant === 'one-colour' ? undefined : logo.variantFiles?.[variant];
+  const ownBytes = own ? await storage.get(own.key) : null;
+  const useOwn = own && ownBytes ? own : null;
+  const format = useOwn?.format ?? (variant === 'original' || variant === 'on-dark' ? logo.format : logo.format === 'svg' ? 'svg' : 'png');
+  const filename = `${brand.slug}-${logo.variant}${variant === 'original' ? '' : `-${variant}`}.${format}`;
+  if (useOwn) return { body: ownBytes!, contentType: useOwn.format === 'svg' ? 'image/svg+xml' : 'image/png', filename };
   const bytes = await storage.get(logo.storageKey);
   if (!bytes) throw new ApiError(404, 'not_found', 'The logo file is missing from storage.');
-  const filename = `${brand.slug}-${logo.variant}${variant === 'original' ? '' : `-${variant}`}.${logo.format}`;
-  if (variant === 'original') return { body: bytes, contentType: logo.format === 'svg' ? 'image/svg+xml' : 'image/png', filename };
+  if (variant === 'original' || variant === 'on-dark') return { body: bytes, contentType: logo.format === 'svg' ? 'image/svg+xml' : 'image/png', filename };
   const inkHex = variant === 'one-colour' ? hexOf(ink ?? '') : undefined;
-  if (logo.format === 'svg' && variant === 'white' && on) {
-    return { body: Buffer.from(reverseOnGround(bytes.toString('utf8'), on)), contentType: 'image/svg+xml', filename };
+  const made = await oneColourLogo({ bytes, format: logo.format }, variant, { ink: inkHex });
+  return { body: made.body, contentType: made.contentType, filename };
+}
+
+/** Store the designer's own file for one variant slot of a logo (SVG or PNG, checked like a logo upload). */
+export async function uploadLogoVariant(caller: Caller, brand: Brand, logoId: string, slot: LogoVariantSlot, file: File): Promise<IdentityLogo> {
+  const logo = await logoOf(brand, logoId);
+  const { format, stored } = await readLogoFile(Buffer.from(await file.arrayBuffer()));
+  const key = newKey(brand.id, 'logo', format);
+  await storage.put(key, stored, format === 'svg' ? 'image/svg+xml' : 'image/png');
+  const previous = logo.variantFiles?.[slot];
+  try {
+    await sequelize.transaction(async (t) => {
+      await logo.update({ variantFiles: { ...logo.variantFiles, [slot]: { key, format, byteSize: stored.length } } }, { transaction: t });
+      await audit(brandAudit(caller, brand, 'logo.variant.upload', 'logo', logo.id, { slot, format, bytes: stored.length }), t);
+    });
+  } catch (err) {
+    await storage.delete(key);
+    throw err;
   }
-  if (logo.format === 'svg') {
-    return { body: Buffer.from(recolorSvg(bytes.toString('utf8'), variant, inkHex ?? ink)), contentType: 'image/svg+xml', filename };
-  }
-  const fill = variant === 'black' ? '#000000' : variant === 'one-colour' ? inkHex! : '#ffffff';
-  const { width, height } = logo.canvas;
-  const alpha = await sharp(bytes).ensureAlpha().extractChannel(3).toBuffer();
-  let out = sharp({ create: { width, height, channels: 3, background: fill } }).joinChannel(alpha).png();
-  if (variant === 'reversed') {
-    const marks = await out.toBuffer();
-    out = sharp({ create: { width, height, channels: 4, background: ink ? hexOf(ink) : '#000000' } }).composite([{ input: marks }]).png();
-  }
-  return { body: await out.toBuffer(), contentType: 'image/png', filename };
+  if (previous) await storage.delete(previous.key);
+  return logoView(logo);
+}
+
+/** Drop the designer's own file for a slot: the computed version is used again. */
+export async function deleteLogoVariant(caller: Caller, brand: Brand, logoId: string, slot: LogoVariantSlot): Promise<IdentityLogo> {
+  const logo = await logoOf(brand, logoId);
+  const previous = logo.variantFiles?.[slot];
+  if (!previous) throw new ApiError(404, 'not_found', 'This logo has no file of its own for that version.');
+  const { [slot]: _gone, ...rest } = logo.variantFiles;
+  await sequelize.transaction(async (t) => {
+    await logo.update({ variantFiles: rest }, { transaction: t });
+    await audit(brandAudit(caller, brand, 'logo.variant.delete', 'logo', logo.id, { slot }), t);
+  });
+  await storage.delete(previous.key);
+  return logoView(logo);
 }
 
 // ---------------------------------------------------------------- typefaces

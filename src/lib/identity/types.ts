@@ -25,6 +25,16 @@ export interface IdentityColor extends ColorValues {
 export const LOGO_VARIANTS = ['primary', 'secondary', 'mark', 'wordmark', 'lockup', 'monogram'] as const;
 export type LogoVariant = (typeof LOGO_VARIANTS)[number];
 
+/** The versions of a logo a designer may supply as files of their own, each winning over the computed one. */
+export const LOGO_VARIANT_SLOTS = ['black', 'white', 'reversed', 'on-dark'] as const;
+export type LogoVariantSlot = (typeof LOGO_VARIANT_SLOTS)[number];
+export const LOGO_VARIANT_SLOT_LABELS: Record<LogoVariantSlot, string> = {
+  black: 'One colour, dark ink (for light grounds)',
+  white: 'One colour, white (for dark grounds)',
+  reversed: 'Reversed (for brand-colour grounds)',
+  'on-dark': 'Full colour for dark grounds',
+};
+
 export interface Box {
   x: number;
   y: number;
@@ -57,7 +67,9 @@ export interface IdentityLogo {
     printMm: number;
   };
   /** Where to fetch the file and its recoloured variants (members only). */
-  files: { original: string; black: string; white: string; reversed: string };
+  files: { original: string; black: string; white: string; reversed: string; onDark?: string };
+  /** Slots for which the designer uploaded a file of their own (the computed version is used for the rest). */
+  ownVariants?: LogoVariantSlot[];
   position: number;
 }
 

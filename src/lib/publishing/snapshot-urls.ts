@@ -14,7 +14,7 @@ export function withVersionUrls(identity: Identity, slug: string, number: number
     assets: identity.assets?.map((a) => (files[a.id] ? { ...a, url: `${base}/${a.id}` } : a)),
     logos: identity.logos.map((l) => {
       const url = `${base}/${l.id}`;
-      return { ...l, files: { original: url, black: `${url}?variant=black`, white: `${url}?variant=white`, reversed: `${url}?variant=reversed` } };
+      return { ...l, files: { original: url, black: `${url}?variant=black`, white: `${url}?variant=white`, reversed: `${url}?variant=reversed`, onDark: `${url}?variant=on-dark` } };
     }),
     typefaces: identity.typefaces.map((f) => ({ ...f, fileUrl: f.licence.confirmed ? `${base}/${f.id}` : '' })),
   };

@@ -27,6 +27,9 @@ export interface VersionView {
   draftRevision: number;
 }
 
+/** The key of a logo's own version file inside a version's files. */
+export const versionVariantFileId = (logoId: string, slot: string) => `${logoId}~${slot}`;
+
 /** Copy every file the identity refers to, so later edits or deletions cannot reach this version. */
 async function copyFiles(brand: Brand, identity: Identity, doc: GuidelineDoc): Promise<Record<string, VersionFile>> {
   const files: Record<string, VersionFile> = {};
@@ -41,13 +44,18 @@ async function copyFiles(brand: Brand, identity: Identity, doc: GuidelineDoc): P
     await storage.put(key, bytes, image.mime);
     files[image.id] = { key, contentType: image.mime };
   }
-  const logos = await BrandLogo.findAll({ where: { brandId: brand.id }, attributes: ['id', 'storageKey', 'format'] });
+  const logos = await BrandLogo.findAll({ where: { brandId: brand.id }, attributes: ['id', 'storageKey', 'format', 'variantFiles'] });
+  const copy = async (fileId: string, storageKey: string, format: 'svg' | 'png') => {
+    const bytes = await storage.get(storageKey);
+    if (!bytes) return;
+    const key = newKey(brand.id, 'version', format);
+    await storage.put(key, bytes, format === 'svg' ? 'image/svg+xml' : 'image/png');
+    files[fileId] = { key, contentType: format === 'svg' ? 'image/svg+xml' : 'image/png' };
+  };
   for (const logo of logos) {
-    const bytes = await storage.get(logo.storageKey);
-    if (!bytes) continue;
-    const key = newKey(brand.id, 'version', logo.format);
-    await storage.put(key, bytes, logo.format === 'svg' ? 'image/svg+xml' : 'image/png');
-    files[logo.id] = { key, contentType: logo.format === 'svg' ? 'image/svg+xml' : 'image/png' };
+    await copy(logo.id, logo.storageKey, logo.format);
+    // The designer's own version files travel with the version, under "<logo id>~<slot>".
+    for (const [slot, own] of Object.entries(logo.variantFiles ?? {})) if (own) await copy(versionVariantFileId(logo.id, slot), own.key, own.format);
   }
   const licensed = new Set(identity.typefaces.filter((f) => f.licence.confirmed).map((f) => f.id));
   const faces = await BrandTypeface.findAll({ where: { brandId: brand.id } });

@@ -1,10 +1,10 @@
 // Pick a rendition of one asset (format, width, background, variant or a ready-made preset) and get its link.
 import { useState } from 'react';
-import { PRINT_CAUTION } from '../../../lib/cautions';
+import { PRINT_CAUTION, VECTOR_PRINT_NOTE } from '../../../lib/cautions';
 import { MAX_WIDTH, MIN_WIDTH, PRESET_INFO, RENDITION_PRESETS, type RenditionPreset } from '../../../lib/assets/kinds';
 import type { ShelfAsset } from './AssetShelf';
 
-type Format = 'png' | 'jpg' | 'webp' | 'svg' | 'tiff';
+type Format = 'png' | 'jpg' | 'webp' | 'svg' | 'tiff' | 'pdf' | 'eps';
 type Variant = 'original' | 'black' | 'white' | 'reversed' | 'one-colour';
 
 export function RenditionPicker({ asset, brandColors }: { asset: ShelfAsset; brandColors: { name: string; hex: string }[] }) {
@@ -14,6 +14,7 @@ export function RenditionPicker({ asset, brandColors }: { asset: ShelfAsset; bra
   const [background, setBackground] = useState('transparent');
   const [variant, setVariant] = useState<Variant>('original');
   const [color, setColor] = useState(brandColors[0]?.hex ?? '#000000');
+  const [colorSpace, setColorSpace] = useState<'cmyk' | 'rgb'>('cmyk');
 
   if (!asset.renderable) {
     return (
@@ -31,19 +32,23 @@ export function RenditionPicker({ asset, brandColors }: { asset: ShelfAsset; bra
     q.set('preset', preset);
     if ((preset === 'social-avatar' || preset === 'print') && widthOk) q.set('width', String(n));
     if (preset !== 'print' && background !== 'transparent') q.set('background', background);
+  } else if (format === 'pdf' || format === 'eps') {
+    q.set('format', format);
+    q.set('colorSpace', colorSpace);
   } else {
     q.set('format', format);
     if (format !== 'svg' && widthOk) q.set('width', String(n));
     if (background !== 'transparent' || format === 'jpg' || format === 'tiff') q.set('background', background === 'transparent' ? '#ffffff' : background);
   }
-  if (asset.kind === 'logo' && variant !== 'original') {
+  const vectorPrint = !preset && (format === 'pdf' || format === 'eps');
+  if (asset.kind === 'logo' && variant !== 'original' && !vectorPrint) {
     q.set('variant', variant);
     if (variant === 'one-colour' || variant === 'reversed') q.set('color', color);
   }
   q.set('download', '1');
   const href = `${asset.files.original}?${q}`;
-  const print = preset === 'print' || format === 'tiff';
-  const needsWidth = preset === '' ? format !== 'svg' : preset === 'social-avatar' || preset === 'print';
+  const print = preset === 'print' || (!preset && (format === 'tiff' || format === 'pdf' || format === 'eps'));
+  const needsWidth = preset === '' ? format !== 'svg' && !vectorPrint : preset === 'social-avatar' || preset === 'print';
   const id = (s: string) => `${s}-${asset.id}`;
   // What the button gives, in words: "PNG, 1024 px wide, on a transparent ground".
   const describe = () => {
@@ -73,7 +78,10 @@ export function RenditionPicker({ asset, brandColors }: { asset: ShelfAsset; bra
               <option value="jpg">JPEG</option>
               <option value="webp">WebP</option>
               <option value="tiff">TIFF, CMYK for print</option>
+              {asset.format === 'svg' && <option value="pdf">PDF, vector for print</option>}
+              {asset.format === 'svg' && <option value="eps">EPS, vector for print</option>}
             </select>
+            {asset.kind === 'logo' && asset.format !== 'svg' && <p className="hint">No PDF or EPS: this logo is a raster image, and a print file around its pixels would not be vector. Ask the designer for the SVG.</p>}
           </div>
         )}
         {needsWidth && (
@@ -83,7 +91,17 @@ export function RenditionPicker({ asset, brandColors }: { asset: ShelfAsset; bra
             <p id={id('width-hint')} className={widthOk ? 'hint' : 'error-text'}>{MIN_WIDTH}–{MAX_WIDTH} px</p>
           </div>
         )}
-        <div>
+        {vectorPrint && (
+          <div>
+            <label className="label" htmlFor={id('space')}>Colour</label>
+            <select id={id('space')} className="field py-1.5 text-sm" value={colorSpace} onChange={(e) => setColorSpace(e.target.value as 'cmyk' | 'rgb')}>
+              <option value="cmyk">CMYK</option>
+              <option value="rgb">RGB</option>
+            </select>
+            <p className="hint">The logo as drawn, page cut to its drawn bounds.</p>
+          </div>
+        )}
+        {!vectorPrint && <div>
           <label className="label" htmlFor={id('bg')}>Background</label>
           <select id={id('bg')} className="field py-1.5 text-sm" value={background} onChange={(e) => setBackground(e.target.value)}>
             <option value="transparent">Transparent</option>
@@ -91,20 +109,20 @@ export function RenditionPicker({ asset, brandColors }: { asset: ShelfAsset; bra
             <option value="#000000">Black</option>
             {brandColors.map((c) => <option key={c.hex + c.name} value={c.hex}>{c.name} {c.hex}</option>)}
           </select>
-        </div>
-        {asset.kind === 'logo' && (
+        </div>}
+        {asset.kind === 'logo' && !vectorPrint && (
           <div>
             <label className="label" htmlFor={id('variant')}>Colour version</label>
             <select id={id('variant')} className="field py-1.5 text-sm" value={variant} onChange={(e) => setVariant(e.target.value as Variant)}>
               <option value="original">As designed</option>
-              <option value="black">All black</option>
-              <option value="white">All white</option>
-              <option value="reversed">White on a colour field</option>
+              <option value="black">One colour: black</option>
+              <option value="white">One colour: white, transparent ground</option>
+              <option value="reversed">White on a colour field (shapes in the ground colour cut out)</option>
               <option value="one-colour">One brand colour</option>
             </select>
           </div>
         )}
-        {asset.kind === 'logo' && (variant === 'one-colour' || variant === 'reversed') && (
+        {asset.kind === 'logo' && !vectorPrint && (variant === 'one-colour' || variant === 'reversed') && (
           <div>
             <label className="label" htmlFor={id('ink')}>{variant === 'reversed' ? 'Field colour' : 'Ink'}</label>
             <select id={id('ink')} className="field py-1.5 text-sm" value={color} onChange={(e) => setColor(e.target.value)}>
@@ -113,7 +131,7 @@ export function RenditionPicker({ asset, brandColors }: { asset: ShelfAsset; bra
           </div>
         )}
       </div>
-      {print && <p className="rounded bg-warn-wash p-2 text-warn">{PRINT_CAUTION}</p>}
+      {print && <p className="rounded bg-warn-wash p-2 text-warn">{PRINT_CAUTION}{vectorPrint ? ` ${VECTOR_PRINT_NOTE}` : ''}</p>}
       <a className={`btn-primary px-3 py-1.5 ${needsWidth && !widthOk ? 'pointer-events-none opacity-60' : ''}`} href={href} aria-disabled={needsWidth && !widthOk}>Download</a>
       <p className="text-xs text-ink-soft">{describe()}</p>
     </form>

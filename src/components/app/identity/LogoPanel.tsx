@@ -7,7 +7,7 @@ import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { api } from '../../../lib/client/api';
 import { TRADEMARK_CAUTION } from '../../../lib/cautions';
-import { LOGO_VARIANTS, type Box, type IdentityColor, type IdentityLogo, type LogoVariant } from '../../../lib/identity/types';
+import { LOGO_VARIANT_SLOT_LABELS, LOGO_VARIANT_SLOTS, LOGO_VARIANTS, type Box, type IdentityColor, type IdentityLogo, type LogoVariant, type LogoVariantSlot } from '../../../lib/identity/types';
 import { Caution, IdentityRoot, inkOn, LoadState, messageOf, Notice, uploadWithProgress, useIdentity, useRefreshIdentity } from './shared';
 
 type NoticeState = { kind: 'ok' | 'error'; text: string } | null;
@@ -22,7 +22,7 @@ const VARIANT_LABEL: Record<LogoVariant, string> = {
   lockup: 'Lockup',
   monogram: 'Monogram',
 };
-const FILE_LABEL: Record<FileKind, string> = { original: 'As uploaded', black: 'Black', white: 'White', reversed: 'Reversed' };
+const FILE_LABEL: Record<FileKind, string> = { original: 'As uploaded', black: 'Black', white: 'White', reversed: 'Reversed', onDark: 'For dark grounds' };
 const LIGHT = '#ffffff';
 const DARK = '#1c1a17';
 
@@ -283,6 +283,11 @@ function LogoCard({ brandId, logo, brandColor, canEdit, onNotice }: { brandId: s
             <Tile src={logo.files.white} ground={DARK} label="White, on dark" />
             <Tile src={logo.files.reversed} ground={brandColor?.hex ?? DARK} label={`Reversed, on ${brandColor?.name ?? 'dark'}`} />
           </div>
+          <p className="text-xs text-ink-soft">
+            One-colour versions are computed from the drawing: shapes painted in the ground’s colour are cut out, so they show whatever ground the logo sits on.
+            {logo.format === 'png' ? ' From a PNG they are traced pixel by pixel; upload a vector file of your own for print.' : ''}
+          </p>
+          <OwnVariants brandId={brandId} logo={logo} canEdit={canEdit} onNotice={onNotice} />
         </div>
 
         <div className="space-y-5">
@@ -318,6 +323,75 @@ function LogoCard({ brandId, logo, brandColor, canEdit, onNotice }: { brandId: s
         </div>
       </div>
     </li>
+  );
+}
+
+/** The designer's own files for the one-colour and dark-ground versions; each wins everywhere over the computed one. */
+function OwnVariants({ brandId, logo, canEdit, onNotice }: { brandId: string; logo: IdentityLogo; canEdit: boolean; onNotice: (n: NoticeState) => void }) {
+  const id = useId();
+  const refresh = useRefreshIdentity(brandId);
+  const own = new Set(logo.ownVariants ?? []);
+  const [busy, setBusy] = useState<LogoVariantSlot | null>(null);
+  const upload = useMutation({
+    mutationFn: ({ slot, file }: { slot: LogoVariantSlot; file: File }) => {
+      const form = new FormData();
+      form.set('file', file);
+      setBusy(slot);
+      return uploadWithProgress<{ logo: IdentityLogo }>(`/api/brands/${brandId}/logos/${logo.id}/variants/${slot}`, form, () => {});
+    },
+    onSuccess: async (_r, { slot }) => {
+      onNotice({ kind: 'ok', text: `Your file is now the “${LOGO_VARIANT_SLOT_LABELS[slot]}” version of ${logo.name}.` });
+      await refresh();
+    },
+    onError: (e) => onNotice({ kind: 'error', text: messageOf(e, 'That file was refused.') }),
+    onSettled: () => setBusy(null),
+  });
+  const drop = useMutation({
+    mutationFn: (slot: LogoVariantSlot) => api(`/api/brands/${brandId}/logos/${logo.id}/variants/${slot}`, { method: 'DELETE' }),
+    onSuccess: async () => {
+      onNotice({ kind: 'ok', text: 'The computed version is used again.' });
+      await refresh();
+    },
+    onError: (e) => onNotice({ kind: 'error', text: messageOf(e, 'The file could not be removed.') }),
+  });
+  if (!canEdit && own.size === 0) return null;
+  return (
+    <section aria-labelledby={`${id}-own`} className="rounded-lg bg-paper px-4 py-3">
+      <h4 id={`${id}-own`} className="text-sm font-semibold">Your own versions</h4>
+      <p className="mt-1 text-xs text-ink-soft">A file uploaded here replaces the computed version on the site, in the PDF, in patterns and in downloads.</p>
+      <ul className="mt-2 space-y-2 text-sm">
+        {LOGO_VARIANT_SLOTS.map((slot) => (
+          <li key={slot} className="flex flex-wrap items-center justify-between gap-2">
+            <span>
+              {LOGO_VARIANT_SLOT_LABELS[slot]}: <span className="font-semibold">{own.has(slot) ? 'your file' : slot === 'on-dark' ? 'the logo as drawn' : 'computed'}</span>
+            </span>
+            {canEdit && (
+              <span className="flex gap-2">
+                <label className="btn-quiet cursor-pointer px-2 py-1 text-xs">
+                  {busy === slot ? 'Uploading…' : own.has(slot) ? 'Replace' : 'Upload SVG or PNG'}
+                  <input
+                    type="file"
+                    accept=".svg,.png,image/svg+xml,image/png"
+                    className="sr-only"
+                    aria-label={`Upload your own file for ${LOGO_VARIANT_SLOT_LABELS[slot]}`}
+                    onChange={(e) => {
+                      const file = e.target.files?.[0];
+                      if (file) upload.mutate({ slot, file });
+                      e.target.value = '';
+                    }}
+                  />
+                </label>
+                {own.has(slot) && (
+                  <button type="button" className="btn-quiet px-2 py-1 text-xs" disabled={drop.isPending} onClick={() => drop.mutate(slot)}>
+                    Use computed
+                  </button>
+                )}
+              </span>
+            )}
+          </li>
+        ))}
+      </ul>
+    </section>
   );
 }
 

@@ -83,6 +83,9 @@ function Tile({ kind, logo, identity, uid }: { kind: MisuseKind; logo: IdentityL
       break;
   }
   const filtered = ['recoloured', 'outlined', 'dropShadow', 'lowContrast'].includes(kind);
+  // Tinting filters read the alpha: the one-colour knockout keeps inner shapes open, the original would fill them.
+  const oneColour = safeAssetUrl(logo.files.black);
+  if (['recoloured', 'outlined', 'lowContrast'].includes(kind) && oneColour) image = <image href={oneColour} x={x} y={y} width={w} height={h} />;
   return (
     <figure className="overflow-hidden rounded-xl border border-black/10 bg-white text-[#1f1f1f]" data-misuse={kind}>
       <svg viewBox={`0 0 ${vw} ${vh}`} role="img" aria-label={`Wrong use: ${MISUSE_LABELS[kind].replace(/^Don’t /, '')}`} className="block h-auto w-full">

@@ -1,4 +1,4 @@
-// A repeat of the brand mark: size, gap, angle, row shift and colours from the block, tinted with an SVG filter.
+// A repeat of the brand mark: size, gap, angle, row shift and colours from the block, its one-colour knockout tinted with an SVG filter.
 import type { PatternAttrs } from '../../../lib/guideline/blocks';
 import { colorForRole, findColor, findLogo } from '../../../lib/guideline/identity';
 import { safeAssetUrl } from '../../../lib/guideline/links';
@@ -8,7 +8,8 @@ export function PatternBlock({ attrs, identity, editing, uid }: BlockRenderProps
   if (!attrs.logoId) return editing ? <EmptyHint>Choose the mark the pattern repeats.</EmptyHint> : null;
   const logo = findLogo(identity, attrs.logoId);
   if (!logo) return <Missing what="logo" />;
-  const src = safeAssetUrl(logo.files.original);
+  // The one-colour knockout, so the tint fills only the ink and inner shapes stay open (not a filled silhouette).
+  const src = safeAssetUrl(logo.files.black);
   if (!src) return <Missing what="logo" detail="Its file address could not be used." />;
   const bg = findColor(identity, attrs.backgroundColorId) ?? colorForRole(identity, 'background');
   const ink = findColor(identity, attrs.markColorId) ?? colorForRole(identity, 'primary');

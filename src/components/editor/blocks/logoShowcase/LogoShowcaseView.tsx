@@ -20,7 +20,7 @@ export function LogoShowcaseView(props: ReactNodeViewProps) {
           <Select
             label="File on dark and brand grounds"
             value={a.onDark}
-            options={[{ value: 'white', label: 'All white' }, { value: 'reversed', label: 'Reversed' }, { value: 'original', label: 'As drawn' }]}
+            options={[{ value: 'white', label: 'One colour, white (inner shapes cut out)' }, { value: 'reversed', label: 'Reversed' }, { value: 'original', label: 'Full colour (your dark-ground file, if uploaded)' }]}
             onChange={(onDark) => set({ onDark })}
           />
           <TextInput label="Caption (optional)" value={a.caption} max={500} onChange={(caption) => set({ caption })} />

@@ -4,17 +4,17 @@ import { endpoint, fileResponse, idParam, methodNotAllowed, parseWith } from '..
 import { logoFile } from '../../../../../../lib/identity/identity.server';
 
 const query = z.strictObject({
-  variant: z.enum(['original', 'black', 'white', 'reversed', 'one-colour']).default('original'),
+  variant: z.enum(['original', 'black', 'white', 'reversed', 'one-colour', 'on-dark']).default('original'),
   color: z.string().max(100).optional(),
   on: z.string().regex(/^#[0-9a-fA-F]{6}$/, 'on must be a six-digit hex colour').optional(),
   download: z.enum(['1']).optional(),
 });
 
-/** The logo file, or a recoloured variant of it (black, white, reversed, one-colour with ?color=). */
+/** The logo file, or a version of it (black, white, reversed, one-colour with ?color=, on-dark); `on` is accepted and no longer needed. */
 export const GET = endpoint(async ({ locals, params, url }) => {
   const { brand } = await authorizeBrand(locals, idParam(params.id), 'draft.read');
   const q = parseWith(query, Object.fromEntries(url.searchParams), 'query');
-  const file = await logoFile(brand, idParam(params.logoId, 'That logo'), q.variant, q.color, q.on);
+  const file = await logoFile(brand, idParam(params.logoId, 'That logo'), q.variant, q.color);
   return fileResponse(file.body, file.contentType, file.filename, { inline: q.download !== '1' });
 });
 

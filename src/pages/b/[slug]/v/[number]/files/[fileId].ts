@@ -1,27 +1,46 @@
 import type { APIRoute } from 'astro';
-import { recolorSvg, reverseOnGround } from '../../../../../../lib/logo';
 import { PRINT_WEIGHTS } from '../../../../../../lib/guideline/identity';
+import { oneColourLogo, type OneColourVariant } from '../../../../../../lib/logo/knockout.server';
 import { siteAccess } from '../../../../../../lib/publishing/site-access.server';
+import { versionVariantFileId } from '../../../../../../lib/publishing/versions.server';
 import { staticInstance } from '../../../../../../lib/type/font-instance.server';
 import { storage } from '../../../../../../lib/storage/index.server';
 
-const VARIANTS = new Set(['black', 'white', 'reversed']);
+const VARIANTS = new Set(['black', 'white', 'reversed', 'on-dark']);
+/** Computed versions of a version's files, which never change: the last hundred kept in memory. */
+const made = new Map<string, { body: Buffer; contentType: string }>();
 
-/** A file of a published version (its own copy of a logo or a licensed font), recoloured for logo variants, or a font at one static weight. */
+/** A file of a published version (its own copy of a logo or a licensed font); logo versions from the one knockout function, fonts at one static weight for print. */
 export const GET: APIRoute = async (context) => {
   const access = await siteAccess(context, context.params.slug!, Number(context.params.number));
   if (access instanceof Response) return new Response('Not found', { status: 404 });
-  // Own keys only: `__proto__`, `constructor` and the like name no file.
+  // Own keys only: `__proto__`, `constructor` and the like name no file; "<logo>~<slot>" files come through ?variant.
   const fileId = context.params.fileId ?? '';
-  const file = Object.hasOwn(access.version.files, fileId) ? access.version.files[fileId] : undefined;
+  let file = Object.hasOwn(access.version.files, fileId) && !fileId.includes('~') ? access.version.files[fileId] : undefined;
   if (!file) return new Response('Not found', { status: 404 });
   let body = await storage.get(file.key);
   if (!body) return new Response('Not found', { status: 404 });
   const variant = context.url.searchParams.get('variant');
-  const on = context.url.searchParams.get('on');
-  if (variant && VARIANTS.has(variant) && file.contentType === 'image/svg+xml') {
-    const svg = body.toString('utf8');
-    body = Buffer.from(variant === 'white' && on && /^#[0-9a-f]{6}$/i.test(on) ? reverseOnGround(svg, on) : recolorSvg(svg, variant as 'black' | 'white' | 'reversed'));
+  const isLogo = file.contentType === 'image/svg+xml' || file.contentType === 'image/png';
+  if (variant && VARIANTS.has(variant) && isLogo) {
+    // The designer's own file for the slot wins; 'on-dark' without one is the logo as drawn.
+    const ownId = versionVariantFileId(fileId, variant);
+    const own = Object.hasOwn(access.version.files, ownId) ? access.version.files[ownId] : undefined;
+    const ownBody = own ? await storage.get(own.key) : null;
+    if (own && ownBody) {
+      body = ownBody;
+      file = own;
+    } else if (variant !== 'on-dark') {
+      const memoKey = `${file.key}|${variant}`;
+      let version = made.get(memoKey);
+      if (!version) {
+        version = await oneColourLogo({ bytes: body, format: file.contentType === 'image/svg+xml' ? 'svg' : 'png' }, variant as OneColourVariant);
+        made.set(memoKey, version);
+        if (made.size > 100) made.delete(made.keys().next().value!);
+      }
+      body = version.body;
+      file = { ...file, contentType: version.contentType };
+    }
   }
   // The print edition asks for a variable font as one static weight (?weight=400|500|600|700).
   const weight = Number(context.url.searchParams.get('weight'));
