@@ -60,7 +60,7 @@ it('OWASP SSRF Prevention Cheat Sheet / ASVS 5.0 V1.3.6 (allow list for server-s
     type: 'doc',
     content: [
       { type: 'sectionHeading', attrs: { id: 's1', title: 'Imagery', eyebrow: '', intro: '' } },
-      { type: 'imagery', attrs: { id: 'img', columns: 2, items: [{ src: 'https://example.org/placeholder.jpg', alt: 'A loaf', verdict: 'do', caption: 'Warm light' }] } },
+      { type: 'imagery', attrs: { id: 'img', columns: 2, items: [{ src: 'photo-to-come-1', alt: 'A loaf', verdict: 'do', caption: 'Warm light' }] } },
     ],
   };
   expect((await owner.request('PUT', `${base}/guideline`, { baseRevision: 0, doc })).status).toBe(200);
