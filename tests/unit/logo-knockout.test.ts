@@ -52,6 +52,14 @@ describe('paint sorting (WCAG 2.2 relative luminance)', () => {
 });
 
 describe('SVG knockouts, read back by pixel sampling (shapes inside shapes)', () => {
+  test('for print on a known ground: the tree painted in the ground colour, no mask, same look (PDF writers rasterise masks)', async () => {
+    const painted = knockoutSvg(fixture('disc-tree.svg'), { ink: '#ffffff', paintOn: '#1d2a44' });
+    expect(painted).not.toMatch(/<mask/i);
+    const px = await sampler(painted, 2);
+    expect(px(15, 50), 'the disc is the ink').toEqual([255, 255, 255, 255]);
+    expect(px(50, 40), 'the tree is the ground colour').toEqual([0x1d, 0x2a, 0x44, 255]);
+    expect(px(3, 3)[3], 'outside the disc stays transparent').toBe(0);
+  });
   test('a light tree on a navy disc: disc in the ink, the tree cut out, outside transparent', async () => {
     for (const ink of ['#ffffff', '#000000', '#c8553d']) {
       const px = await sampler(knockoutSvg(fixture('disc-tree.svg'), { ink }), 2);

@@ -64,8 +64,11 @@ export function Note({ text }: { text: string }) {
 }
 
 /** A logo file as an <img>, or nothing when the address is not one we may load; one-colour files have transparent grounds. */
-export function LogoImage({ logo, file = 'original', className, style, mode = 'site' }: { logo: IdentityLogo; file?: keyof IdentityLogo['files']; on?: string; className?: string; style?: React.CSSProperties; mode?: RenderMode }) {
-  const src = safeAssetUrl(logo.files[file] ?? logo.files.original);
+export function LogoImage({ logo, file = 'original', on, className, style, mode = 'site' }: { logo: IdentityLogo; file?: keyof IdentityLogo['files']; on?: string; className?: string; style?: React.CSSProperties; mode?: RenderMode }) {
+  const base = safeAssetUrl(logo.files[file] ?? logo.files.original);
+  // On paper the ground is known: a one-colour file painted on it stays vector (a cut-out needs a mask, which PDFs rasterise).
+  const painted = mode === 'print' && on && /^#[0-9a-f]{6}$/i.test(on) && (file === 'white' || file === 'black' || file === 'reversed') && base && logo.format === 'svg';
+  const src = painted ? `${base}${base.includes('?') ? '&' : '?'}on=${encodeURIComponent(on)}` : base;
   if (!src) return <Missing what="logo" detail="Its file address could not be used." />;
   // The print edition loads every image before Chromium prints; the site loads them as the reader scrolls.
   return <img src={src} alt={logo.name} className={className} style={style} loading={mode === 'print' ? 'eager' : 'lazy'} decoding="async" />;

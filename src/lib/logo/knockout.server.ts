@@ -79,11 +79,11 @@ export interface VariantOverride {
 export async function oneColourLogo(
   logo: { bytes: Buffer; format: 'svg' | 'png' | 'webp' | 'jpeg' },
   variant: OneColourVariant,
-  options: { ink?: string | null; override?: VariantOverride | null } = {},
+  options: { ink?: string | null; override?: VariantOverride | null; paintOn?: string | null } = {},
 ): Promise<{ body: Buffer; format: 'svg' | 'png'; contentType: string }> {
   const { override } = options;
   if (override) return { body: override.bytes, format: override.format, contentType: override.format === 'svg' ? 'image/svg+xml' : 'image/png' };
   const ink = variantInk(variant, options.ink);
-  if (logo.format === 'svg') return { body: Buffer.from(knockoutSvg(logo.bytes.toString('utf8'), { ink })), format: 'svg', contentType: 'image/svg+xml' };
+  if (logo.format === 'svg') return { body: Buffer.from(knockoutSvg(logo.bytes.toString('utf8'), { ink, paintOn: options.paintOn ?? undefined })), format: 'svg', contentType: 'image/svg+xml' };
   return { body: await knockoutRaster(logo.bytes, ink), format: 'png', contentType: 'image/png' };
 }

@@ -138,6 +138,11 @@ export interface KnockoutOptions {
   ink: string;
   /** The ground the logo was drawn for; found from its paints when left out. */
   ground?: DrawnGround;
+  /**
+   * For print on a known solid ground: paint the knockout shapes in this colour instead of cutting them out. The look
+   * is the same on that ground, and the file needs no mask, which PDF writers (Chromium's among them) turn into images.
+   */
+  paintOn?: string;
 }
 
 /**
@@ -162,6 +167,13 @@ export function knockoutSvg(svgText: string, options: KnockoutOptions): string {
   const hasColor = inherited.some((a) => /^color\s*=/i.test(a));
   const groupAttrs = [hasFill ? '' : ` fill="${defaultPaint}"`, hasColor ? '' : ` color="${defaultPaint}"`, ...inherited.map((a) => ` ${a}`)].join('');
   const drawing = maskPaints(`<g${groupAttrs}>${inner}</g>`, ground);
+  if (options.paintOn !== undefined) {
+    const groundResult = parseColor(options.paintOn);
+    if (!groundResult.ok) throw new LogoError('invalid_input', `The ground colour: ${groundResult.error.message}`);
+    const paint = (hex: string) => (c: string) => (c.toLowerCase().startsWith(hex) ? `${hex === MASK_INK ? ink : groundResult.color.hex}${c.slice(7)}` : c);
+    const painted = drawing.replace(/#ffffff(?:[0-9a-f]{2})?\b/gi, paint(MASK_INK)).replace(/#000000(?:[0-9a-f]{2})?\b/gi, paint(MASK_KNOCKOUT));
+    return `<svg${bareRoot}>${painted}</svg>`;
+  }
   const { x, y, width, height } = clean.viewBox;
   // Room around the viewBox for strokes that run past it; the root still clips to its viewport.
   const pad = Math.max(width, height);

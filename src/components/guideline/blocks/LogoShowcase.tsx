@@ -19,7 +19,7 @@ export function LogoShowcaseBlock({ attrs, identity, mode, editing }: BlockRende
               {grounds.map((ground) => (
                 <div key={ground.key} data-ground={ground.key} className="flex aspect-[3/2] flex-col rounded-xl border border-black/10 p-3" style={{ backgroundColor: safeHex(ground.hex, '#ffffff') }}>
                   <div className="flex flex-1 items-center justify-center p-4">
-                    <LogoImage logo={logo} file={ground.key === 'light' ? 'original' : attrs.onDark === 'original' ? 'onDark' : attrs.onDark} className="max-h-24 max-w-[80%] object-contain" mode={mode} />
+                    <LogoImage logo={logo} file={ground.key === 'light' ? 'original' : attrs.onDark === 'original' ? 'onDark' : attrs.onDark} on={ground.hex} className="max-h-24 max-w-[80%] object-contain" mode={mode} />
                   </div>
                   <span className={`self-start rounded bg-white/85 px-1.5 py-0.5 text-[11px] font-semibold text-[#1f1f1f]`}>
                     {ground.label}

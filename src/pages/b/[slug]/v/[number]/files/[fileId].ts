@@ -31,10 +31,13 @@ export const GET: APIRoute = async (context) => {
       body = ownBody;
       file = own;
     } else if (variant !== 'on-dark') {
-      const memoKey = `${file.key}|${variant}`;
+      // The print edition asks for a knockout painted on its known ground (?on=#rrggbb): vector all the way to the PDF.
+      const on = context.url.searchParams.get('on');
+      const paintOn = on && /^#[0-9a-f]{6}$/i.test(on) ? on : null;
+      const memoKey = `${file.key}|${variant}|${paintOn ?? ''}`;
       let version = made.get(memoKey);
       if (!version) {
-        version = await oneColourLogo({ bytes: body, format: file.contentType === 'image/svg+xml' ? 'svg' : 'png' }, variant as OneColourVariant);
+        version = await oneColourLogo({ bytes: body, format: file.contentType === 'image/svg+xml' ? 'svg' : 'png' }, variant as OneColourVariant, { paintOn });
         made.set(memoKey, version);
         if (made.size > 100) made.delete(made.keys().next().value!);
       }
