@@ -41,6 +41,9 @@ describe('paint sorting (WCAG 2.2 relative luminance)', () => {
     ['#f4efe3', 'light', 'knockout'],
     ['#f4efe3', 'dark', 'ink'],
     ['#1d2b53', 'dark', 'knockout'],
+    // A brick-red accent rule (luminance ≈ 0.19) stands out on both grounds (≥ 3:1, WCAG 2.2 SC 1.4.11): it stays ink.
+    ['#c8553d', 'light', 'ink'],
+    ['#c8553d', 'dark', 'ink'],
   ] as const)('%s on a %s ground is %s', (hex, ground, role) => {
     expect(paintRole(paintLuminance(hex)!, ground)).toBe(role);
   });

@@ -37,10 +37,19 @@ export function paintLuminance(value: string): number | undefined {
   return relativeLuminance([1, 3, 5].map((i) => parseInt(hex.slice(i, i + 2), 16)) as [number, number, number]);
 }
 
-/** Ink when a paint of this luminance stands out from the ground, knockout when it reads as the ground itself. */
+/**
+ * Below this contrast against its ground a shape does not stand out as a graphic (WCAG 2.2 SC 1.4.11, non-text
+ * contrast, 3:1): such a shape reads as the ground itself and becomes a hole.
+ */
+export const KNOCKOUT_CONTRAST = 3;
+
+/**
+ * Ink when a paint stands out from the ground, knockout when it reads as the ground itself (under 3:1 against white on
+ * a light ground, against black on a dark one). Mid-tones, such as a red accent rule, stay ink.
+ */
 export function paintRole(luminance: number, ground: DrawnGround): PaintRole {
-  const light = luminance > GROUND_SPLIT_LUMINANCE;
-  return (ground === 'light') === light ? 'knockout' : 'ink';
+  const contrast = ground === 'light' ? 1.05 / (luminance + 0.05) : (luminance + 0.05) / 0.05;
+  return contrast < KNOCKOUT_CONTRAST ? 'knockout' : 'ink';
 }
 
 /** Every paint of an SVG passed through `paint`: attributes, inline styles and <style> sheets. */
