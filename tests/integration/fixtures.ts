@@ -1,5 +1,6 @@
 // People and brands for integration tests, created through the public API like a real studio would.
-import { Client, joinBrand, signUpFresh } from '../support/client';
+import { Client, signUpFresh } from '../support/client';
+import { sql } from '../support/db';
 import type { BrandRole } from '../../src/lib/auth/roles';
 import { makeClientWork } from './client-fixture';
 
@@ -62,16 +63,25 @@ export async function makeBrand(cast: Cast, name = 'Fixture Brand'): Promise<Fix
   const created = await owner.post('/api/brands', { name });
   if (created.status !== 201) throw new Error(`brand create answered ${created.status}`);
   const brandId: string = created.body.brand.id;
-  // Each person is invited and accepts, as nobody joins a brand without acting.
-  const person = (name: 'editor' | 'reviewer' | 'partner' | 'viewer') => ({ client: cast.clients[name], email: cast.emails[name] });
-  const roles: [{ client: Client; email: string }, BrandRole][] = [
-    [person('editor'), 'editor'],
-    [person('reviewer'), 'reviewer'],
-    [person('partner'), 'partner'],
-    [person('viewer'), 'viewer'],
+  // Memberships are written directly: this fixture is rebuilt for every one of several hundred matrix cases, and
+  // joining through an invitation (tests/hostile/accounts.test.ts, invitations.test.ts) has tests of its own.
+  const members: [string, BrandRole][] = [
+    [cast.emails.editor, 'editor'],
+    [cast.emails.reviewer, 'reviewer'],
+    [cast.emails.partner, 'partner'],
+    [cast.emails.viewer, 'viewer'],
+    [cast.target.email, 'viewer'],
   ];
-  for (const [who, role] of roles) await joinBrand(owner, brandId, who, role);
-  const targetMemberId = await joinBrand(owner, brandId, cast.target, 'viewer');
+  const rows = await sql(
+    `INSERT INTO brand_members (id, brand_id, user_id, role, created_at, updated_at)
+     SELECT gen_random_uuid(), $1, u.id, m.role::"enum_brand_members_role", now(), now()
+       FROM unnest($2::text[], $3::text[]) AS m(email, role) JOIN "user" u ON u.email = m.email
+     RETURNING id, user_id`,
+    [brandId, members.map((m) => m[0]), members.map((m) => m[1])],
+  );
+  if (rows.length !== members.length) throw new Error(`fixture members: ${rows.length} of ${members.length} written`);
+  const [targetUser] = await sql('SELECT id FROM "user" WHERE email = $1', [cast.target.email]);
+  const targetMemberId: string = rows.find((r) => r.user_id === targetUser.id).id;
   const color = await owner.post(`/api/brands/${brandId}/colors`, { name: 'Ink', value: '#1d2a44' });
   const typeface = await owner.post(`/api/brands/${brandId}/typefaces`, { shipped: 'dm-sans', role: 'body' });
   const logo = await owner.upload(`/api/brands/${brandId}/logos`, 'mark.svg', FIXTURE_SVG, 'image/svg+xml');

@@ -1,7 +1,8 @@
 // Every API route × every kind of caller → the status the policy promises (PRODUCT.md "People and roles").
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join, relative } from 'node:path';
-import { beforeAll, describe, expect, test } from 'vitest';
+import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { closeDb } from '../support/db';
 import { CALLERS, makeBrand, makeCast, type Cast } from './fixtures';
 import type { Route } from './matrix/route';
 
@@ -12,6 +13,7 @@ let cast: Cast;
 beforeAll(async () => {
   cast = await makeCast();
 });
+afterAll(closeDb);
 
 describe.each(ROUTES)('$method $file', (route) => {
   test.each(CALLERS.map((c) => [c, route.expect[c]] as const))('%s → %i', async (caller, status) => {
