@@ -50,16 +50,28 @@ const server = http.createServer((req, res) => {
       .pipe(res);
     return;
   }
-  // A body refused part-way (413) is never read to its end, so the connection cannot carry another request: say so
-  // in the answer, and if the client still has not stopped a moment later (time to read the answer), drop it.
+  // A body refused part-way (413, or 401 before an upload is read) is never read to its end, so the connection cannot
+  // carry another request: the answer says so. Node would then close the socket at once, and a client still sending
+  // would meet a reset instead of reading the answer; so the close is a half-close: the rest is read and discarded,
+  // and the socket goes when the client stops, or 2 s later if it keeps sending.
   const writeHead = res.writeHead;
   res.writeHead = function (...args) {
-    if (!req.complete) res.setHeader('connection', 'close');
+    if (!req.complete) {
+      res.setHeader('connection', 'close');
+      const socket = req.socket;
+      socket.destroySoon = function () {
+        this.end();
+        req.resume();
+        const timer = setTimeout(() => this.destroy(), 2000);
+        timer.unref();
+        this.once('end', () => {
+          clearTimeout(timer);
+          this.destroy();
+        });
+      };
+    }
     return writeHead.apply(this, args);
   };
-  res.on('finish', () => {
-    if (!req.complete) setTimeout(() => !req.complete && req.socket.destroy(), 2000).unref();
-  });
   // No `next`: a path no route matches gets Astro's own 404 page.
   handler(req, res, undefined, { socketAddress: req.socket.remoteAddress });
 });

@@ -7,7 +7,7 @@ import { parse as parseCss, walk } from 'css-tree';
 import { parse as parseHtml } from 'parse5';
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { signUpFresh, type Client } from '../support/client';
+import { signUpFresh, type Client, joinBrand } from '../support/client';
 import { closeDb, sql } from '../support/db';
 import { lastMailTo, mailTo } from '../support/mailbox';
 
@@ -72,7 +72,7 @@ beforeAll(async () => {
   const brand = (await owner.post('/api/brands', { name: 'Quillwort Press' })).body.brand;
   brandId = brand.id;
   slug = brand.slug;
-  expect((await owner.post(api('/members'), { email: followerEmail, role: 'viewer' })).status).toBe(201);
+  await joinBrand(owner, brandId, { client: follower, email: followerEmail }, 'viewer');
   expect((await follower.request('PUT', api('/follow'))).status).toBe(200);
   logoId = (await owner.upload(api('/logos'), 'mark.svg', logoSvg, 'image/svg+xml', { variant: 'primary' })).body.logo.id;
   const face = await owner.upload(api('/typefaces'), 'heading.woff2', woff2, 'font/woff2', { role: 'heading', family: 'Quill Sans' });
