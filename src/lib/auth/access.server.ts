@@ -24,18 +24,11 @@ export const unverifiedError = (email: string) =>
   new ApiError(403, 'email_unverified', `Confirm your e-mail address first: open the link we sent to ${email}, or ask for a new one on your dashboard (/app).`);
 
 /**
- * Whether the signed-in person has proven their address. The session's copy may be a minute old (cookie cache),
- * so a "no" is checked against the database: a link opened in another browser counts at once.
+ * Whether the signed-in person has proven their address. The session is read from the database on every request
+ * (no cookie cache, see auth-options.ts), so a link opened in another browser counts at once.
  */
 export async function isVerified(locals: App.Locals): Promise<boolean> {
-  if (!locals.user) return false;
-  if (locals.user.emailVerified) return true;
-  const [row] = await sequelize.query<{ verified: boolean }>('SELECT "emailVerified" AS verified FROM "user" WHERE id = :id', {
-    replacements: { id: locals.user.id },
-    type: QueryTypes.SELECT,
-  });
-  if (row?.verified) locals.user.emailVerified = true;
-  return !!row?.verified;
+  return !!locals.user?.emailVerified;
 }
 
 /** The signed-in caller with a proven address; 401 when anonymous, 403 `email_unverified` otherwise. */

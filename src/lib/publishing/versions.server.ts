@@ -33,29 +33,24 @@ export const versionVariantFileId = (logoId: string, slot: string) => `${logoId}
 /** Copy every file the identity refers to, so later edits or deletions cannot reach this version. */
 async function copyFiles(brand: Brand, identity: Identity, doc: GuidelineDoc): Promise<Record<string, VersionFile>> {
   const files: Record<string, VersionFile> = {};
+  const copy = async (fileId: string, storageKey: string, format: string, contentType: string) => {
+    const bytes = await storage.get(storageKey);
+    if (!bytes) return;
+    const key = newKey(brand.id, 'version', format);
+    await storage.put(key, bytes, contentType);
+    files[fileId] = { key, contentType };
+  };
+  const logoType = (format: 'svg' | 'png') => (format === 'svg' ? 'image/svg+xml' : 'image/png');
   // Imagery shows approved images of the brand's own shelf only, copied like the logos.
   const approvedImages = new Set((identity.assets ?? []).filter((a) => a.kind === 'image').map((a) => a.id));
   const wanted = imageryAssetIds(doc).filter((id) => approvedImages.has(id));
   const images = wanted.length ? await Asset.findAll({ where: { brandId: brand.id, id: wanted, state: 'approved', kind: 'image' }, attributes: ['id', 'storageKey', 'mime', 'format'] }) : [];
-  for (const image of images) {
-    const bytes = await storage.get(image.storageKey);
-    if (!bytes) continue;
-    const key = newKey(brand.id, 'version', image.format);
-    await storage.put(key, bytes, image.mime);
-    files[image.id] = { key, contentType: image.mime };
-  }
+  for (const image of images) await copy(image.id, image.storageKey, image.format, image.mime);
   const logos = await BrandLogo.findAll({ where: { brandId: brand.id }, attributes: ['id', 'storageKey', 'format', 'variantFiles'] });
-  const copy = async (fileId: string, storageKey: string, format: 'svg' | 'png') => {
-    const bytes = await storage.get(storageKey);
-    if (!bytes) return;
-    const key = newKey(brand.id, 'version', format);
-    await storage.put(key, bytes, format === 'svg' ? 'image/svg+xml' : 'image/png');
-    files[fileId] = { key, contentType: format === 'svg' ? 'image/svg+xml' : 'image/png' };
-  };
   for (const logo of logos) {
-    await copy(logo.id, logo.storageKey, logo.format);
+    await copy(logo.id, logo.storageKey, logo.format, logoType(logo.format));
     // The designer's own version files travel with the version, under "<logo id>~<slot>".
-    for (const [slot, own] of Object.entries(logo.variantFiles ?? {})) if (own) await copy(versionVariantFileId(logo.id, slot), own.key, own.format);
+    for (const [slot, own] of Object.entries(logo.variantFiles ?? {})) if (own) await copy(versionVariantFileId(logo.id, slot), own.key, own.format, logoType(own.format));
   }
   const licensed = new Set(identity.typefaces.filter((f) => f.licence.confirmed).map((f) => f.id));
   const faces = await BrandTypeface.findAll({ where: { brandId: brand.id } });
