@@ -52,7 +52,7 @@ function Settings({ brandId, name, slug, origin, canDelete, published }: Props) 
           {notice.text}
         </p>
       )}
-      <form className="grid gap-4 md:grid-cols-2" aria-label="Brand name and address" onSubmit={form.handleSubmit((v) => { setNotice(null); save.mutate(v); })} noValidate>
+      <form className="grid gap-4 md:grid-cols-2" aria-label="Brand name and address" onSubmit={form.handleSubmit((v) => { setNotice(null); save.mutate(v); }, () => setNotice(null))} noValidate>
         <div>
           <label className="label" htmlFor="brand-name">Brand name</label>
           <input id="brand-name" className="field" {...form.register('name')} aria-invalid={!!errors.name} aria-describedby={errors.name ? 'brand-name-error' : undefined} />
