@@ -1,12 +1,18 @@
+import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'vitest/config';
+
+// The same aliases as tsconfig.json: `@/` is src/, `@db/` is db/.
+const alias = { '@/': fileURLToPath(new URL('./src/', import.meta.url)), '@db/': fileURLToPath(new URL('./db/', import.meta.url)) };
 
 // Three kinds of test: pure unit checks, integration over HTTP against the built server and a real
 // PostgreSQL, and browser walks in Debian's chromium. The cluster and server start once, in globalSetup.
 export default defineConfig({
+  resolve: { alias },
   test: {
     projects: [
-      { test: { name: 'unit', include: ['tests/unit/**/*.test.ts', 'src/**/*.test.ts'], environment: 'node' } },
+      { extends: true, test: { name: 'unit', include: ['tests/unit/**/*.test.ts', 'src/**/*.test.ts'], environment: 'node' } },
       {
+        extends: true,
         test: {
           name: 'integration',
           include: ['tests/integration/**/*.test.ts', 'tests/browser/**/*.test.ts', 'tests/hostile/**/*.test.ts'],

@@ -5,11 +5,11 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import sharp from 'sharp';
 import { encode as encodeIco } from 'sharp-ico';
-import { inspectUpload } from '../src/lib/assets/inspect.server';
-import { STANDARD_RENDITIONS } from '../src/lib/assets/kinds';
-import { cachedRendition } from '../src/lib/assets/render.server';
-import { resolveRendition } from '../src/lib/assets/renditions';
-import { LocalDiskStorage } from '../src/lib/storage/local-disk.server';
+import { inspectUpload } from '@/lib/assets/inspect.server';
+import { STANDARD_RENDITIONS } from '@/lib/assets/kinds';
+import { cachedRendition } from '@/lib/assets/render.server';
+import { resolveRendition } from '@/lib/assets/renditions';
+import { LocalDiskStorage } from '@/lib/storage/local-disk.server';
 
 // An invented lockup of our own: a mark and a word-shaped bar.
 const LOGO = '<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 240 80"><circle cx="40" cy="40" r="28" fill="#25433a"/><path d="M28 40h24M40 28v24" stroke="#f2e7d5" stroke-width="5"/><rect x="84" y="28" width="140" height="24" rx="4" fill="#b4532a"/></svg>';

@@ -4,7 +4,7 @@ import { fileURLToPath, pathToFileURL } from 'node:url';
 import { getMigrations } from 'better-auth/db/migration';
 import type { QueryInterface, Sequelize } from 'sequelize';
 import { SequelizeStorage, Umzug } from 'umzug';
-import { authOptions, type AuthSettings } from '../src/lib/auth/auth-options';
+import { authOptions, type AuthSettings } from '@/lib/auth/auth-options';
 
 const here = dirname(fileURLToPath(import.meta.url));
 

@@ -1,13 +1,13 @@
 // `npm start`: Debian packages (installed if missing), PostgreSQL, migrations, demo, build, serve, a readiness list.
 import { join } from 'node:path';
 import pg from 'pg';
-import { DEMO_PASSWORD, DEMO_PEOPLE } from '../db/seeders/demo';
+import { DEMO_PASSWORD, DEMO_PEOPLE } from '@db/seeders/demo';
 import { CHROMIUM, CHROMIUM_PATH, ensureDebianPackages, GHOSTSCRIPT, MACHINE_PACKAGES, POSTGRESQL } from './lib/debian';
 import { publishDemo } from './lib/demo-publish';
 import { buildApp, prepareDatabase, startServer } from './lib/prepare';
 import { startCluster } from './lib/postgres';
 import { checkBrowser, checkDatabase, checkMail, checkStorage, formatChecks } from './lib/readiness';
-import { startFakeSmtp } from '../src/lib/mail/fake-smtp';
+import { startFakeSmtp } from '@/lib/mail/fake-smtp';
 import { authSecret, dataDir, demoEnabled, filesDir, host, pgPort, port, siteUrl } from './lib/settings';
 
 const started = Date.now();

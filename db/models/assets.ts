@@ -1,7 +1,7 @@
 // Models of the asset shelf: uploaded originals, the index of generated renditions, and the download log.
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import type { Box } from '../../src/lib/logo/geometry';
-import type { AssetFormat, AssetKind, AssetState } from '../../src/lib/assets/kinds';
+import type { Box } from '@/lib/logo/geometry';
+import type { AssetFormat, AssetKind, AssetState } from '@/lib/assets/kinds';
 
 export class Asset extends Model<InferAttributes<Asset>, InferCreationAttributes<Asset>> {
   declare id: CreationOptional<string>;

@@ -1,6 +1,6 @@
 // Models of the conversations with the client: briefs, mood boards and their decisions, reviews, comments, follows.
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import type { Questionnaire } from '../../src/lib/briefs/questionnaire';
+import type { Questionnaire } from '@/lib/briefs/questionnaire';
 
 export type BriefAnswers = Record<string, string | string[]>;
 

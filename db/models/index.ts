@@ -10,8 +10,8 @@ import {
   type InferCreationAttributes,
 } from 'sequelize';
 import pg from 'pg';
-import { BRAND_ROLES, STUDIO_ROLES, type BrandRole, type StudioRole } from '../../src/lib/auth/roles';
-import type { Box, ColorRole, LogoVariant, LogoVariantSlot, TypefaceRole, TypeScaleSettings } from '../../src/lib/identity/types';
+import { BRAND_ROLES, STUDIO_ROLES, type BrandRole, type StudioRole } from '@/lib/auth/roles';
+import type { Box, ColorRole, LogoVariant, LogoVariantSlot, TypefaceRole, TypeScaleSettings } from '@/lib/identity/types';
 
 /** A designer's own file for one variant slot of a logo. */
 export interface LogoVariantFile {
@@ -19,7 +19,7 @@ export interface LogoVariantFile {
   format: 'svg' | 'png';
   byteSize: number;
 }
-import type { FontMetrics } from '../../src/lib/type/metrics';
+import type { FontMetrics } from '@/lib/type/metrics';
 import { initAssetModels } from './assets';
 import { initCollaborationModels } from './collaboration';
 import { initPublishingModels } from './publishing';

@@ -4,8 +4,8 @@ import { randomBytes, createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Sequelize } from 'sequelize';
-import { AuditEvent, Brand, GuidelineDraft } from '../models';
-import { Brief, BrandFollow, MoodBoard, MoodBoardDecision, MoodBoardItem, ReviewComment, ReviewRequest } from '../models/collaboration';
+import { AuditEvent, Brand, GuidelineDraft } from '@db/models';
+import { Brief, BrandFollow, MoodBoard, MoodBoardDecision, MoodBoardItem, ReviewComment, ReviewRequest } from '@db/models/collaboration';
 
 /** A stored hash of a token nobody holds: seeded links are records, not working links. */
 const unusedHash = () => createHash('sha256').update(randomBytes(32)).digest('hex');

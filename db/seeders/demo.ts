@@ -1,9 +1,9 @@
 // The demo: an invented studio, two invented client brands, and one person per role. Safe to run again.
 import { betterAuth } from 'better-auth';
 import { QueryTypes, type Sequelize } from 'sequelize';
-import { authOptions, type AuthSettings } from '../../src/lib/auth/auth-options';
-import type { BrandRole } from '../../src/lib/auth/roles';
-import { Brand, BrandMember, Studio, StudioMember } from '../models';
+import { authOptions, type AuthSettings } from '@/lib/auth/auth-options';
+import type { BrandRole } from '@/lib/auth/roles';
+import { Brand, BrandMember, Studio, StudioMember } from '@db/models';
 import { seedIdentity } from './identity';
 import { seedCollaboration } from './collaboration';
 

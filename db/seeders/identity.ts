@@ -3,16 +3,16 @@ import { createHash } from 'node:crypto';
 import { readFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import type { Transaction } from 'sequelize';
-import { parseColor } from '../../src/lib/color';
-import type { ColorRole, LogoVariant, TypefaceRole } from '../../src/lib/identity/types';
-import { sanitizeSvg } from '../../src/lib/logo';
-import { drawnBounds } from '../../src/lib/logo/bounds.server';
-import { thinnestStroke } from '../../src/lib/logo/stroke.server';
-import { LocalDiskStorage } from '../../src/lib/storage/local-disk.server';
-import { newKey } from '../../src/lib/storage/storage';
-import { fontMetrics } from '../../src/lib/type';
-import { shippedFont } from '../../src/lib/type/shipped-fonts';
-import { Brand, BrandColor, BrandLogo, BrandTypeface } from '../models';
+import { parseColor } from '@/lib/color';
+import type { ColorRole, LogoVariant, TypefaceRole } from '@/lib/identity/types';
+import { sanitizeSvg } from '@/lib/logo';
+import { drawnBounds } from '@/lib/logo/bounds.server';
+import { thinnestStroke } from '@/lib/logo/stroke.server';
+import { LocalDiskStorage } from '@/lib/storage/local-disk.server';
+import { newKey } from '@/lib/storage/storage';
+import { fontMetrics } from '@/lib/type';
+import { shippedFont } from '@/lib/type/shipped-fonts';
+import { Brand, BrandColor, BrandLogo, BrandTypeface } from '@db/models';
 
 interface DemoIdentity {
   colors: { name: string; value: string; role: ColorRole; spot?: string }[];

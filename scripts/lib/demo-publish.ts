@@ -2,7 +2,7 @@
 // and keep one demo share link (its token is shown only once, so its URL is saved under .data/).
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { DEMO_BRANDS, DEMO_PASSWORD, DEMO_PEOPLE } from '../../db/seeders/demo';
+import { DEMO_BRANDS, DEMO_PASSWORD, DEMO_PEOPLE } from '@db/seeders/demo';
 import { withDemoCopy } from './demo-copy';
 
 async function call(siteUrl: string, cookie: string, method: string, path: string, body?: unknown) {

@@ -1,9 +1,9 @@
 // One path from nothing to a ready database: cluster, schema, demo. Used by `npm start` and the tests.
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
-import { connect } from '../../db/models';
-import { migrateAll } from '../../db/migrate';
-import { seedDemo } from '../../db/seeders/demo';
-import type { AuthSettings } from '../../src/lib/auth/auth-options';
+import { connect } from '@db/models';
+import { migrateAll } from '@db/migrate';
+import { seedDemo } from '@db/seeders/demo';
+import type { AuthSettings } from '@/lib/auth/auth-options';
 import { join } from 'node:path';
 import { projectRoot } from './settings';
 

@@ -1,6 +1,6 @@
 // The audit trail: who did what to which thing, and when.
 import type { Transaction } from 'sequelize';
-import { AuditEvent } from '../../db/models';
+import { AuditEvent } from '@db/models';
 
 export interface AuditEntry {
   actorId: string | null;

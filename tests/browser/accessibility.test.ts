@@ -3,7 +3,7 @@
 // contrast rule is WCAG 2.2 SC 1.4.3 (contrast minimum): 4.5:1 for body text, 3:1 for large text.
 import { chromium, type Browser, type BrowserContext } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { DEMO_BRANDS, DEMO_PASSWORD, DEMO_PEOPLE } from '../../db/seeders/demo';
+import { DEMO_BRANDS, DEMO_PASSWORD, DEMO_PEOPLE } from '@db/seeders/demo';
 import { baseUrl, signIn } from '../support/client';
 import { launchOptions, publishedDemoBrand, seriousViolations, settled } from '../support/browser';
 

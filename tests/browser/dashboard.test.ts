@@ -1,7 +1,7 @@
 // The designer's first minutes, in Debian's chromium: sign in, see the brands, start a new one.
 import { chromium, type Browser } from 'playwright-core';
 import { afterAll, beforeAll, expect, test } from 'vitest';
-import { DEMO_PASSWORD, DEMO_PEOPLE } from '../../db/seeders/demo';
+import { DEMO_PASSWORD, DEMO_PEOPLE } from '@db/seeders/demo';
 import { baseUrl } from '../support/client';
 import { launchOptions } from '../support/browser';
 

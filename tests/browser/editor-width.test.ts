@@ -2,7 +2,7 @@
 // column's width, and the blocks inside it lay out as they do on the published site.
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { afterAll, beforeAll, expect, test } from 'vitest';
-import { DEMO_BRANDS, DEMO_PASSWORD, DEMO_PEOPLE } from '../../db/seeders/demo';
+import { DEMO_BRANDS, DEMO_PASSWORD, DEMO_PEOPLE } from '@db/seeders/demo';
 import { baseUrl, signIn } from '../support/client';
 import { launchOptions, publishedDemoBrand } from '../support/browser';
 

@@ -1,7 +1,7 @@
 // The editor in Debian's chromium: insert blocks, reload, find them again; change a colour, see it everywhere.
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { afterAll, beforeAll, expect, test } from 'vitest';
-import { DEMO_BRANDS, DEMO_PASSWORD, DEMO_PEOPLE } from '../../db/seeders/demo';
+import { DEMO_BRANDS, DEMO_PASSWORD, DEMO_PEOPLE } from '@db/seeders/demo';
 import { baseUrl, signIn } from '../support/client';
 import { launchOptions } from '../support/browser';
 

@@ -5,7 +5,7 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { afterAll, beforeAll, expect, test } from 'vitest';
-import { DEMO_BRANDS, DEMO_PEOPLE } from '../../db/seeders/demo';
+import { DEMO_BRANDS, DEMO_PEOPLE } from '@db/seeders/demo';
 import { signIn } from '../support/client';
 import { launchOptions, publishedDemoBrand } from '../support/browser';
 

@@ -5,7 +5,7 @@ import { chromium, type Browser } from 'playwright-core';
 import { afterAll, beforeAll, expect, test } from 'vitest';
 import { baseUrl, signIn } from '../support/client';
 import { launchOptions } from '../support/browser';
-import { DEMO_BRANDS, DEMO_PEOPLE } from '../../db/seeders/demo';
+import { DEMO_BRANDS, DEMO_PEOPLE } from '@db/seeders/demo';
 
 const axeSource = readFileSync(createRequire(import.meta.url).resolve('axe-core/axe.min.js'), 'utf8');
 let browser: Browser;

@@ -7,7 +7,7 @@ import pg from 'pg';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { inject } from 'vitest';
 import { findServerBinaries } from '../../scripts/lib/postgres';
-import { shareCookieOptions } from '../../src/lib/publishing/share-cookie';
+import { shareCookieOptions } from '@/lib/publishing/share-cookie';
 import { baseUrl, type Client } from '../support/client';
 import { closeDb } from '../support/db';
 import { makeBrand, makeCast, type Cast } from '../integration/fixtures';

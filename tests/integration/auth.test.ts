@@ -1,7 +1,7 @@
 // Sign-up, sign-in and sign-out through better-auth on the real server and database.
 import { randomUUID } from 'node:crypto';
 import { afterAll, describe, expect, test } from 'vitest';
-import { DEMO_PASSWORD, DEMO_PEOPLE } from '../../db/seeders/demo';
+import { DEMO_PASSWORD, DEMO_PEOPLE } from '@db/seeders/demo';
 import { freePort } from '../../scripts/lib/postgres';
 import { startServer } from '../../scripts/lib/prepare';
 import { Client, baseUrl, signIn, verifyByMail } from '../support/client';

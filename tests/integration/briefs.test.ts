@@ -3,7 +3,7 @@ import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { baseUrl, Client, signUpFresh } from '../support/client';
 import { closeDb, sql } from '../support/db';
 import { lastMailTo, linkIn } from '../support/mailbox';
-import { csvField } from '../../src/lib/briefs/questionnaire';
+import { csvField } from '@/lib/briefs/questionnaire';
 
 let designer: Client;
 let designerEmail: string;

@@ -1,7 +1,7 @@
 // People and brands for integration tests, created through the public API like a real studio would.
 import { Client, signUpFresh } from '../support/client';
 import { sql } from '../support/db';
-import type { BrandRole } from '../../src/lib/auth/roles';
+import type { BrandRole } from '@/lib/auth/roles';
 import { makeClientWork } from './client-fixture';
 
 /** A small logo of our own: a circle mark with a margin, for fixtures. */

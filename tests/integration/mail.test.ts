@@ -1,7 +1,7 @@
 // E-mail end to end: what the fake SMTP server captured, parsed by mailparser (the reference parser), and the sent-mail list.
 import { simpleParser } from 'mailparser';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { renderMail, renderTemplate } from '../../src/lib/mail/templates';
+import { renderMail, renderTemplate } from '@/lib/mail/templates';
 import { baseUrl, Client, signUpFresh } from '../support/client';
 import { closeDb } from '../support/db';
 import { lastMailTo, linkIn, mailTo } from '../support/mailbox';

@@ -3,7 +3,7 @@ import { existsSync, readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import type { LaunchOptions, Page } from 'playwright-core';
 import { expect } from 'vitest';
-import { DEMO_BRANDS } from '../../db/seeders/demo';
+import { DEMO_BRANDS } from '@db/seeders/demo';
 import type { Client } from './client';
 
 /** Launch options for headless chromium on a closed network. */

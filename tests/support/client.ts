@@ -1,7 +1,7 @@
 // A small HTTP client for integration tests: one cookie jar per person, JSON helpers, our origin header.
 import { randomUUID } from 'node:crypto';
 import { inject } from 'vitest';
-import { DEMO_PASSWORD } from '../../db/seeders/demo';
+import { DEMO_PASSWORD } from '@db/seeders/demo';
 import { lastMailTo, linkIn, mailTo } from './mailbox';
 
 export const baseUrl = () => inject('baseUrl');

@@ -8,7 +8,7 @@ import type { TestProject } from 'vitest/node';
 import { buildApp, prepareDatabase, startServer } from '../../scripts/lib/prepare';
 import { ensureDebianPackages, MACHINE_PACKAGES, POSTGRESQL } from '../../scripts/lib/debian';
 import { dropCluster, freePort, startCluster } from '../../scripts/lib/postgres';
-import { startFakeSmtp, type FakeSmtp } from '../../src/lib/mail/fake-smtp';
+import { startFakeSmtp, type FakeSmtp } from '@/lib/mail/fake-smtp';
 
 let server: ChildProcess | undefined;
 let clusterDir: string | undefined;

@@ -1,6 +1,6 @@
 // Reading what the local fake SMTP server kept (src/lib/mail/fake-smtp.ts), from the test process.
 import { inject } from 'vitest';
-import { listCaptured, type CapturedMail } from '../../src/lib/mail/captured';
+import { listCaptured, type CapturedMail } from '@/lib/mail/captured';
 
 /** Every message to `address`, newest first. The app awaits the SMTP reply, so a message exists once its request returned. */
 export const mailTo = (address: string): CapturedMail[] => listCaptured(inject('mailDir'), { to: address });

@@ -3,7 +3,7 @@
 import { readFileSync } from 'node:fs';
 import { wcagContrast } from 'culori';
 import { describe, expect, test } from 'vitest';
-import { inkOn } from '../../src/components/app/identity/shared';
+import { inkOn } from '@/components/app/identity/shared';
 
 const css = readFileSync(new URL('../../src/styles/global.css', import.meta.url), 'utf8');
 const token = (name: string): string => {

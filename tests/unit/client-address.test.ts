@@ -2,7 +2,7 @@
 // X-Forwarded-For chain from the right. OWASP ASVS 5.0 V2.4.1 (anti-automation) and the OWASP Authentication
 // Cheat Sheet (limits must not be bypassable by request headers); RFC 7239 §5.2 / de-facto XFF: each proxy appends.
 import { describe, expect, test } from 'vitest';
-import { clientAddress, trustedProxies } from '../../src/lib/http/client-address';
+import { clientAddress, trustedProxies } from '@/lib/http/client-address';
 
 const req = (xff?: string) => new Request('http://127.0.0.1/', { headers: xff ? { 'x-forwarded-for': xff } : {} });
 

@@ -18,8 +18,8 @@ import {
   wcagLevels,
   type ColorVisionKind,
   type Lab,
-} from '../../src/lib/color';
-import { iccCmyk } from '../../src/lib/color/print.server';
+} from '@/lib/color';
+import { iccCmyk } from '@/lib/color/print.server';
 
 // Sharma, Wu & Dalal (2005), "The CIEDE2000 Color-Difference Formula: Implementation Notes, Supplementary Test Data,
 // and Mathematical Observations", Color Res. Appl. 30(1), Table 1. Rows from memory of Table 1; every row is

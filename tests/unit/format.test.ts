@@ -1,7 +1,7 @@
 // Dates for people: the month always as a word, so 3/4 is never ambiguous. Expected strings are CLDR's patterns as
 // shipped in Node's ICU (checked against the Unicode CLDR date-format charts for en-GB, en-US and de).
 import { describe, expect, test } from 'vitest';
-import { formatDate, formatDateTime, formatLongDate, formatNumber, localeFromHeader, SITE_LOCALE } from '../../src/lib/format';
+import { formatDate, formatDateTime, formatLongDate, formatNumber, localeFromHeader, SITE_LOCALE } from '@/lib/format';
 
 const aprilThird = '2026-04-03T12:00:00Z';
 

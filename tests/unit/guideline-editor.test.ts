@@ -3,13 +3,13 @@
 import { readFileSync } from 'node:fs';
 import { Editor } from '@tiptap/core';
 import { afterEach, describe, expect, test } from 'vitest';
-import { BLOCKS } from '../../src/lib/guideline/blocks';
-import { validateGuideline } from '../../src/lib/guideline/document';
-import { instantiateTemplate } from '../../src/lib/guideline/templates';
-import type { Identity } from '../../src/lib/identity/types';
-import { deleteBlock, duplicateBlock, insertTopLevel, moveBlock } from '../../src/components/editor/commands';
-import { guidelineExtensions } from '../../src/components/editor/extensions';
-import { filterItems, insertItems } from '../../src/components/editor/insertItems';
+import { BLOCKS } from '@/lib/guideline/blocks';
+import { validateGuideline } from '@/lib/guideline/document';
+import { instantiateTemplate } from '@/lib/guideline/templates';
+import type { Identity } from '@/lib/identity/types';
+import { deleteBlock, duplicateBlock, insertTopLevel, moveBlock } from '@/components/editor/commands';
+import { guidelineExtensions } from '@/components/editor/extensions';
+import { filterItems, insertItems } from '@/components/editor/insertItems';
 
 const identity = JSON.parse(readFileSync('tests/fixtures/identity-larchmere.json', 'utf8')) as Identity;
 const brandBook = JSON.parse(readFileSync('templates/guidelines/brand-book.json', 'utf8'));

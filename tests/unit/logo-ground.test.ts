@@ -1,6 +1,6 @@
 // The thinnest-stroke estimate, checked on drawings of our own with known geometry.
 import { describe, expect, test } from 'vitest';
-import { thinnestStroke } from '../../src/lib/logo/stroke.server';
+import { thinnestStroke } from '@/lib/logo/stroke.server';
 
 describe('thinnestStroke (common practice: the finest line decides the minimum size)', () => {
   test.each([

@@ -5,8 +5,8 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import sharp from 'sharp';
 import { describe, expect, test } from 'vitest';
-import { drawnGround, GROUND_SPLIT_LUMINANCE, knockoutSvg, paintLuminance, paintRole } from '../../src/lib/logo/knockout';
-import { knockoutRaster, oneColourLogo } from '../../src/lib/logo/knockout.server';
+import { drawnGround, GROUND_SPLIT_LUMINANCE, knockoutSvg, paintLuminance, paintRole } from '@/lib/logo/knockout';
+import { knockoutRaster, oneColourLogo } from '@/lib/logo/knockout.server';
 
 const fixture = (name: string) => readFileSync(join(__dirname, '../fixtures/knockout', name), 'utf8');
 

@@ -8,8 +8,8 @@ import { join } from 'node:path';
 import { decodePDFRawStream, PDFDocument, PDFRawStream, PDFName } from 'pdf-lib';
 import sharp from 'sharp';
 import { beforeAll, describe, expect, test } from 'vitest';
-import { drawnBounds } from '../../src/lib/logo/bounds.server';
-import { artworkBox, logoPrintFile } from '../../src/lib/logo/print-files.server';
+import { drawnBounds } from '@/lib/logo/bounds.server';
+import { artworkBox, logoPrintFile } from '@/lib/logo/print-files.server';
 
 const fixture = (name: string) => readFileSync(join(__dirname, '../fixtures/knockout', name), 'utf8');
 

@@ -10,8 +10,8 @@ import {
   knockoutSvg,
   sanitizeSvg,
   type LogoErrorCode,
-} from '../../src/lib/logo';
-import { drawnBounds } from '../../src/lib/logo/bounds.server';
+} from '@/lib/logo';
+import { drawnBounds } from '@/lib/logo/bounds.server';
 
 const fixture = (name: string) => readFileSync(`tests/fixtures/svg/${name}`, 'utf8');
 

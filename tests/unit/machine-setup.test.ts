@@ -3,7 +3,7 @@ import { describe, expect, test } from 'vitest';
 import { planInstall, type DebianNeed } from '../../scripts/lib/debian';
 import { hbaTrusts, PG_HBA } from '../../scripts/lib/postgres';
 import { demoEnabled } from '../../scripts/lib/settings';
-import { shareCookieOptions } from '../../src/lib/publishing/share-cookie';
+import { shareCookieOptions } from '@/lib/publishing/share-cookie';
 
 const need = (pkg: string, present: boolean): DebianNeed => ({ pkg, why: `${pkg} work`, present: () => present });
 

@@ -1,8 +1,8 @@
 // The policy table against PRODUCT.md's "People and roles" (our own brief; the roles follow common practice
 // in agency–client work: the studio owns, the client reviews, partners receive approved files).
 import { describe, expect, test } from 'vitest';
-import { BRAND_ACTIONS, can, decide, PERMISSIONS } from '../../src/lib/auth/policy';
-import { BRAND_ROLES } from '../../src/lib/auth/roles';
+import { BRAND_ACTIONS, can, decide, PERMISSIONS } from '@/lib/auth/policy';
+import { BRAND_ROLES } from '@/lib/auth/roles';
 
 const expected: Record<string, string[]> = {
   owner: [...BRAND_ACTIONS],

@@ -2,10 +2,10 @@
 // WCAG 2.2 SC 1.4.3 (AA, 4.5:1) and SC 1.4.6 (AAA, 7:1); ratios come from the WCAG 2.2 formula (src/lib/color).
 import { readFileSync } from 'node:fs';
 import { describe, expect, test } from 'vitest';
-import { instantiateTemplate, templateInstructions } from '../../src/lib/guideline/templates';
-import { validateGuideline, type GuidelineDoc } from '../../src/lib/guideline/document';
-import type { Identity } from '../../src/lib/identity/types';
-import { preflight, type ShelfEntry } from '../../src/lib/publishing/preflight';
+import { instantiateTemplate, templateInstructions } from '@/lib/guideline/templates';
+import { validateGuideline, type GuidelineDoc } from '@/lib/guideline/document';
+import type { Identity } from '@/lib/identity/types';
+import { preflight, type ShelfEntry } from '@/lib/publishing/preflight';
 import { withDemoCopy } from '../../scripts/lib/demo-copy';
 
 const identity = JSON.parse(readFileSync('tests/fixtures/identity-larchmere.json', 'utf8')) as Identity;

@@ -4,11 +4,11 @@ import { readFileSync } from 'node:fs';
 import { parse, walk, string as cssStringCodec, type CssNode } from 'css-tree';
 import * as fontkit from 'fontkit';
 import { describe, expect, test } from 'vitest';
-import { fontFaceCss } from '../../src/lib/guideline/identity';
-import type { IdentityTypeface } from '../../src/lib/identity/types';
-import { staticInstance } from '../../src/lib/type/font-instance.server';
-import { cssString, printPageRules } from '../../src/lib/publishing/print-css';
-import { printRequestAllowed } from '../../src/lib/publishing/print-requests';
+import { fontFaceCss } from '@/lib/guideline/identity';
+import type { IdentityTypeface } from '@/lib/identity/types';
+import { staticInstance } from '@/lib/type/font-instance.server';
+import { cssString, printPageRules } from '@/lib/publishing/print-css';
+import { printRequestAllowed } from '@/lib/publishing/print-requests';
 
 const PRINT = 'http://127.0.0.1:4321/b/larchmere/v/3/print?size=a4';
 

@@ -2,7 +2,7 @@
 // Redirects and Forwards Cheat Sheet (protocol-relative, backslash, encoded and whitespace tricks) and WHATWG URL
 // parsing rules (tabs and newlines are stripped, `\` reads as `/` in special schemes).
 import { describe, expect, test } from 'vitest';
-import { safeNext } from '../../src/lib/http/redirect';
+import { safeNext } from '@/lib/http/redirect';
 
 // What URLSearchParams hands the page: one layer of percent-decoding already done.
 const param = (raw: string) => new URLSearchParams(`next=${raw}`).get('next');

@@ -3,8 +3,8 @@
 import { ident, string as cssStringUtils, tokenize, tokenTypes } from 'css-tree';
 import { parseFragment, serialize } from 'parse5';
 import { describe, expect, test } from 'vitest';
-import { cssFamilyName, cssIdentifier, cssString, escapeHtml, escapeXml } from '../../src/lib/safe/escape';
-import { assetRef, cleanTypefaceFamily, displayName, fallbackFamily, noteText, typefaceFamily, webAddress } from '../../src/lib/safe/values';
+import { cssFamilyName, cssIdentifier, cssString, escapeHtml, escapeXml } from '@/lib/safe/escape';
+import { assetRef, cleanTypefaceFamily, displayName, fallbackFamily, noteText, typefaceFamily, webAddress } from '@/lib/safe/values';
 
 /** The CSS tokens of a text, as [type, text] pairs (css-tree follows CSS Syntax Level 3 §4 tokenization). */
 function cssTokens(source: string): [number, string][] {

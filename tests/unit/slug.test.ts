@@ -1,6 +1,6 @@
 import { describe, expect, test } from 'vitest';
-import { firstFreeSlug, SLUG_PATTERN, slugify } from '../../src/lib/brands/slug';
-import { safeNext } from '../../src/lib/http/redirect';
+import { firstFreeSlug, SLUG_PATTERN, slugify } from '@/lib/brands/slug';
+import { safeNext } from '@/lib/http/redirect';
 
 describe('slugify (URL-safe per RFC 3986 unreserved characters)', () => {
   test.each([

@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import StyleDictionary from 'style-dictionary';
 import type { DesignTokens } from 'style-dictionary/types';
 import { afterAll, describe, expect, test } from 'vitest';
-import { modularScale, SCALE_RATIOS } from '../../src/lib/type';
+import { modularScale, SCALE_RATIOS } from '@/lib/type';
 import {
   toCss,
   toDtcg,
@@ -15,7 +15,7 @@ import {
   TokenError,
   TOKEN_FORMATS,
   type IdentityForTokens,
-} from '../../src/lib/tokens';
+} from '@/lib/tokens';
 
 // Invented demo identity (not a real brand).
 const names = ['small', 'body', 'h4', 'h3', 'h2', 'h1'];

@@ -18,7 +18,7 @@ import {
   remToPx,
   SCALE_RATIOS,
   TypographyError,
-} from '../../src/lib/type';
+} from '@/lib/type';
 
 const FONT_DIR = 'node_modules/@fontsource-variable';
 const DM_SANS = readFileSync(`${FONT_DIR}/dm-sans/files/dm-sans-latin-wght-normal.woff2`);

@@ -1,6 +1,6 @@
 // The state of an account whose e-mail address is not yet proven: where the link went, and a limited resend.
 import { useState } from 'react';
-import { api, ApiClientError } from '../../lib/client/api';
+import { api, ApiClientError } from '@/lib/client/api';
 
 interface Props {
   email: string;

@@ -3,8 +3,8 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
-import { api, ApiClientError } from '../../lib/client/api';
-import { safeNext } from '../../lib/http/redirect';
+import { api, ApiClientError } from '@/lib/client/api';
+import { safeNext } from '@/lib/http/redirect';
 
 const PASSWORD_MIN = 10;
 

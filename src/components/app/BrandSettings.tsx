@@ -4,8 +4,8 @@ import { useMutation } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
-import { brandName, brandSlug } from '../../lib/brands/schemas';
-import { api } from '../../lib/client/api';
+import { brandName, brandSlug } from '@/lib/brands/schemas';
+import { api } from '@/lib/client/api';
 import { QueryRoot } from './QueryRoot';
 
 interface Props {

@@ -5,11 +5,11 @@ import { createColumnHelper, flexRender, getCoreRowModel, getSortedRowModel, use
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
-import type { BrandRole } from '../../lib/auth/roles';
-import { ROLE_LABELS } from '../../lib/auth/roles';
-import { api, ApiClientError } from '../../lib/client/api';
+import type { BrandRole } from '@/lib/auth/roles';
+import { ROLE_LABELS } from '@/lib/auth/roles';
+import { api, ApiClientError } from '@/lib/client/api';
 import { QueryRoot } from './QueryRoot';
-import { When } from '../ui/When';
+import { When } from '@/components/ui/When';
 
 interface BrandRow {
   id: string;

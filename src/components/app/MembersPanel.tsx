@@ -2,8 +2,8 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { z } from 'zod';
-import { BRAND_ROLES, ROLE_LABELS, type BrandRole } from '../../lib/auth/roles';
-import { api } from '../../lib/client/api';
+import { BRAND_ROLES, ROLE_LABELS, type BrandRole } from '@/lib/auth/roles';
+import { api } from '@/lib/client/api';
 import { RoleBadge } from './BrandsDashboard';
 import { QueryRoot } from './QueryRoot';
 

@@ -1,7 +1,7 @@
 // One TanStack Query client per island, with settings suited to a small team's data.
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { useState, type ReactNode } from 'react';
-import { ApiClientError } from '../../lib/client/api';
+import { ApiClientError } from '@/lib/client/api';
 
 export function QueryRoot({ children }: { children: ReactNode }) {
   const [client] = useState(

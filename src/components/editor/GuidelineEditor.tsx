@@ -1,11 +1,11 @@
 // The guideline editor island: Tiptap blocks rendered live from the identity, an insert menu, an outline, autosave.
 import { EditorContent, useEditor, useEditorState, type Editor } from '@tiptap/react';
 import { useCallback, useMemo, useRef, useState } from 'react';
-import type { GuidelineDoc } from '../../lib/guideline/document';
-import { brandStyle } from '../../lib/guideline/identity';
-import { isSafeHref } from '../../lib/guideline/links';
-import { outline } from '../../lib/guideline/outline';
-import type { Identity } from '../../lib/identity/types';
+import type { GuidelineDoc } from '@/lib/guideline/document';
+import { brandStyle } from '@/lib/guideline/identity';
+import { isSafeHref } from '@/lib/guideline/links';
+import { outline } from '@/lib/guideline/outline';
+import type { Identity } from '@/lib/identity/types';
 import { statusText, useAutosave, type SaveState } from './autosave';
 import { insertTopLevel } from './commands';
 import { guidelineExtensions } from './extensions';

@@ -1,6 +1,6 @@
 // The identity reaches every node view through React context, so a changed colour re-renders the blocks that use it.
 import { createContext, useContext } from 'react';
-import type { Identity } from '../../lib/identity/types';
+import type { Identity } from '@/lib/identity/types';
 
 export const IdentityContext = createContext<Identity | null>(null);
 

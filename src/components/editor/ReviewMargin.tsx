@@ -1,10 +1,10 @@
 // The editor's margin: open review comment threads grouped by the block id they are anchored to.
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
-import { api } from '../../lib/client/api';
-import { blockLabel } from '../../lib/guideline/block-label';
-import type { CommentView } from '../../lib/reviews/reviews.server';
-import { QueryRoot } from '../app/QueryRoot';
+import { api } from '@/lib/client/api';
+import { blockLabel } from '@/lib/guideline/block-label';
+import type { CommentView } from '@/lib/reviews/reviews.server';
+import { QueryRoot } from '@/components/app/QueryRoot';
 
 interface DraftBlock {
   type: string;

@@ -1,10 +1,10 @@
 // Autosave: debounced PUT with the base revision, the unsaved doc kept in localStorage until the server confirms,
 // and a conflict the designer resolves (keep theirs or take the server's). Status: saved/pending/saving/offline/conflict/error.
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
-import { ApiClientError, api } from '../../lib/client/api';
-import { validateGuideline, type GuidelineDoc } from '../../lib/guideline/document';
-import { clearDraft, decideRestore, readDraft, writeDraft } from '../../lib/guideline/draft';
-import { summarize, type DocSummary } from '../../lib/guideline/outline';
+import { ApiClientError, api } from '@/lib/client/api';
+import { validateGuideline, type GuidelineDoc } from '@/lib/guideline/document';
+import { clearDraft, decideRestore, readDraft, writeDraft } from '@/lib/guideline/draft';
+import { summarize, type DocSummary } from '@/lib/guideline/outline';
 
 export type SaveStatus = 'saved' | 'pending' | 'saving' | 'offline' | 'conflict' | 'error';
 

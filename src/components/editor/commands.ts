@@ -2,7 +2,7 @@
 import type { Editor } from '@tiptap/core';
 import { NodeSelection, TextSelection } from '@tiptap/pm/state';
 import type { Node as PMNode } from '@tiptap/pm/model';
-import { newBlockId } from '../../lib/guideline/ids';
+import { newBlockId } from '@/lib/guideline/ids';
 
 const offsetOf = (doc: PMNode, index: number) => {
   let pos = 0;

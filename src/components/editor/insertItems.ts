@@ -1,8 +1,8 @@
 // What the insert menu offers: rich text first, then the registry's blocks by group, each with its starting content.
-import { blocksByGroup } from '../../lib/guideline/blocks';
-import { newBlockId } from '../../lib/guideline/ids';
-import { starterAttrs } from '../../lib/guideline/templates';
-import type { Identity } from '../../lib/identity/types';
+import { blocksByGroup } from '@/lib/guideline/blocks';
+import { newBlockId } from '@/lib/guideline/ids';
+import { starterAttrs } from '@/lib/guideline/templates';
+import type { Identity } from '@/lib/identity/types';
 
 export interface InsertItem {
   key: string;

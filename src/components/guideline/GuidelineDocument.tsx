@@ -1,10 +1,10 @@
 // The published guideline: static, semantic HTML in the brand's fonts and colours, one <section> per section heading.
 import type { CSSProperties, ReactNode } from 'react';
-import { parseBlockAttrs, type GuidelineDoc, type TopLevelNode } from '../../lib/guideline/document';
-import { brandStyle } from '../../lib/guideline/identity';
-import { outline, type OutlineEntry } from '../../lib/guideline/outline';
-import { RICH_TEXT_TYPES, type RichBlockNode } from '../../lib/guideline/richText';
-import type { Identity } from '../../lib/identity/types';
+import { parseBlockAttrs, type GuidelineDoc, type TopLevelNode } from '@/lib/guideline/document';
+import { brandStyle } from '@/lib/guideline/identity';
+import { outline, type OutlineEntry } from '@/lib/guideline/outline';
+import { RICH_TEXT_TYPES, type RichBlockNode } from '@/lib/guideline/richText';
+import type { Identity } from '@/lib/identity/types';
 import { BlockRenderer } from './blocks';
 import type { RenderMode } from './parts';
 import { RichBlock } from './RichText';

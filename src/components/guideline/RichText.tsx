@@ -1,7 +1,7 @@
 // Rich text to semantic HTML; text goes through React (escaped), links only when their address is safe.
 import type { ReactNode } from 'react';
-import { isSafeHref } from '../../lib/guideline/links';
-import type { InlineNode, RichBlockNode, TextNode } from '../../lib/guideline/richText';
+import { isSafeHref } from '@/lib/guideline/links';
+import type { InlineNode, RichBlockNode, TextNode } from '@/lib/guideline/richText';
 
 function Text({ node }: { node: TextNode }) {
   let out: ReactNode = node.text;

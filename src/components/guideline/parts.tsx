@@ -1,7 +1,7 @@
 // Small shared pieces of the published blocks: placeholders for removed identity items, copy buttons, cautions.
 import type { ReactNode } from 'react';
-import type { Identity, IdentityLogo } from '../../lib/identity/types';
-import { safeAssetUrl } from '../../lib/guideline/links';
+import type { Identity, IdentityLogo } from '@/lib/identity/types';
+import { safeAssetUrl } from '@/lib/guideline/links';
 
 export type RenderMode = 'site' | 'print';
 

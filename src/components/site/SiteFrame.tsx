@@ -2,10 +2,10 @@
 // Plumbline recedes to the footer. The chrome (header, contents, footer) sets its text in our own inks, so it
 // stays readable whatever text colour the brand chose for its pages. Rendered to a string on the server, by
 // the Astro layout and by the cached page path alike.
-import type { OutlineEntry } from '../../lib/guideline/outline';
-import { brandStyle, fontFaceCss, markLogo, primaryLogo } from '../../lib/guideline/identity';
-import type { Identity } from '../../lib/identity/types';
-import { versionPath } from '../../lib/publishing/snapshot-urls';
+import type { OutlineEntry } from '@/lib/guideline/outline';
+import { brandStyle, fontFaceCss, markLogo, primaryLogo } from '@/lib/guideline/identity';
+import type { Identity } from '@/lib/identity/types';
+import { versionPath } from '@/lib/publishing/snapshot-urls';
 
 export interface SiteFrameProps {
   identity: Identity;

@@ -1,6 +1,6 @@
 // A date or time in an island: rendered on the server in the site's locale, then in the reader's own after hydration.
 import { useEffect, useState } from 'react';
-import { formatDate, formatDateTime, formatLongDate, formatTime, SITE_LOCALE, type DateInput } from '../../lib/format';
+import { formatDate, formatDateTime, formatLongDate, formatTime, SITE_LOCALE, type DateInput } from '@/lib/format';
 
 const FORMATS = { date: formatDate, long: formatLongDate, dateTime: formatDateTime, time: formatTime } as const;
 

@@ -1,9 +1,9 @@
 // Who may read the shelf of a brand: a member whose role allows downloads, or a share link for that brand that allows them.
-import { Brand } from '../../../db/models';
-import { authorizeBrand, type Caller } from '../auth/access.server';
-import { can } from '../auth/policy';
-import type { BrandRole } from '../auth/roles';
-import { ApiError } from '../http/api';
+import { Brand } from '@db/models';
+import { authorizeBrand, type Caller } from '@/lib/auth/access.server';
+import { can } from '@/lib/auth/policy';
+import type { BrandRole } from '@/lib/auth/roles';
+import { ApiError } from '@/lib/http/api';
 
 export interface AssetReader {
   brand: Brand;

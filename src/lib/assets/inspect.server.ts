@@ -2,10 +2,10 @@
 // checked for a second document riding along, SVGs cleaned. Anything doubtful is refused with a reason.
 import { fileTypeFromBuffer } from 'file-type';
 import sharp from 'sharp';
-import { drawnBounds } from '../logo/bounds.server';
-import type { Box } from '../logo/geometry';
-import { sanitizeSvg } from '../logo/sanitize';
-import { fontMetrics } from '../type/metrics';
+import { drawnBounds } from '@/lib/logo/bounds.server';
+import type { Box } from '@/lib/logo/geometry';
+import { sanitizeSvg } from '@/lib/logo/sanitize';
+import { fontMetrics } from '@/lib/type/metrics';
 import { EXTENSIONS, FORMAT_INFO, MAX_ASSET_BYTES, MAX_IMAGE_PIXELS, type AssetFormat, type AssetKind } from './kinds';
 
 export class UploadRejection extends Error {

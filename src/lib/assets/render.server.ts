@@ -3,15 +3,15 @@
 import { createHash } from 'node:crypto';
 import sharp, { type Sharp } from 'sharp';
 import { encode as encodeIco } from 'sharp-ico';
-import { knockoutSvg } from '../logo/knockout';
-import { knockoutRaster, variantInk } from '../logo/knockout.server';
-import { logoPrintFile } from '../logo/print-files.server';
-import { toSanitizedSvg } from '../logo/sanitize';
-import type { Box } from '../logo/geometry';
-import type { FileStorage } from '../storage/storage';
+import { knockoutSvg } from '@/lib/logo/knockout';
+import { knockoutRaster, variantInk } from '@/lib/logo/knockout.server';
+import { logoPrintFile } from '@/lib/logo/print-files.server';
+import { toSanitizedSvg } from '@/lib/logo/sanitize';
+import type { Box } from '@/lib/logo/geometry';
+import type { FileStorage } from '@/lib/storage/storage';
 import { MAX_IMAGE_PIXELS, renditionType, type AssetFormat, type RenditionParams } from './kinds';
 import { checkRenditionSize, DEFAULT_SVG_WIDTH, paramsText, RenditionError } from './renditions';
-import { escapeXml } from '../safe/escape';
+import { escapeXml } from '@/lib/safe/escape';
 
 export interface RenditionSource {
   id: string;

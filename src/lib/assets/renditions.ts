@@ -1,5 +1,5 @@
 // Turns a file request (format, width, preset, variant…) into one fully resolved rendition, or a plain-worded refusal.
-import { parseColor } from '../color/parse';
+import { parseColor } from '@/lib/color/parse';
 import { FAVICON_SIZES, MAX_RENDITION_PIXELS, MAX_RENDITION_SIDE, type AssetFormat, type AssetKind, type RenditionParams, type RenditionQuery } from './kinds';
 
 /** A refused rendition request; 400 for a request that makes no sense, 422 for one over a limit. */

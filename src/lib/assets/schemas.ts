@@ -1,6 +1,6 @@
 // Request shapes of the asset routes, checked once at the boundary.
 import { z } from 'zod';
-import { isCleanNote, isOneLine, NOTE_MESSAGE, ONE_LINE_MESSAGE } from '../safe/values';
+import { isCleanNote, isOneLine, NOTE_MESSAGE, ONE_LINE_MESSAGE } from '@/lib/safe/values';
 import { ASSET_KINDS, ASSET_STATES } from './kinds';
 
 const text = (max: number) => z.string().trim().max(max, `at most ${max} characters`).refine(isOneLine, ONE_LINE_MESSAGE);

@@ -1,6 +1,6 @@
 // The short usage note packed into every bundle, written from the identity so the numbers match the guidelines.
-import { PRINT_CAUTION, TRADEMARK_CAUTION, VECTOR_PRINT_NOTE } from '../cautions';
-import type { Identity } from '../identity/types';
+import { PRINT_CAUTION, TRADEMARK_CAUTION, VECTOR_PRINT_NOTE } from '@/lib/cautions';
+import type { Identity } from '@/lib/identity/types';
 
 const round = (n: number, places = 2) => Number(n.toFixed(places));
 

@@ -1,9 +1,9 @@
 // Resolves a caller's role on a brand and asks the policy; routes call this before touching a brand.
 // It is also the one place that keeps an account whose address is not yet proven out of every brand.
 import { QueryTypes } from 'sequelize';
-import { Brand, BrandMember } from '../../../db/models';
-import { sequelize } from '../db.server';
-import { ApiError } from '../http/api';
+import { Brand, BrandMember } from '@db/models';
+import { sequelize } from '@/lib/db.server';
+import { ApiError } from '@/lib/http/api';
 import { decide, type BrandAction } from './policy';
 import type { BrandRole } from './roles';
 

@@ -1,7 +1,7 @@
 // The server's better-auth instance, configured from astro:env.
 import { betterAuth } from 'better-auth';
 import { AUTH_SECRET, AUTH_SIGN_IN_LIMIT, DATABASE_URL, SITE_URL } from 'astro:env/server';
-import { sendTemplate } from '../mail/mail.server';
+import { sendTemplate } from '@/lib/mail/mail.server';
 import { authOptions, VERIFICATION_HOURS } from './auth-options';
 
 export const auth = betterAuth(

@@ -1,8 +1,8 @@
 // Shared loading for the signed-in brand pages: sign-in redirect, policy check, 404 for brands out of reach.
 import type { AstroGlobal } from 'astro';
-import { authorizeBrand } from '../auth/access.server';
-import type { BrandAction } from '../auth/policy';
-import { ApiError, idParam } from '../http/api';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import type { BrandAction } from '@/lib/auth/policy';
+import { ApiError, idParam } from '@/lib/http/api';
 
 /** The brand and the caller's role for a page under /app/brands/:id, or the Response to send instead. */
 export async function brandPage(Astro: AstroGlobal, action: BrandAction = 'brand.read') {

@@ -1,14 +1,14 @@
 // Brands and their people: creation, renaming, deletion, members and pending invitations.
 import { createHash, randomBytes } from 'node:crypto';
 import { Op, QueryTypes, type Transaction } from 'sequelize';
-import { Brand, BrandFormerSlug, BrandMember, Invitation, Studio, StudioMember } from '../../../db/models';
-import { siteCache } from '../publishing/site-cache';
-import { storage } from '../storage/index.server';
-import { audit } from '../audit.server';
-import type { Caller } from '../auth/access.server';
-import type { BrandRole } from '../auth/roles';
-import { sequelize } from '../db.server';
-import { ApiError } from '../http/api';
+import { Brand, BrandFormerSlug, BrandMember, Invitation, Studio, StudioMember } from '@db/models';
+import { siteCache } from '@/lib/publishing/site-cache';
+import { storage } from '@/lib/storage/index.server';
+import { audit } from '@/lib/audit.server';
+import type { Caller } from '@/lib/auth/access.server';
+import type { BrandRole } from '@/lib/auth/roles';
+import { sequelize } from '@/lib/db.server';
+import { ApiError } from '@/lib/http/api';
 import { firstFreeSlug, slugify } from './slug';
 
 export interface BrandSummary {

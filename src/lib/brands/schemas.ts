@@ -1,7 +1,7 @@
 // Request bodies for brands and members: strict objects, so an unknown field is an error, not a no-op.
 import { z } from 'zod';
-import { isOneLine } from '../safe/values';
-import { BRAND_ROLES } from '../auth/roles';
+import { isOneLine } from '@/lib/safe/values';
+import { BRAND_ROLES } from '@/lib/auth/roles';
 import { SLUG_PATTERN } from './slug';
 
 export const brandName = z

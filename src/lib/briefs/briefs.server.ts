@@ -2,15 +2,15 @@
 import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { QueryTypes } from 'sequelize';
-import { Brand } from '../../../db/models';
-import { Brief, type BriefAnswers } from '../../../db/models/collaboration';
-import { audit } from '../audit.server';
-import type { Caller } from '../auth/access.server';
-import { sequelize } from '../db.server';
-import { ApiError, parseWith } from '../http/api';
-import { hashToken, longDate, newToken } from '../invitations/tokens';
-import { peopleById } from '../invitations/people.server';
-import { sendTemplate, siteLink, type MailOutcome } from '../mail/mail.server';
+import { Brand } from '@db/models';
+import { Brief, type BriefAnswers } from '@db/models/collaboration';
+import { audit } from '@/lib/audit.server';
+import type { Caller } from '@/lib/auth/access.server';
+import { sequelize } from '@/lib/db.server';
+import { ApiError, parseWith } from '@/lib/http/api';
+import { hashToken, longDate, newToken } from '@/lib/invitations/tokens';
+import { peopleById } from '@/lib/invitations/people.server';
+import { sendTemplate, siteLink, type MailOutcome } from '@/lib/mail/mail.server';
 import { allQuestions, answersSchema, missingRequired, questionnaireSchema, type Questionnaire } from './questionnaire';
 
 export const BRIEF_DAYS = 30;

@@ -1,6 +1,6 @@
 // Request bodies of the brief routes.
 import { z } from 'zod';
-import { isCleanNote, isOneLine, NOTE_MESSAGE, ONE_LINE_MESSAGE } from '../safe/values';
+import { isCleanNote, isOneLine, NOTE_MESSAGE, ONE_LINE_MESSAGE } from '@/lib/safe/values';
 
 const name = z.string().trim().min(1, { error: 'Give the contact’s name.' }).max(120).refine(isOneLine, ONE_LINE_MESSAGE);
 export const sendBriefBody = z.strictObject({

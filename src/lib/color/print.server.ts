@@ -1,7 +1,7 @@
 import sharp from 'sharp';
 import { rgb255, type Color } from './parse';
 
-export { PRINT_CAUTION } from '../cautions';
+export { PRINT_CAUTION } from '@/lib/cautions';
 
 /** ICC-managed CMYK estimate (libvips' built-in generic CMYK profile) as percentages 0–100 to 1 decimal. */
 export async function iccCmyk(hex: string | Color): Promise<[number, number, number, number]> {

@@ -1,8 +1,8 @@
 // Looking up identity data by id, and the brand's CSS custom properties the published site wears.
-import { relativeLuminance } from '../color/contrast';
-import type { ColorRole, Identity, IdentityColor, IdentityLogo, IdentityTypeface, TypefaceRole } from '../identity/types';
-import { cssFontFamilyList, cssString, cssUrl } from '../safe/escape';
-import { cleanTypefaceFamily, fallbackFamily, storedHex } from '../safe/values';
+import { relativeLuminance } from '@/lib/color/contrast';
+import type { ColorRole, Identity, IdentityColor, IdentityLogo, IdentityTypeface, TypefaceRole } from '@/lib/identity/types';
+import { cssFontFamilyList, cssString, cssUrl } from '@/lib/safe/escape';
+import { cleanTypefaceFamily, fallbackFamily, storedHex } from '@/lib/safe/values';
 
 export const findColor = (identity: Identity, id: string | null | undefined): IdentityColor | undefined =>
   id ? identity.colors.find((c) => c.id === id) : undefined;

@@ -1,8 +1,8 @@
 // Starter templates: documents whose identity references are placeholders, resolved against one brand's identity.
 import * as z from 'zod';
-import type { ColorRole, Identity } from '../identity/types';
-import { COLOR_ROLES } from '../identity/types';
-import { contrastRatio } from '../color/contrast';
+import type { ColorRole, Identity } from '@/lib/identity/types';
+import { COLOR_ROLES } from '@/lib/identity/types';
+import { contrastRatio } from '@/lib/color/contrast';
 import { validateGuideline, type GuidelineDoc } from './document';
 import { newBlockId } from './ids';
 import { colorForRole, colorsInOrder, extremes, logosInOrder, markLogo, primaryLogo } from './identity';

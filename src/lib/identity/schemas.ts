@@ -1,8 +1,8 @@
 // Request bodies for the identity: colours, logos, typefaces and the type scale.
 import { z } from 'zod';
-import { SCALE_RATIOS } from '../type/scale';
-import { SHIPPED_FONTS } from '../type/shipped-fonts';
-import { cssColorInput, displayName, fallbackFamily, noteText, singleLine, typefaceFamily } from '../safe/values';
+import { SCALE_RATIOS } from '@/lib/type/scale';
+import { SHIPPED_FONTS } from '@/lib/type/shipped-fonts';
+import { cssColorInput, displayName, fallbackFamily, noteText, singleLine, typefaceFamily } from '@/lib/safe/values';
 import { COLOR_ROLES, LOGO_VARIANTS, TYPEFACE_ROLES } from './types';
 
 const percent = z.number().min(0, 'CMYK values run from 0 to 100.').max(100, 'CMYK values run from 0 to 100.');

@@ -1,8 +1,8 @@
 // The identity document: everything a brand types once (colours, logos, typefaces, type scale) with every
 // computed value beside it. GET /api/brands/:id/identity returns it; blocks, the published site, the PDF
 // and the token files are all rendered from it.
-import type { ColorValues } from '../color/values';
-import type { FontMetrics } from '../type/metrics';
+import type { ColorValues } from '@/lib/color/values';
+import type { FontMetrics } from '@/lib/type/metrics';
 
 export const COLOR_ROLES = ['primary', 'secondary', 'accent', 'neutral', 'background', 'text', 'support'] as const;
 export type ColorRole = (typeof COLOR_ROLES)[number];

@@ -1,14 +1,14 @@
 // Invitations: the e-mail with the accept link, resend and revoke, and joining by token.
 import { Op, QueryTypes } from 'sequelize';
-import { Brand, BrandMember, Invitation } from '../../../db/models';
-import { audit } from '../audit.server';
-import { siteCache } from '../publishing/site-cache';
-import { unverifiedError, type Caller } from '../auth/access.server';
-import { ROLE_LABELS, type BrandRole } from '../auth/roles';
-import type { InvitationView } from '../brands/brands.server';
-import { sequelize } from '../db.server';
-import { ApiError } from '../http/api';
-import { sendTemplate, siteLink, type MailOutcome } from '../mail/mail.server';
+import { Brand, BrandMember, Invitation } from '@db/models';
+import { audit } from '@/lib/audit.server';
+import { siteCache } from '@/lib/publishing/site-cache';
+import { unverifiedError, type Caller } from '@/lib/auth/access.server';
+import { ROLE_LABELS, type BrandRole } from '@/lib/auth/roles';
+import type { InvitationView } from '@/lib/brands/brands.server';
+import { sequelize } from '@/lib/db.server';
+import { ApiError } from '@/lib/http/api';
+import { sendTemplate, siteLink, type MailOutcome } from '@/lib/mail/mail.server';
 import { hashToken, longDate, newToken } from './tokens';
 
 export const INVITATION_DAYS = 14;

@@ -1,5 +1,5 @@
 // A token path parameter, or a 404 that names nothing.
-import { ApiError } from '../http/api';
+import { ApiError } from '@/lib/http/api';
 import { looksLikeToken } from './tokens';
 
 export function tokenParam(value: string | undefined, what = 'This link'): string {

@@ -1,6 +1,6 @@
 // Names and addresses of signed-up people, read from better-auth's "user" table (never through a model).
 import { QueryTypes } from 'sequelize';
-import { sequelize } from '../db.server';
+import { sequelize } from '@/lib/db.server';
 
 export interface Person {
   id: string;

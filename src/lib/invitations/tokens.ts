@@ -1,6 +1,6 @@
 // Link tokens for people without an account: 32 random bytes in the link, only the SHA-256 hash stored.
 import { randomBytes } from 'node:crypto';
-import { hashToken } from '../brands/brands.server';
+import { hashToken } from '@/lib/brands/brands.server';
 
 export { hashToken };
 

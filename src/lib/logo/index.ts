@@ -6,4 +6,4 @@ export { sanitizeSvg, toSanitizedSvg, MAX_SVG_BYTES, type SanitizeResult, type S
 export { clearSpace, type ClearSpace } from './clear-space';
 export { minimumSize, MIN_STROKE_PRINT_PT, MIN_STROKE_SCREEN_PX, type MinimumSize } from './minimum-size';
 export { knockoutSvg, drawnGround, paintLuminance, paintRole, GROUND_SPLIT_LUMINANCE, type DrawnGround, type PaintRole } from './knockout';
-export { TRADEMARK_CAUTION } from '../cautions';
+export { TRADEMARK_CAUTION } from '@/lib/cautions';

@@ -1,8 +1,8 @@
 // One-colour versions of logos, the one place every route, page, print edition, shelf and bundle asks for them.
 // SVG logos keep their vectors (knockout.ts); raster logos are sorted pixel by pixel with the same luminance rule.
 import sharp from 'sharp';
-import { parseColor } from '../color/parse';
-import { relativeLuminance } from '../color/contrast';
+import { parseColor } from '@/lib/color/parse';
+import { relativeLuminance } from '@/lib/color/contrast';
 import { LogoError } from './errors';
 import { GROUND_SPLIT_LUMINANCE, knockoutSvg, type DrawnGround } from './knockout';
 

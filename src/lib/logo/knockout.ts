@@ -8,8 +8,8 @@
 // function of IEC 61966-2-1); a paint reads as the ground when it contrasts less with the ground than with the
 // opposite extreme (black for a light ground, white for a dark one), i.e. the dividing luminance is √(1.05·0.05) − 0.05
 // ≈ 0.179, the point where a colour's WCAG contrast ratio against white and against black are equal.
-import { parseColor } from '../color/parse';
-import { relativeLuminance } from '../color/contrast';
+import { parseColor } from '@/lib/color/parse';
+import { relativeLuminance } from '@/lib/color/contrast';
 import { LogoError } from './errors';
 import { toSanitizedSvg } from './sanitize';
 

@@ -10,7 +10,7 @@ import { join } from 'node:path';
 import { promisify } from 'node:util';
 import { PDFArray, PDFDict, PDFDocument, PDFName, PDFNumber } from 'pdf-lib';
 import puppeteer, { type Browser } from 'puppeteer-core';
-import { plainCmyk } from '../color/values';
+import { plainCmyk } from '@/lib/color/values';
 import type { Box } from './geometry';
 import { LogoError } from './errors';
 import { toSanitizedSvg } from './sanitize';

@@ -6,7 +6,7 @@
 // javascript: links, link targets on <a>, and anything else outside DOMPurify's SVG profile.
 import { imageSize } from 'image-size';
 import DOMPurify from 'isomorphic-dompurify';
-import { MAX_RENDITION_PIXELS } from '../assets/kinds';
+import { MAX_RENDITION_PIXELS } from '@/lib/assets/kinds';
 import { LogoError, type LogoErrorCode, type LogoErrorInfo } from './errors';
 import { MAX_SVG_UNITS, parseViewBox, svgLengthPx, type Box } from './geometry';
 

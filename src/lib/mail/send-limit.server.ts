@@ -1,7 +1,7 @@
 // How much mail one account may cause: a PostgreSQL-backed count per account, so it holds across processes.
 import { MAIL_SEND_LIMIT } from 'astro:env/server';
-import { ApiError } from '../http/api';
-import { consumeAttempt } from '../publishing/rate-limit.server';
+import { ApiError } from '@/lib/http/api';
+import { consumeAttempt } from '@/lib/publishing/rate-limit.server';
 
 /** The window MAIL_SEND_LIMIT counts in. */
 export const MAIL_WINDOW_SECONDS = 3600;

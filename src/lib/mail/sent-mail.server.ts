@@ -2,8 +2,8 @@
 // a signed-in person whose address is proven reads the messages sent to that address, as a real mailbox would,
 // and nothing else. Senders do not see what they sent: the links in it (invitations, briefs, boards) are the
 // recipient's keys.
-import { isVerified, requireCaller, unverifiedError } from '../auth/access.server';
-import { ApiError } from '../http/api';
+import { isVerified, requireCaller, unverifiedError } from '@/lib/auth/access.server';
+import { ApiError } from '@/lib/http/api';
 import { listCaptured, type CapturedMail } from './captured';
 import { captureDir } from './mail.server';
 

@@ -2,7 +2,7 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import Mustache from 'mustache';
-import { escapeHtml } from '../safe/escape';
+import { escapeHtml } from '@/lib/safe/escape';
 
 export type TemplateValue = string | number | boolean | null | undefined | string[];
 export type TemplateData = Record<string, TemplateValue>;

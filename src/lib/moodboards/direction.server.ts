@@ -1,5 +1,5 @@
 // Whether guideline work has an approved direction yet: a warning shown beside the work, never a lock.
-import { MoodBoard } from '../../../db/models/collaboration';
+import { MoodBoard } from '@db/models/collaboration';
 
 export interface DirectionStatus {
   state: 'approved' | 'waiting';

@@ -1,20 +1,20 @@
 // Mood boards: images, swatches, type samples and notes sent to a client contact for a decision on direction.
 import sharp from 'sharp';
 import { Op } from 'sequelize';
-import { Brand, BrandColor } from '../../../db/models';
-import { MoodBoard, MoodBoardDecision, MoodBoardItem, type BoardItemKind, type BoardStatus, type Verdict } from '../../../db/models/collaboration';
-import { audit } from '../audit.server';
-import type { Caller } from '../auth/access.server';
-import { parseColor } from '../color';
-import { sequelize } from '../db.server';
-import { ApiError } from '../http/api';
-import { createColor } from '../identity/identity.server';
-import type { IdentityColor } from '../identity/types';
-import { hashToken, longDate, newToken } from '../invitations/tokens';
-import { peopleById } from '../invitations/people.server';
-import { sendTemplate, siteLink, type MailOutcome } from '../mail/mail.server';
-import { storage } from '../storage/index.server';
-import { newKey } from '../storage/storage';
+import { Brand, BrandColor } from '@db/models';
+import { MoodBoard, MoodBoardDecision, MoodBoardItem, type BoardItemKind, type BoardStatus, type Verdict } from '@db/models/collaboration';
+import { audit } from '@/lib/audit.server';
+import type { Caller } from '@/lib/auth/access.server';
+import { parseColor } from '@/lib/color';
+import { sequelize } from '@/lib/db.server';
+import { ApiError } from '@/lib/http/api';
+import { createColor } from '@/lib/identity/identity.server';
+import type { IdentityColor } from '@/lib/identity/types';
+import { hashToken, longDate, newToken } from '@/lib/invitations/tokens';
+import { peopleById } from '@/lib/invitations/people.server';
+import { sendTemplate, siteLink, type MailOutcome } from '@/lib/mail/mail.server';
+import { storage } from '@/lib/storage/index.server';
+import { newKey } from '@/lib/storage/storage';
 
 export const BOARD_DAYS = 30;
 export const MAX_BOARD_IMAGE_BYTES = 15 * 1024 * 1024;

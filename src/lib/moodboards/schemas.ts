@@ -1,6 +1,6 @@
 // Request bodies of the mood-board routes.
 import { z } from 'zod';
-import { isCleanNote, isOneLine, NOTE_MESSAGE, ONE_LINE_MESSAGE, typefaceFamily } from '../safe/values';
+import { isCleanNote, isOneLine, NOTE_MESSAGE, ONE_LINE_MESSAGE, typefaceFamily } from '@/lib/safe/values';
 
 const caption = z.string().max(500, { error: 'A caption may hold 500 characters.' }).refine(isCleanNote, NOTE_MESSAGE);
 export const newItemSchema = z.discriminatedUnion('kind', [

@@ -1,9 +1,9 @@
 // Following a brand: members who follow are e-mailed when a new version of its guidelines is published.
-import { Brand } from '../../../db/models';
-import { BrandFollow } from '../../../db/models/collaboration';
-import { audit } from '../audit.server';
-import type { Caller } from '../auth/access.server';
-import { sequelize } from '../db.server';
+import { Brand } from '@db/models';
+import { BrandFollow } from '@db/models/collaboration';
+import { audit } from '@/lib/audit.server';
+import type { Caller } from '@/lib/auth/access.server';
+import { sequelize } from '@/lib/db.server';
 
 export async function isFollowing(brand: Brand, userId: string): Promise<boolean> {
   return (await BrandFollow.count({ where: { brandId: brand.id, userId } })) > 0;

@@ -1,7 +1,7 @@
 // Told when a version is published, so followers can be e-mailed the note and the what-changed summary.
 import { QueryTypes } from 'sequelize';
-import { sequelize } from '../db.server';
-import { sendTemplate, siteLink } from '../mail/mail.server';
+import { sequelize } from '@/lib/db.server';
+import { sendTemplate, siteLink } from '@/lib/mail/mail.server';
 
 export interface PublishedNotice {
   brandId: string;

@@ -1,6 +1,6 @@
 // What changed between two published versions (or a version and the draft): blocks, colours and type.
-import { blockDefinition } from '../guideline/blocks';
-import type { Identity } from '../identity/types';
+import { blockDefinition } from '@/lib/guideline/blocks';
+import type { Identity } from '@/lib/identity/types';
 
 interface AnyBlock {
   type: string;

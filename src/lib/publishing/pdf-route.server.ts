@@ -2,7 +2,7 @@
 import type { APIContext } from 'astro';
 import { simplePage, siteAccess } from './site-access.server';
 import { PAPER_SIZES, versionPdf, type PaperSize } from './pdf.server';
-import { escapeHtml } from '../safe/escape';
+import { escapeHtml } from '@/lib/safe/escape';
 
 /** Answer GET …/guideline.pdf?size=a4|letter for the version `number` (latest when null). */
 export async function pdfResponse(context: APIContext, number: number | null): Promise<Response> {

@@ -1,7 +1,7 @@
 // The check before publishing, fed from the database: the working draft, the identity and the brand's shelf.
-import { Asset, type Brand } from '../../../db/models';
-import { allTemplateInstructions, readDraft } from '../guideline/draft.server';
-import { loadIdentity } from '../identity/identity.server';
+import { Asset, type Brand } from '@db/models';
+import { allTemplateInstructions, readDraft } from '@/lib/guideline/draft.server';
+import { loadIdentity } from '@/lib/identity/identity.server';
 import { preflight, type Finding, type ShelfEntry } from './preflight';
 
 /** What a reader of the next version would receive that the designer should look at first. */

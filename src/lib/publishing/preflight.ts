@@ -1,10 +1,10 @@
 // The check before publishing: what a reader should never receive (template instructions, stand-in images, missing
 // alt text, contrast below the level the brand claims, unlicensed fonts, files that are not approved). Pure: the
 // caller loads the draft, identity and shelf; the designer sees the list and may publish anyway with a note.
-import { contrastRatio } from '../color/contrast';
-import { blockLabels } from '../guideline/block-label';
-import type { GuidelineDoc } from '../guideline/document';
-import type { Identity } from '../identity/types';
+import { contrastRatio } from '@/lib/color/contrast';
+import { blockLabels } from '@/lib/guideline/block-label';
+import type { GuidelineDoc } from '@/lib/guideline/document';
+import type { Identity } from '@/lib/identity/types';
 
 export type FindingCode =
   | 'template_text'

@@ -1,6 +1,6 @@
 // A fixed-window counter in PostgreSQL, so a limit holds across processes (share-link passwords).
 import { QueryTypes } from 'sequelize';
-import { sequelize } from '../db.server';
+import { sequelize } from '@/lib/db.server';
 
 /** Count one attempt under `key`; false once `max` attempts fell in the current window. */
 export async function consumeAttempt(key: string, max: number, windowSeconds: number): Promise<boolean> {

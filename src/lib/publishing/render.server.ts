@@ -1,11 +1,11 @@
 // Rendering a published version to HTML, once per version and audience: a version never changes.
 import { createElement } from 'react';
 import { renderToStaticMarkup } from 'react-dom/server';
-import { GuidelineVersion } from '../../../db/models';
-import GuidelineDocument from '../../components/guideline/GuidelineDocument';
-import type { GuidelineDoc } from '../guideline/document';
-import { outline, type OutlineEntry } from '../guideline/outline';
-import type { Identity } from '../identity/types';
+import { GuidelineVersion } from '@db/models';
+import GuidelineDocument from '@/components/guideline/GuidelineDocument';
+import type { GuidelineDoc } from '@/lib/guideline/document';
+import { outline, type OutlineEntry } from '@/lib/guideline/outline';
+import type { Identity } from '@/lib/identity/types';
 import { withVersionUrls } from './snapshot-urls';
 
 export interface RenderedVersion {

@@ -2,12 +2,12 @@
 import { createHmac, randomBytes, scrypt as scryptCb, timingSafeEqual } from 'node:crypto';
 import { promisify } from 'node:util';
 import { AUTH_SECRET, SITE_URL } from 'astro:env/server';
-import { Brand, GuidelineVersion, ShareLink } from '../../../db/models';
-import { audit } from '../audit.server';
-import type { Caller } from '../auth/access.server';
-import { hashToken } from '../brands/brands.server';
-import { sequelize } from '../db.server';
-import { ApiError } from '../http/api';
+import { Brand, GuidelineVersion, ShareLink } from '@db/models';
+import { audit } from '@/lib/audit.server';
+import type { Caller } from '@/lib/auth/access.server';
+import { hashToken } from '@/lib/brands/brands.server';
+import { sequelize } from '@/lib/db.server';
+import { ApiError } from '@/lib/http/api';
 import { shareGrants } from './grant-cache';
 
 const scrypt = promisify(scryptCb) as (password: string, salt: Buffer, keylen: number) => Promise<Buffer>;

@@ -1,14 +1,14 @@
 // Who may read a published guideline site: members by role, or a visitor holding that brand's share link.
 import type { APIContext } from 'astro';
-import { Brand, BrandFormerSlug, type GuidelineVersion } from '../../../db/models';
-import { roleOn } from '../auth/access.server';
-import { can } from '../auth/policy';
-import type { BrandRole } from '../auth/roles';
+import { Brand, BrandFormerSlug, type GuidelineVersion } from '@db/models';
+import { roleOn } from '@/lib/auth/access.server';
+import { can } from '@/lib/auth/policy';
+import type { BrandRole } from '@/lib/auth/roles';
 import { versionFromPass, PRINT_COOKIE } from './print-grant.server';
 import { findVersion } from './versions.server';
 import { siteCache } from './site-cache';
-import type { TtlCache } from '../http/ttl-cache';
-import { escapeHtml } from '../safe/escape';
+import type { TtlCache } from '@/lib/http/ttl-cache';
+import { escapeHtml } from '@/lib/safe/escape';
 
 /** A cached answer, or the lookup's (cached for next time). */
 async function remembered<V>(cache: TtlCache<V>, key: string, lookup: () => Promise<V>): Promise<V> {

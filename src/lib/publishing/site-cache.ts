@@ -1,9 +1,9 @@
 // Two seconds of memory for what every published page view looks up: the brand by slug, the visitor's role and
 // the version. Changes made in this process clear the affected part at once; other processes catch up within
 // the two seconds.
-import type { Brand, GuidelineVersion } from '../../../db/models';
-import type { BrandRole } from '../auth/roles';
-import { TtlCache } from '../http/ttl-cache';
+import type { Brand, GuidelineVersion } from '@db/models';
+import type { BrandRole } from '@/lib/auth/roles';
+import { TtlCache } from '@/lib/http/ttl-cache';
 
 export const siteCache = {
   brands: new TtlCache<Brand | null>(2000),

@@ -1,8 +1,8 @@
 // The hot path of a published site: /b/:slug and /b/:slug/v/:n. A version never changes, so its whole page is
 // rendered once per audience and kept; access is still decided for every request before anything is served.
 import type { APIContext } from 'astro';
-import cssHref from '../../styles/global.css?url';
-import { siteFrameHtml } from '../../components/site/SiteFrame';
+import cssHref from '@/styles/global.css?url';
+import { siteFrameHtml } from '@/components/site/SiteFrame';
 import { renderVersion } from './render.server';
 import { notFoundPage, siteAccess } from './site-access.server';
 import { latestNumber } from './versions.server';

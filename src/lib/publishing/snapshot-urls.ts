@@ -1,6 +1,6 @@
 // A version's identity carries no file URLs of its own: they are made at view time from the site's address,
 // so a renamed brand slug never breaks an old version.
-import type { Identity } from '../identity/types';
+import type { Identity } from '@/lib/identity/types';
 
 /** Base path of one published version. */
 export const versionPath = (slug: string, number: number) => `/b/${slug}/v/${number}`;

@@ -1,13 +1,13 @@
 // Reviews of the working draft: requests to reviewers, comments anchored to a block id, replies, decisions.
-import { Brand, GuidelineDraft } from '../../../db/models';
-import { blockLabels } from '../guideline/block-label';
-import { ReviewComment, ReviewRequest, type ReviewStatus } from '../../../db/models/collaboration';
-import { audit } from '../audit.server';
-import type { Caller } from '../auth/access.server';
-import { sequelize } from '../db.server';
-import { ApiError } from '../http/api';
-import { membersWithRoles, peopleById } from '../invitations/people.server';
-import { sendTemplate, siteLink } from '../mail/mail.server';
+import { Brand, GuidelineDraft } from '@db/models';
+import { blockLabels } from '@/lib/guideline/block-label';
+import { ReviewComment, ReviewRequest, type ReviewStatus } from '@db/models/collaboration';
+import { audit } from '@/lib/audit.server';
+import type { Caller } from '@/lib/auth/access.server';
+import { sequelize } from '@/lib/db.server';
+import { ApiError } from '@/lib/http/api';
+import { membersWithRoles, peopleById } from '@/lib/invitations/people.server';
+import { sendTemplate, siteLink } from '@/lib/mail/mail.server';
 
 export interface ReviewView {
   id: string;

@@ -1,7 +1,7 @@
 // Request bodies of the review and comment routes.
 import { z } from 'zod';
-import { isCleanNote, NOTE_MESSAGE } from '../safe/values';
-import { blockIdSchema } from '../guideline/ids';
+import { isCleanNote, NOTE_MESSAGE } from '@/lib/safe/values';
+import { blockIdSchema } from '@/lib/guideline/ids';
 
 export const requestReviewBody = z.strictObject({ message: z.string().max(2000).refine(isCleanNote, NOTE_MESSAGE).optional(), reviewerIds: z.array(z.string().min(1).max(100)).min(1).max(50).optional() });
 export const decideReviewBody = z.strictObject({

@@ -1,7 +1,7 @@
 // The one rule for values that end up in HTML, CSS, SVG or e-mail: every boundary accepts them through these schemas.
 // Accepting is half the job; escape.ts escapes at output, so a row stored before these rules is still harmless.
 import * as z from 'zod';
-import { parseColor } from '../color/parse';
+import { parseColor } from '@/lib/color/parse';
 
 /** C0 and C1 controls, DEL, line and paragraph separators, bidi overrides and isolates, BOM: never part of a name. */
 // eslint-disable-next-line no-control-regex -- control characters are what this rule looks for

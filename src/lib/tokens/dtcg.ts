@@ -1,4 +1,4 @@
-import { rgb255 } from '../color/parse';
+import { rgb255 } from '@/lib/color/parse';
 import { identityTokens, type Dimension, type Token } from './model';
 import type { IdentityForTokens } from './types';
 

@@ -1,4 +1,4 @@
-import { parseColor, type Color } from '../color/parse';
+import { parseColor, type Color } from '@/lib/color/parse';
 import { TokenError } from './errors';
 import { kebabName, uniqueName } from './names';
 import type { IdentityForTokens, TypefaceRole } from './types';

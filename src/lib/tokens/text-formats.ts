@@ -1,5 +1,5 @@
-import { rgb255, type Color } from '../color/parse';
-import { cssString } from '../safe/escape';
+import { rgb255, type Color } from '@/lib/color/parse';
+import { cssString } from '@/lib/safe/escape';
 import { identityTokens, type Dimension, type Token } from './model';
 import type { IdentityForTokens } from './types';
 

@@ -11,4 +11,4 @@ export {
   type FontMetrics,
 } from './metrics';
 export { measure, columnWidthFor, averageAdvanceEm, MEASURE_RANGE, MEASURE_SAMPLE, type Measure, type MeasureVerdict } from './measure';
-export { FONT_LICENCE_CAUTION } from '../cautions';
+export { FONT_LICENCE_CAUTION } from '@/lib/cautions';

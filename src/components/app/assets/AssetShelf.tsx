@@ -1,9 +1,9 @@
 // The brand's asset shelf: drop files in, approve them, pick a rendition, pack a bundle; owners also see who downloaded what.
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useRef, useState, type DragEvent } from 'react';
-import { api } from '../../../lib/client/api';
-import { ACCEPT_ATTRIBUTE, ASSET_KINDS, STATE_LABELS, type AssetKind, type AssetState } from '../../../lib/assets/kinds';
-import { QueryRoot } from '../QueryRoot';
+import { api } from '@/lib/client/api';
+import { ACCEPT_ATTRIBUTE, ASSET_KINDS, STATE_LABELS, type AssetKind, type AssetState } from '@/lib/assets/kinds';
+import { QueryRoot } from '@/components/app/QueryRoot';
 import { DownloadLog } from './DownloadLog';
 import { RenditionPicker } from './RenditionPicker';
 import { downloadBundle } from './bundle';

@@ -1,8 +1,8 @@
 // Owners: who downloaded which file or bundle, when, and through which door (membership or share link).
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
-import { api } from '../../../lib/client/api';
-import { When } from '../../ui/When';
+import { api } from '@/lib/client/api';
+import { When } from '@/components/ui/When';
 
 interface Entry {
   id: string;

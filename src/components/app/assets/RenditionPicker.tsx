@@ -1,7 +1,7 @@
 // Pick a rendition of one asset (format, width, background, variant or a ready-made preset) and get its link.
 import { useState } from 'react';
-import { PRINT_CAUTION, VECTOR_PRINT_NOTE } from '../../../lib/cautions';
-import { MAX_WIDTH, MIN_WIDTH, PRESET_INFO, RENDITION_PRESETS, type RenditionPreset } from '../../../lib/assets/kinds';
+import { PRINT_CAUTION, VECTOR_PRINT_NOTE } from '@/lib/cautions';
+import { MAX_WIDTH, MIN_WIDTH, PRESET_INFO, RENDITION_PRESETS, type RenditionPreset } from '@/lib/assets/kinds';
 import type { ShelfAsset } from './AssetShelf';
 
 type Format = 'png' | 'jpg' | 'webp' | 'svg' | 'tiff' | 'pdf' | 'eps';

@@ -1,5 +1,5 @@
 // Download a bundle zip with progress: the server streams it and sends an estimate of its size up front.
-import { ApiClientError } from '../../../lib/client/api';
+import { ApiClientError } from '@/lib/client/api';
 
 export async function downloadBundle(brandId: string, body: { assetIds?: string[]; allLogos?: boolean }, onProgress: (fraction: number) => void): Promise<void> {
   const response = await fetch(`/api/brands/${brandId}/bundles`, {

@@ -1,6 +1,6 @@
 // Multipart upload with per-file progress. fetch() reports no upload progress, so this one helper uses XMLHttpRequest;
 // everything else goes through api().
-import { ApiClientError } from '../../../lib/client/api';
+import { ApiClientError } from '@/lib/client/api';
 
 export interface UploadReply {
   assets: { id: string; name: string; duplicate: boolean; sanitised: string[] }[];

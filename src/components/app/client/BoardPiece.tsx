@@ -1,7 +1,7 @@
 // One piece of a mood board as everyone sees it: an image, a swatch, a type sample or a note.
-import type { BoardItemView } from '../../../lib/moodboards/moodboards.server';
-import { cssFontFamilyList } from '../../../lib/safe/escape';
-import { cleanTypefaceFamily } from '../../../lib/safe/values';
+import type { BoardItemView } from '@/lib/moodboards/moodboards.server';
+import { cssFontFamilyList } from '@/lib/safe/escape';
+import { cleanTypefaceFamily } from '@/lib/safe/values';
 
 export function BoardPiece({ item, imageUrl }: { item: BoardItemView; imageUrl: string }) {
   if (item.kind === 'image') {

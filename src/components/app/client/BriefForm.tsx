@@ -1,10 +1,10 @@
 // The client's side of a brief: every question, saved as they type (after a short pause), then submitted.
 import { useEffect, useRef, useState } from 'react';
-import { ApiClientError, api } from '../../../lib/client/api';
-import { ANSWER_LIMITS, type Question } from '../../../lib/briefs/questionnaire';
-import type { PublicBrief } from '../../../lib/briefs/briefs.server';
-import { When } from '../../ui/When';
-import { formatDateTime, formatTime, SITE_LOCALE } from '../../../lib/format';
+import { ApiClientError, api } from '@/lib/client/api';
+import { ANSWER_LIMITS, type Question } from '@/lib/briefs/questionnaire';
+import type { PublicBrief } from '@/lib/briefs/briefs.server';
+import { When } from '@/components/ui/When';
+import { formatDateTime, formatTime, SITE_LOCALE } from '@/lib/format';
 
 type Answers = Record<string, string | string[]>;
 type SaveState = { kind: 'idle' | 'saving' | 'saved' | 'error'; text: string };

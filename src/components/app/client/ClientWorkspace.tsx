@@ -1,14 +1,14 @@
 // The brand's client page: follow, invitations, briefs, mood boards and reviews, each with what to do next.
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState, type ReactNode } from 'react';
-import { api } from '../../../lib/client/api';
-import type { BriefView } from '../../../lib/briefs/briefs.server';
-import type { BoardView } from '../../../lib/moodboards/moodboards.server';
-import type { DirectionStatus } from '../../../lib/moodboards/direction.server';
-import type { CommentView, ReviewSummary, ReviewView } from '../../../lib/reviews/reviews.server';
-import { QueryRoot } from '../QueryRoot';
+import { api } from '@/lib/client/api';
+import type { BriefView } from '@/lib/briefs/briefs.server';
+import type { BoardView } from '@/lib/moodboards/moodboards.server';
+import type { DirectionStatus } from '@/lib/moodboards/direction.server';
+import type { CommentView, ReviewSummary, ReviewView } from '@/lib/reviews/reviews.server';
+import { QueryRoot } from '@/components/app/QueryRoot';
 import { BoardPiece } from './BoardPiece';
-import { formatDate } from '../../../lib/format';
+import { formatDate } from '@/lib/format';
 
 export interface ClientCaps {
   manageMembers: boolean;

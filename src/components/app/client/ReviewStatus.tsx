@@ -1,9 +1,9 @@
 // Shown before publishing: the latest review decision on the draft and how many comment threads are still open.
 import { useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/client/api';
-import type { ReviewSummary, ReviewView } from '../../../lib/reviews/reviews.server';
-import { QueryRoot } from '../QueryRoot';
-import { formatDate } from '../../../lib/format';
+import { api } from '@/lib/client/api';
+import type { ReviewSummary, ReviewView } from '@/lib/reviews/reviews.server';
+import { QueryRoot } from '@/components/app/QueryRoot';
+import { formatDate } from '@/lib/format';
 
 function Status({ brandId }: { brandId: string }) {
   const q = useQuery({ queryKey: ['reviews', brandId], queryFn: () => api<{ reviews: ReviewView[] } & ReviewSummary>(`/api/brands/${brandId}/reviews`) });

@@ -1,7 +1,7 @@
 // Shown on an empty draft: start the guidelines from a starter template filled with the brand's identity.
 import { useState } from 'react';
-import { api } from '../../../lib/client/api';
-import { clearDraft } from '../../../lib/guideline/draft';
+import { api } from '@/lib/client/api';
+import { clearDraft } from '@/lib/guideline/draft';
 
 const CHOICES = [
   {

@@ -2,13 +2,13 @@
 // shade for failing pairs, colours too close to tell apart, and colour-vision previews.
 import { useMutation, useQuery } from '@tanstack/react-query';
 import { useMemo, useState } from 'react';
-import { api } from '../../../lib/client/api';
-import { APCA_CAUTION, COLOR_VISION_CAUTION, CONTRAST_CAUTION } from '../../../lib/cautions';
-import { WCAG_THRESHOLDS } from '../../../lib/color/contrast';
-import { nearestPassing } from '../../../lib/color/nearest';
-import { NEAR_DUPLICATE_DELTA_E, type PalettePair, type PaletteReport } from '../../../lib/color/palette';
-import { COLOR_VISION_KINDS, type ColorVisionKind } from '../../../lib/color/vision';
-import type { IdentityColor } from '../../../lib/identity/types';
+import { api } from '@/lib/client/api';
+import { APCA_CAUTION, COLOR_VISION_CAUTION, CONTRAST_CAUTION } from '@/lib/cautions';
+import { WCAG_THRESHOLDS } from '@/lib/color/contrast';
+import { nearestPassing } from '@/lib/color/nearest';
+import { NEAR_DUPLICATE_DELTA_E, type PalettePair, type PaletteReport } from '@/lib/color/palette';
+import { COLOR_VISION_KINDS, type ColorVisionKind } from '@/lib/color/vision';
+import type { IdentityColor } from '@/lib/identity/types';
 import { Caution, IdentityRoot, inkOn, LoadState, messageOf, Notice, reportKey, useIdentity, useRefreshIdentity } from './shared';
 
 const LEVELS: { key: 'aa' | 'aaLarge' | 'aaa' | 'nonText'; label: string; need: number }[] = [

@@ -5,9 +5,9 @@ import { useMutation } from '@tanstack/react-query';
 import { useId, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
-import { api } from '../../../lib/client/api';
-import { TRADEMARK_CAUTION } from '../../../lib/cautions';
-import { LOGO_VARIANT_SLOT_LABELS, LOGO_VARIANT_SLOTS, LOGO_VARIANTS, type Box, type IdentityColor, type IdentityLogo, type LogoVariant, type LogoVariantSlot } from '../../../lib/identity/types';
+import { api } from '@/lib/client/api';
+import { TRADEMARK_CAUTION } from '@/lib/cautions';
+import { LOGO_VARIANT_SLOT_LABELS, LOGO_VARIANT_SLOTS, LOGO_VARIANTS, type Box, type IdentityColor, type IdentityLogo, type LogoVariant, type LogoVariantSlot } from '@/lib/identity/types';
 import { Caution, IdentityRoot, inkOn, LoadState, messageOf, Notice, uploadWithProgress, useIdentity, useRefreshIdentity } from './shared';
 
 type NoticeState = { kind: 'ok' | 'error'; text: string } | null;

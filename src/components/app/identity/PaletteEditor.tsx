@@ -4,10 +4,10 @@ import { useMutation } from '@tanstack/react-query';
 import { useId, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
-import { api } from '../../../lib/client/api';
-import { parseColor } from '../../../lib/color/parse';
-import { PRINT_CAUTION } from '../../../lib/cautions';
-import { COLOR_ROLES, type ColorRole, type IdentityColor } from '../../../lib/identity/types';
+import { api } from '@/lib/client/api';
+import { parseColor } from '@/lib/color/parse';
+import { PRINT_CAUTION } from '@/lib/cautions';
+import { COLOR_ROLES, type ColorRole, type IdentityColor } from '@/lib/identity/types';
 import { Caution, CopyButton, IdentityRoot, inkOn, LoadState, messageOf, Notice, useIdentity, useRefreshIdentity } from './shared';
 
 const ROLE_LABEL: Record<ColorRole, string> = {

@@ -2,9 +2,9 @@
 // identity query, the copy button and the small pieces of chrome every section uses.
 import { QueryClient, QueryClientProvider, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useEffect, useRef, useState, type ReactNode } from 'react';
-import { api, ApiClientError } from '../../../lib/client/api';
-import { contrastRatio } from '../../../lib/color/contrast';
-import type { Identity } from '../../../lib/identity/types';
+import { api, ApiClientError } from '@/lib/client/api';
+import { contrastRatio } from '@/lib/color/contrast';
+import type { Identity } from '@/lib/identity/types';
 
 // Module-level, so every island on the page reads and invalidates the same cache.
 let sharedClient: QueryClient | null = null;

@@ -1,12 +1,12 @@
 // Publishing: what changed since the last version, the publish form, the versions, and (for owners) share links.
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState, type ReactNode } from 'react';
-import { api } from '../../../lib/client/api';
-import type { ShareLinkView } from '../../../lib/publishing/share-links.server';
-import type { Finding, FindingCode } from '../../../lib/publishing/preflight';
-import { QueryRoot } from '../QueryRoot';
-import { When } from '../../ui/When';
-import { formatDate } from '../../../lib/format';
+import { api } from '@/lib/client/api';
+import type { ShareLinkView } from '@/lib/publishing/share-links.server';
+import type { Finding, FindingCode } from '@/lib/publishing/preflight';
+import { QueryRoot } from '@/components/app/QueryRoot';
+import { When } from '@/components/ui/When';
+import { formatDate } from '@/lib/format';
 
 interface Version { number: number; publishedAt: string; note: string; author: { name: string | null } }
 interface Compare { summary: string[] }

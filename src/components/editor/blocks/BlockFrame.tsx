@@ -1,10 +1,10 @@
 // The editor's frame around every guideline block: drag handle, name, move/copy/remove, live preview and settings.
 import { NodeViewWrapper, type ReactNodeViewProps } from '@tiptap/react';
 import { useId, useState, type ReactNode } from 'react';
-import { blockDefinition } from '../../../lib/guideline/blocks';
-import { BlockRenderer } from '../../guideline/blocks';
-import { deleteBlock, duplicateBlock, moveBlock, topLevelIndex } from '../commands';
-import { useIdentity } from '../IdentityContext';
+import { blockDefinition } from '@/lib/guideline/blocks';
+import { BlockRenderer } from '@/components/guideline/blocks';
+import { deleteBlock, duplicateBlock, moveBlock, topLevelIndex } from '@/components/editor/commands';
+import { useIdentity } from '@/components/editor/IdentityContext';
 
 function ToolButton({ label, onClick, children, danger }: { label: string; onClick: () => void; children: ReactNode; danger?: boolean }) {
   return (

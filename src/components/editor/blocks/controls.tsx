@@ -1,8 +1,8 @@
 // Settings controls shared by the block views: identity pickers by id, toggles, text and number fields.
 import { useId, type ReactNode } from 'react';
-import type { Identity } from '../../../lib/identity/types';
-import { colorsInOrder, logosInOrder } from '../../../lib/guideline/identity';
-import { safeHex } from '../../guideline/parts';
+import type { Identity } from '@/lib/identity/types';
+import { colorsInOrder, logosInOrder } from '@/lib/guideline/identity';
+import { safeHex } from '@/components/guideline/parts';
 
 export function Field({ label, hint, children }: { label: string; hint?: string; children: (id: string) => ReactNode }) {
   const id = useId();

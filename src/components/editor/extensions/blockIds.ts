@@ -1,8 +1,8 @@
 // Gives every top-level block a stable id (kept across edits, fresh on copies), which review comments anchor to.
 import { Extension } from '@tiptap/core';
 import { Plugin, PluginKey, type EditorState, type Transaction } from '@tiptap/pm/state';
-import { newBlockId } from '../../../lib/guideline/ids';
-import { RICH_TEXT_TYPES } from '../../../lib/guideline/richText';
+import { newBlockId } from '@/lib/guideline/ids';
+import { RICH_TEXT_TYPES } from '@/lib/guideline/richText';
 
 const key = new PluginKey('blockIds');
 

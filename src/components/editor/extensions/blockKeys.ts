@@ -1,6 +1,6 @@
 // Keyboard: Alt-↑/↓ move the current block, "/" in an empty paragraph or Mod-Alt-B opens the insert menu.
 import { Extension } from '@tiptap/core';
-import { moveBlock, topLevelIndex } from '../commands';
+import { moveBlock, topLevelIndex } from '@/components/editor/commands';
 
 export interface BlockKeysOptions {
   openInsertMenu: () => void;

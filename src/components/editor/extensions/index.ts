@@ -1,8 +1,8 @@
 // The editor's whole schema: our document node, the starter kit's rich text (trimmed), every block, ids and keys.
 import { Node, type AnyExtension } from '@tiptap/core';
 import StarterKit from '@tiptap/starter-kit';
-import { isSafeHref } from '../../../lib/guideline/links';
-import { BLOCK_NODES } from '../blocks';
+import { isSafeHref } from '@/lib/guideline/links';
+import { BLOCK_NODES } from '@/components/editor/blocks';
 import { BlockIds } from './blockIds';
 import { BlockKeys } from './blockKeys';
 

@@ -1,6 +1,6 @@
 // A boxed note or caution, set apart from the running text.
-import type { CalloutAttrs } from '../../../lib/guideline/blocks';
-import { EmptyHint, type BlockRenderProps } from '../parts';
+import type { CalloutAttrs } from '@/lib/guideline/blocks';
+import { EmptyHint, type BlockRenderProps } from '@/components/guideline/parts';
 
 export function CalloutBlock({ attrs, editing }: BlockRenderProps<CalloutAttrs>) {
   if (!attrs.text && !attrs.title) return editing ? <EmptyHint>Write the note.</EmptyHint> : null;

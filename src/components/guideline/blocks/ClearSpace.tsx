@@ -1,8 +1,8 @@
 // The clear-space diagram drawn from the logo's own measured bounds and the identity's clear-space box.
-import type { ClearSpaceAttrs } from '../../../lib/guideline/blocks';
-import { findLogo } from '../../../lib/guideline/identity';
-import { safeAssetUrl } from '../../../lib/guideline/links';
-import { EmptyHint, Missing, Note, type BlockRenderProps } from '../parts';
+import type { ClearSpaceAttrs } from '@/lib/guideline/blocks';
+import { findLogo } from '@/lib/guideline/identity';
+import { safeAssetUrl } from '@/lib/guideline/links';
+import { EmptyHint, Missing, Note, type BlockRenderProps } from '@/components/guideline/parts';
 
 const round = (n: number) => Math.round(n * 100) / 100;
 

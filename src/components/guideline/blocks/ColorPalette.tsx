@@ -1,9 +1,9 @@
 // Colour swatches with every notation and the print values, each with a copy button.
-import { PRINT_CAUTION } from '../../../lib/cautions';
-import type { ColorPaletteAttrs } from '../../../lib/guideline/blocks';
-import { findColor } from '../../../lib/guideline/identity';
-import type { IdentityColor } from '../../../lib/identity/types';
-import { Caution, CopyButton, EmptyHint, Missing, Note, safeHex, type BlockRenderProps, type RenderMode } from '../parts';
+import { PRINT_CAUTION } from '@/lib/cautions';
+import type { ColorPaletteAttrs } from '@/lib/guideline/blocks';
+import { findColor } from '@/lib/guideline/identity';
+import type { IdentityColor } from '@/lib/identity/types';
+import { Caution, CopyButton, EmptyHint, Missing, Note, safeHex, type BlockRenderProps, type RenderMode } from '@/components/guideline/parts';
 
 /** "C 0 M 62 Y 80 K 14": the way printers read CMYK percentages. */
 export const formatCmyk = ([c, m, y, k]: readonly number[]) => `C ${c} M ${m} Y ${y} K ${k}`;

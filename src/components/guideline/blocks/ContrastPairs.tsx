@@ -1,9 +1,9 @@
 // Colour pairs with their WCAG 2.2 contrast ratio and a verdict per level.
-import { CONTRAST_CAUTION } from '../../../lib/cautions';
-import { contrastRatio, wcagLevels, type WcagLevels } from '../../../lib/color/contrast';
-import type { ContrastPairsAttrs } from '../../../lib/guideline/blocks';
-import { findColor } from '../../../lib/guideline/identity';
-import { Caution, EmptyHint, Missing, Note, safeHex, type BlockRenderProps } from '../parts';
+import { CONTRAST_CAUTION } from '@/lib/cautions';
+import { contrastRatio, wcagLevels, type WcagLevels } from '@/lib/color/contrast';
+import type { ContrastPairsAttrs } from '@/lib/guideline/blocks';
+import { findColor } from '@/lib/guideline/identity';
+import { Caution, EmptyHint, Missing, Note, safeHex, type BlockRenderProps } from '@/components/guideline/parts';
 
 /** The levels we show, in our own words, with the WCAG 2.2 criterion each comes from. */
 export const CONTRAST_LEVELS: { key: keyof WcagLevels; label: string; criterion: string }[] = [

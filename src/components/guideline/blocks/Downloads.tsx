@@ -1,7 +1,7 @@
 // The approved files a reader may download: the chosen ones, or every approved file when none is chosen.
-import type { DownloadsAttrs } from '../../../lib/guideline/blocks';
-import { safeAssetUrl } from '../../../lib/guideline/links';
-import { EmptyHint, Note, type BlockRenderProps } from '../parts';
+import type { DownloadsAttrs } from '@/lib/guideline/blocks';
+import { safeAssetUrl } from '@/lib/guideline/links';
+import { EmptyHint, Note, type BlockRenderProps } from '@/components/guideline/parts';
 
 export function DownloadsBlock({ attrs, identity, editing }: BlockRenderProps<DownloadsAttrs>) {
   const approved = identity.assets ?? [];

@@ -1,9 +1,9 @@
 // Photographs with a do or don't verdict, each a file of the brand's asset shelf; anything else is a neutral frame.
-import type { ImageryAttrs } from '../../../lib/guideline/blocks';
-import { safeAssetUrl } from '../../../lib/guideline/links';
-import type { Identity } from '../../../lib/identity/types';
-import { isAssetRef } from '../../../lib/safe/values';
-import { EmptyHint, type BlockRenderProps } from '../parts';
+import type { ImageryAttrs } from '@/lib/guideline/blocks';
+import { safeAssetUrl } from '@/lib/guideline/links';
+import type { Identity } from '@/lib/identity/types';
+import { isAssetRef } from '@/lib/safe/values';
+import { EmptyHint, type BlockRenderProps } from '@/components/guideline/parts';
 
 const COLUMNS = ['', 'sm:grid-cols-1', 'sm:grid-cols-2', 'sm:grid-cols-3', 'sm:grid-cols-4'];
 

@@ -1,8 +1,8 @@
 // Each chosen logo on light, dark and brand-colour grounds.
-import { TRADEMARK_CAUTION } from '../../../lib/cautions';
-import type { LogoShowcaseAttrs } from '../../../lib/guideline/blocks';
-import { findLogo } from '../../../lib/guideline/identity';
-import { EmptyHint, LogoImage, Missing, Note, safeHex, type BlockRenderProps } from '../parts';
+import { TRADEMARK_CAUTION } from '@/lib/cautions';
+import type { LogoShowcaseAttrs } from '@/lib/guideline/blocks';
+import { findLogo } from '@/lib/guideline/identity';
+import { EmptyHint, LogoImage, Missing, Note, safeHex, type BlockRenderProps } from '@/components/guideline/parts';
 import { logoGrounds } from './grounds';
 
 export function LogoShowcaseBlock({ attrs, identity, mode, editing }: BlockRenderProps<LogoShowcaseAttrs>) {

@@ -1,7 +1,7 @@
 // The logo drawn at its smallest allowed size, with the print minimum beside it.
-import type { MinimumSizeAttrs } from '../../../lib/guideline/blocks';
-import { findLogo } from '../../../lib/guideline/identity';
-import { EmptyHint, LogoImage, Missing, Note, type BlockRenderProps } from '../parts';
+import type { MinimumSizeAttrs } from '@/lib/guideline/blocks';
+import { findLogo } from '@/lib/guideline/identity';
+import { EmptyHint, LogoImage, Missing, Note, type BlockRenderProps } from '@/components/guideline/parts';
 
 export function MinimumSizeBlock({ attrs, identity, mode, editing }: BlockRenderProps<MinimumSizeAttrs>) {
   if (!attrs.logoId) return editing ? <EmptyHint>Choose the logo whose minimum size to show.</EmptyHint> : null;

@@ -1,10 +1,10 @@
 // Wrong uses of the logo, each drawn from the real file with SVG transforms and filters, marked "Don't".
-import { toColor } from '../../../lib/color/parse';
-import { MISUSE_LABELS, type MisuseAttrs, type MisuseKind } from '../../../lib/guideline/blocks';
-import { colorForRole, colorsInOrder, extremes, findLogo } from '../../../lib/guideline/identity';
-import { safeAssetUrl } from '../../../lib/guideline/links';
-import type { Identity, IdentityLogo } from '../../../lib/identity/types';
-import { EmptyHint, Missing, Note, type BlockRenderProps } from '../parts';
+import { toColor } from '@/lib/color/parse';
+import { MISUSE_LABELS, type MisuseAttrs, type MisuseKind } from '@/lib/guideline/blocks';
+import { colorForRole, colorsInOrder, extremes, findLogo } from '@/lib/guideline/identity';
+import { safeAssetUrl } from '@/lib/guideline/links';
+import type { Identity, IdentityLogo } from '@/lib/identity/types';
+import { EmptyHint, Missing, Note, type BlockRenderProps } from '@/components/guideline/parts';
 
 /** A colour far from the brand's own: the primary's hue turned half way round the OKLCH wheel. */
 function offBrandHex(identity: Identity): string {

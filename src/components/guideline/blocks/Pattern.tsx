@@ -1,8 +1,8 @@
 // A repeat of the brand mark: size, gap, angle, row shift and colours from the block, its one-colour knockout tinted with an SVG filter.
-import type { PatternAttrs } from '../../../lib/guideline/blocks';
-import { colorForRole, findColor, findLogo } from '../../../lib/guideline/identity';
-import { safeAssetUrl } from '../../../lib/guideline/links';
-import { EmptyHint, Missing, safeHex, type BlockRenderProps } from '../parts';
+import type { PatternAttrs } from '@/lib/guideline/blocks';
+import { colorForRole, findColor, findLogo } from '@/lib/guideline/identity';
+import { safeAssetUrl } from '@/lib/guideline/links';
+import { EmptyHint, Missing, safeHex, type BlockRenderProps } from '@/components/guideline/parts';
 
 export function PatternBlock({ attrs, identity, editing, uid }: BlockRenderProps<PatternAttrs> & { uid: string }) {
   if (!attrs.logoId) return editing ? <EmptyHint>Choose the mark the pattern repeats.</EmptyHint> : null;

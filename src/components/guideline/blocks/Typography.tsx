@@ -1,8 +1,8 @@
 // The typefaces by role with a specimen, and the type scale set in the brand's own fonts.
-import type { TypographyAttrs } from '../../../lib/guideline/blocks';
-import { fontStack, typefaceForRole } from '../../../lib/guideline/identity';
-import type { IdentityTypeface, TypefaceRole } from '../../../lib/identity/types';
-import { EmptyHint, Missing, type BlockRenderProps } from '../parts';
+import type { TypographyAttrs } from '@/lib/guideline/blocks';
+import { fontStack, typefaceForRole } from '@/lib/guideline/identity';
+import type { IdentityTypeface, TypefaceRole } from '@/lib/identity/types';
+import { EmptyHint, Missing, type BlockRenderProps } from '@/components/guideline/parts';
 
 const ROLE_LABELS: Record<TypefaceRole, string> = { heading: 'Headings', body: 'Running text', accent: 'Accents' };
 const ALPHABET = 'ABCDEFGHIJKLMNOPQRSTUVWXYZ abcdefghijklmnopqrstuvwxyz 0123456789 & ! ? “ ” ‘ ’ —';

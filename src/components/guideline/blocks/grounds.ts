@@ -1,6 +1,6 @@
 // The three grounds every logo preview offers: light, dark and the brand colour.
-import { colorForRole, extremes, findColor } from '../../../lib/guideline/identity';
-import type { Identity } from '../../../lib/identity/types';
+import { colorForRole, extremes, findColor } from '@/lib/guideline/identity';
+import type { Identity } from '@/lib/identity/types';
 
 export interface Ground {
   key: 'light' | 'dark' | 'brand';

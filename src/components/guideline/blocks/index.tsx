@@ -1,8 +1,8 @@
 // Block type → its published renderer; attributes always pass through the block's schema first.
 import type { ComponentType } from 'react';
-import { blockDefinition, storedAttrs, type BlockType } from '../../../lib/guideline/blocks';
-import type { Identity } from '../../../lib/identity/types';
-import type { RenderMode } from '../parts';
+import { blockDefinition, storedAttrs, type BlockType } from '@/lib/guideline/blocks';
+import type { Identity } from '@/lib/identity/types';
+import type { RenderMode } from '@/components/guideline/parts';
 import { CalloutBlock } from './Callout';
 import { ClearSpaceBlock } from './ClearSpace';
 import { ColorPaletteBlock } from './ColorPalette';

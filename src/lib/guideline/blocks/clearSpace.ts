@@ -1,6 +1,6 @@
 // The clear-space diagram: the logo, its drawn bounds and the protected area from the identity.
 import * as z from 'zod';
-import { refIdSchema } from '../ids';
+import { refIdSchema } from '@/lib/guideline/ids';
 import { defineBlock, text } from './define';
 
 export const clearSpaceBlock = defineBlock({

@@ -1,6 +1,6 @@
 // Chosen colours with every value a reader may need to copy, for screen and for print.
 import * as z from 'zod';
-import { refIdSchema } from '../ids';
+import { refIdSchema } from '@/lib/guideline/ids';
 import { defineBlock, distinctList, text } from './define';
 
 export const colorPaletteBlock = defineBlock({

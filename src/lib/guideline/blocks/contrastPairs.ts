@@ -1,6 +1,6 @@
 // Text-on-ground pairs with their WCAG 2.2 contrast ratio and verdicts.
 import * as z from 'zod';
-import { refIdSchema } from '../ids';
+import { refIdSchema } from '@/lib/guideline/ids';
 import { defineBlock, distinctList, text } from './define';
 
 export const CONTRAST_CLAIMS = ['AA', 'AAA'] as const;

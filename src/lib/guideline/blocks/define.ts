@@ -1,7 +1,7 @@
 // One place that turns a block's fields into its attribute schema, defaults and registry entry.
 import * as z from 'zod';
-import { isCleanNote, NOTE_MESSAGE } from '../../safe/values';
-import { blockIdSchema } from '../ids';
+import { isCleanNote, NOTE_MESSAGE } from '@/lib/safe/values';
+import { blockIdSchema } from '@/lib/guideline/ids';
 
 export const BLOCK_GROUPS = {
   structure: 'Structure',

@@ -1,5 +1,5 @@
 // A shelf of approved files; the list is filled once assets exist.
-import { refIdSchema } from '../ids';
+import { refIdSchema } from '@/lib/guideline/ids';
 import { defineBlock, distinctList, text } from './define';
 
 export const downloadsBlock = defineBlock({

@@ -1,8 +1,8 @@
 // Photographs with a do or don't verdict. Every image comes from the brand's own asset shelf (an asset id);
 // a name that is not yet an asset ("photo-to-come-1") shows as a frame. Outside addresses are never fetched.
 import * as z from 'zod';
-import { assetRef } from '../../safe/values';
-import { refIdSchema } from '../ids';
+import { assetRef } from '@/lib/safe/values';
+import { refIdSchema } from '@/lib/guideline/ids';
 import { defineBlock, text } from './define';
 
 export const IMAGE_VERDICTS = ['do', 'dont'] as const;

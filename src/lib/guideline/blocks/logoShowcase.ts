@@ -1,6 +1,6 @@
 // Chosen logo variants, each on light, dark and brand-colour grounds.
 import * as z from 'zod';
-import { refIdSchema } from '../ids';
+import { refIdSchema } from '@/lib/guideline/ids';
 import { defineBlock, distinctList, text } from './define';
 
 /** Which file of the logo sits on the dark and brand grounds. */

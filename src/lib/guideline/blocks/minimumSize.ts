@@ -1,6 +1,6 @@
 // The smallest a logo may appear: drawn at its screen minimum, with the print minimum beside it.
 import * as z from 'zod';
-import { refIdSchema } from '../ids';
+import { refIdSchema } from '@/lib/guideline/ids';
 import { defineBlock, text } from './define';
 
 export const minimumSizeBlock = defineBlock({

@@ -1,6 +1,6 @@
 // Wrong uses of the logo, each generated from the real file, so readers see the very mistake.
 import * as z from 'zod';
-import { refIdSchema } from '../ids';
+import { refIdSchema } from '@/lib/guideline/ids';
 import { defineBlock, distinctList, text } from './define';
 
 export const MISUSE_KINDS = ['stretched', 'rotated', 'recoloured', 'outlined', 'dropShadow', 'busyBackground', 'lowContrast'] as const;

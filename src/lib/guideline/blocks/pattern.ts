@@ -1,6 +1,6 @@
 // A repeat built from the brand mark; the defaults stay quiet (sparse, small, faint) so it supports, not shouts.
 import * as z from 'zod';
-import { refIdSchema } from '../ids';
+import { refIdSchema } from '@/lib/guideline/ids';
 import { defineBlock } from './define';
 
 const num = (what: string, min: number, max: number, fallback: number) =>

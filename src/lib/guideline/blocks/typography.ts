@@ -1,6 +1,6 @@
 // The brand's typefaces by role, a specimen, and the type scale set in the real fonts.
 import * as z from 'zod';
-import { TYPEFACE_ROLES } from '../../identity/types';
+import { TYPEFACE_ROLES } from '@/lib/identity/types';
 import { defineBlock, distinctList, text } from './define';
 
 // A pangram shows every letter of the alphabet (common practice for type specimens); each brand sets its own line.

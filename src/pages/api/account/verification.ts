@@ -1,9 +1,9 @@
 import { z } from 'zod';
-import { auth } from '../../../lib/auth/auth.server';
-import { isVerified, requireCaller } from '../../../lib/auth/access.server';
-import { ApiError, endpoint, json, methodNotAllowed, readJson } from '../../../lib/http/api';
-import { safeNext } from '../../../lib/http/redirect';
-import { allowVerificationResend } from '../../../lib/mail/send-limit.server';
+import { auth } from '@/lib/auth/auth.server';
+import { isVerified, requireCaller } from '@/lib/auth/access.server';
+import { ApiError, endpoint, json, methodNotAllowed, readJson } from '@/lib/http/api';
+import { safeNext } from '@/lib/http/redirect';
+import { allowVerificationResend } from '@/lib/mail/send-limit.server';
 
 const resendBody = z.strictObject({
   /** Where the link lands once opened: a path on this site (e.g. the invitation being accepted). */

@@ -1,9 +1,9 @@
 // better-auth's own routes (/api/auth/sign-up/email, /sign-in/email, /sign-out, …).
 import type { APIRoute } from 'astro';
-import { CLIENT_IP_HEADER } from '../../../lib/auth/auth-options';
-import { auth } from '../../../lib/auth/auth.server';
-import { ApiError, errorResponse, readBody } from '../../../lib/http/api';
-import { requestClientAddress } from '../../../lib/http/client-address.server';
+import { CLIENT_IP_HEADER } from '@/lib/auth/auth-options';
+import { auth } from '@/lib/auth/auth.server';
+import { ApiError, errorResponse, readBody } from '@/lib/http/api';
+import { requestClientAddress } from '@/lib/http/client-address.server';
 
 /** Sign-in, sign-up and the rest carry a few fields; anything bigger is refused as it streams in. */
 const MAX_AUTH_BODY_BYTES = 16 * 1024;

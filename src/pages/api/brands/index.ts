@@ -1,7 +1,7 @@
-import { requireVerifiedCaller, visibleBrands } from '../../../lib/auth/access.server';
-import { createBrand, summary } from '../../../lib/brands/brands.server';
-import { createBrandBody } from '../../../lib/brands/schemas';
-import { endpoint, json, methodNotAllowed, readJson } from '../../../lib/http/api';
+import { requireVerifiedCaller, visibleBrands } from '@/lib/auth/access.server';
+import { createBrand, summary } from '@/lib/brands/brands.server';
+import { createBrandBody } from '@/lib/brands/schemas';
+import { endpoint, json, methodNotAllowed, readJson } from '@/lib/http/api';
 
 /** Brands the caller can see, with their role on each. */
 export const GET = endpoint(async ({ locals }) => {

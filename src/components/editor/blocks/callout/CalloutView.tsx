@@ -1,8 +1,8 @@
 // Settings of a remark box: tone, optional title and the text.
 import type { ReactNodeViewProps } from '@tiptap/react';
-import type { CalloutAttrs } from '../../../../lib/guideline/blocks';
-import { BlockFrame } from '../BlockFrame';
-import { Select, TextInput } from '../controls';
+import type { CalloutAttrs } from '@/lib/guideline/blocks';
+import { BlockFrame } from '@/components/editor/blocks/BlockFrame';
+import { Select, TextInput } from '@/components/editor/blocks/controls';
 
 export function CalloutView(props: ReactNodeViewProps) {
   const a = props.node.attrs as CalloutAttrs;

@@ -1,8 +1,8 @@
 // Tiptap node of the callout block: attributes come from its schema, the view from CalloutView.
 import { mergeAttributes, Node } from '@tiptap/core';
 import { ReactNodeViewRenderer } from '@tiptap/react';
-import { calloutBlock } from '../../../../lib/guideline/blocks/callout';
-import { BLOCK_NODE_SPEC, blockAttributes } from '../attributes';
+import { calloutBlock } from '@/lib/guideline/blocks/callout';
+import { BLOCK_NODE_SPEC, blockAttributes } from '@/components/editor/blocks/attributes';
 import { CalloutView } from './CalloutView';
 
 export const CalloutNode = Node.create({

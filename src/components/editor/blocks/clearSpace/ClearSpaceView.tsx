@@ -1,9 +1,9 @@
 // Settings of the clear-space diagram: which logo, whether to draw the unit, a note.
 import type { ReactNodeViewProps } from '@tiptap/react';
-import type { ClearSpaceAttrs } from '../../../../lib/guideline/blocks';
-import { BlockFrame } from '../BlockFrame';
-import { LogoSelect, TextInput, Toggle } from '../controls';
-import { useIdentity } from '../../IdentityContext';
+import type { ClearSpaceAttrs } from '@/lib/guideline/blocks';
+import { BlockFrame } from '@/components/editor/blocks/BlockFrame';
+import { LogoSelect, TextInput, Toggle } from '@/components/editor/blocks/controls';
+import { useIdentity } from '@/components/editor/IdentityContext';
 
 export function ClearSpaceView(props: ReactNodeViewProps) {
   const identity = useIdentity();

@@ -1,8 +1,8 @@
 // Tiptap node of the clearSpace block: attributes come from its schema, the view from ClearSpaceView.
 import { mergeAttributes, Node } from '@tiptap/core';
 import { ReactNodeViewRenderer } from '@tiptap/react';
-import { clearSpaceBlock } from '../../../../lib/guideline/blocks/clearSpace';
-import { BLOCK_NODE_SPEC, blockAttributes } from '../attributes';
+import { clearSpaceBlock } from '@/lib/guideline/blocks/clearSpace';
+import { BLOCK_NODE_SPEC, blockAttributes } from '@/components/editor/blocks/attributes';
 import { ClearSpaceView } from './ClearSpaceView';
 
 export const ClearSpaceNode = Node.create({

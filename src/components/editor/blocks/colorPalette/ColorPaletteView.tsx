@@ -1,9 +1,9 @@
 // Settings of the colour palette: which colours, in the order ticked, and whether to show print values.
 import type { ReactNodeViewProps } from '@tiptap/react';
-import type { ColorPaletteAttrs } from '../../../../lib/guideline/blocks';
-import { BlockFrame } from '../BlockFrame';
-import { colorOptions, MultiPick, TextInput, Toggle } from '../controls';
-import { useIdentity } from '../../IdentityContext';
+import type { ColorPaletteAttrs } from '@/lib/guideline/blocks';
+import { BlockFrame } from '@/components/editor/blocks/BlockFrame';
+import { colorOptions, MultiPick, TextInput, Toggle } from '@/components/editor/blocks/controls';
+import { useIdentity } from '@/components/editor/IdentityContext';
 
 export function ColorPaletteView(props: ReactNodeViewProps) {
   const identity = useIdentity();

@@ -1,11 +1,11 @@
 // Settings of the contrast pairs: add, change and remove text-on-ground pairs.
 import type { ReactNodeViewProps } from '@tiptap/react';
-import type { ContrastPair, ContrastPairsAttrs } from '../../../../lib/guideline/blocks';
-import { suggestedPairs } from '../../../../lib/guideline/templates';
-import { colorsInOrder } from '../../../../lib/guideline/identity';
-import { BlockFrame } from '../BlockFrame';
-import { ColorSelect, Select, TextInput } from '../controls';
-import { useIdentity } from '../../IdentityContext';
+import type { ContrastPair, ContrastPairsAttrs } from '@/lib/guideline/blocks';
+import { suggestedPairs } from '@/lib/guideline/templates';
+import { colorsInOrder } from '@/lib/guideline/identity';
+import { BlockFrame } from '@/components/editor/blocks/BlockFrame';
+import { ColorSelect, Select, TextInput } from '@/components/editor/blocks/controls';
+import { useIdentity } from '@/components/editor/IdentityContext';
 
 export function ContrastPairsView(props: ReactNodeViewProps) {
   const identity = useIdentity();

@@ -1,8 +1,8 @@
 // Tiptap node of the contrastPairs block: attributes come from its schema, the view from ContrastPairsView.
 import { mergeAttributes, Node } from '@tiptap/core';
 import { ReactNodeViewRenderer } from '@tiptap/react';
-import { contrastPairsBlock } from '../../../../lib/guideline/blocks/contrastPairs';
-import { BLOCK_NODE_SPEC, blockAttributes } from '../attributes';
+import { contrastPairsBlock } from '@/lib/guideline/blocks/contrastPairs';
+import { BLOCK_NODE_SPEC, blockAttributes } from '@/components/editor/blocks/attributes';
 import { ContrastPairsView } from './ContrastPairsView';
 
 export const ContrastPairsNode = Node.create({

@@ -1,8 +1,8 @@
 // Settings of the downloads block: its title and a note; the files themselves are chosen once assets exist.
 import type { ReactNodeViewProps } from '@tiptap/react';
-import type { DownloadsAttrs } from '../../../../lib/guideline/blocks';
-import { BlockFrame } from '../BlockFrame';
-import { TextInput } from '../controls';
+import type { DownloadsAttrs } from '@/lib/guideline/blocks';
+import { BlockFrame } from '@/components/editor/blocks/BlockFrame';
+import { TextInput } from '@/components/editor/blocks/controls';
 
 export function DownloadsView(props: ReactNodeViewProps) {
   const a = props.node.attrs as DownloadsAttrs;

@@ -1,10 +1,10 @@
 // Settings of the imagery block: images chosen from the brand's asset shelf, with alt text, verdict and caption.
 import type { ReactNodeViewProps } from '@tiptap/react';
-import type { ImageItem, ImageryAttrs } from '../../../../lib/guideline/blocks';
-import { imageSrcSchema, looksLikeAddress, OUTSIDE_IMAGE_MESSAGE } from '../../../../lib/guideline/blocks';
-import { useIdentity } from '../../IdentityContext';
-import { BlockFrame } from '../BlockFrame';
-import { NumberInput, Select, TextInput } from '../controls';
+import type { ImageItem, ImageryAttrs } from '@/lib/guideline/blocks';
+import { imageSrcSchema, looksLikeAddress, OUTSIDE_IMAGE_MESSAGE } from '@/lib/guideline/blocks';
+import { useIdentity } from '@/components/editor/IdentityContext';
+import { BlockFrame } from '@/components/editor/blocks/BlockFrame';
+import { NumberInput, Select, TextInput } from '@/components/editor/blocks/controls';
 
 const TO_COME = 'image-to-come';
 

@@ -1,9 +1,9 @@
 // Settings of the logo-on-grounds block: which logos, the brand ground, and the file used on dark grounds.
 import type { ReactNodeViewProps } from '@tiptap/react';
-import type { LogoShowcaseAttrs } from '../../../../lib/guideline/blocks';
-import { BlockFrame } from '../BlockFrame';
-import { ColorSelect, logoOptions, MultiPick, Select, TextInput } from '../controls';
-import { useIdentity } from '../../IdentityContext';
+import type { LogoShowcaseAttrs } from '@/lib/guideline/blocks';
+import { BlockFrame } from '@/components/editor/blocks/BlockFrame';
+import { ColorSelect, logoOptions, MultiPick, Select, TextInput } from '@/components/editor/blocks/controls';
+import { useIdentity } from '@/components/editor/IdentityContext';
 
 export function LogoShowcaseView(props: ReactNodeViewProps) {
   const identity = useIdentity();

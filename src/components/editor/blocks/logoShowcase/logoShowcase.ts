@@ -1,8 +1,8 @@
 // Tiptap node of the logoShowcase block: attributes come from its schema, the view from LogoShowcaseView.
 import { mergeAttributes, Node } from '@tiptap/core';
 import { ReactNodeViewRenderer } from '@tiptap/react';
-import { logoShowcaseBlock } from '../../../../lib/guideline/blocks/logoShowcase';
-import { BLOCK_NODE_SPEC, blockAttributes } from '../attributes';
+import { logoShowcaseBlock } from '@/lib/guideline/blocks/logoShowcase';
+import { BLOCK_NODE_SPEC, blockAttributes } from '@/components/editor/blocks/attributes';
 import { LogoShowcaseView } from './LogoShowcaseView';
 
 export const LogoShowcaseNode = Node.create({

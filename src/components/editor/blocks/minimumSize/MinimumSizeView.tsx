@@ -1,9 +1,9 @@
 // Settings of the minimum-size block: which logo, whether to show the print minimum, a note.
 import type { ReactNodeViewProps } from '@tiptap/react';
-import type { MinimumSizeAttrs } from '../../../../lib/guideline/blocks';
-import { BlockFrame } from '../BlockFrame';
-import { LogoSelect, TextInput, Toggle } from '../controls';
-import { useIdentity } from '../../IdentityContext';
+import type { MinimumSizeAttrs } from '@/lib/guideline/blocks';
+import { BlockFrame } from '@/components/editor/blocks/BlockFrame';
+import { LogoSelect, TextInput, Toggle } from '@/components/editor/blocks/controls';
+import { useIdentity } from '@/components/editor/IdentityContext';
 
 export function MinimumSizeView(props: ReactNodeViewProps) {
   const identity = useIdentity();

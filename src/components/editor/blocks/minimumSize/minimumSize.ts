@@ -1,8 +1,8 @@
 // Tiptap node of the minimumSize block: attributes come from its schema, the view from MinimumSizeView.
 import { mergeAttributes, Node } from '@tiptap/core';
 import { ReactNodeViewRenderer } from '@tiptap/react';
-import { minimumSizeBlock } from '../../../../lib/guideline/blocks/minimumSize';
-import { BLOCK_NODE_SPEC, blockAttributes } from '../attributes';
+import { minimumSizeBlock } from '@/lib/guideline/blocks/minimumSize';
+import { BLOCK_NODE_SPEC, blockAttributes } from '@/components/editor/blocks/attributes';
 import { MinimumSizeView } from './MinimumSizeView';
 
 export const MinimumSizeNode = Node.create({

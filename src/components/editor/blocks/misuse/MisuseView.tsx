@@ -1,9 +1,9 @@
 // Settings of the logo don'ts: which logo and which wrong uses to draw.
 import type { ReactNodeViewProps } from '@tiptap/react';
-import { MISUSE_KINDS, MISUSE_LABELS, type MisuseAttrs } from '../../../../lib/guideline/blocks';
-import { BlockFrame } from '../BlockFrame';
-import { LogoSelect, MultiPick, TextInput } from '../controls';
-import { useIdentity } from '../../IdentityContext';
+import { MISUSE_KINDS, MISUSE_LABELS, type MisuseAttrs } from '@/lib/guideline/blocks';
+import { BlockFrame } from '@/components/editor/blocks/BlockFrame';
+import { LogoSelect, MultiPick, TextInput } from '@/components/editor/blocks/controls';
+import { useIdentity } from '@/components/editor/IdentityContext';
 
 export function MisuseView(props: ReactNodeViewProps) {
   const identity = useIdentity();

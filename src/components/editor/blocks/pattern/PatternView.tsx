@@ -1,9 +1,9 @@
 // Settings of the pattern: the mark, its size, gap, angle, row shift, colours and strength.
 import type { ReactNodeViewProps } from '@tiptap/react';
-import type { PatternAttrs } from '../../../../lib/guideline/blocks';
-import { BlockFrame } from '../BlockFrame';
-import { ColorSelect, LogoSelect, NumberInput } from '../controls';
-import { useIdentity } from '../../IdentityContext';
+import type { PatternAttrs } from '@/lib/guideline/blocks';
+import { BlockFrame } from '@/components/editor/blocks/BlockFrame';
+import { ColorSelect, LogoSelect, NumberInput } from '@/components/editor/blocks/controls';
+import { useIdentity } from '@/components/editor/IdentityContext';
 
 export function PatternView(props: ReactNodeViewProps) {
   const identity = useIdentity();

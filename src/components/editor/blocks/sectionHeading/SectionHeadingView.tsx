@@ -1,7 +1,7 @@
 // A section heading edited in place: eyebrow, title and intro; the outline and the site's contents follow it.
 import type { ReactNodeViewProps } from '@tiptap/react';
-import type { SectionHeadingAttrs } from '../../../../lib/guideline/blocks';
-import { BlockFrame } from '../BlockFrame';
+import type { SectionHeadingAttrs } from '@/lib/guideline/blocks';
+import { BlockFrame } from '@/components/editor/blocks/BlockFrame';
 
 export function SectionHeadingView(props: ReactNodeViewProps) {
   const a = props.node.attrs as SectionHeadingAttrs;

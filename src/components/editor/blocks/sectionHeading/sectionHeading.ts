@@ -1,8 +1,8 @@
 // Tiptap node of the sectionHeading block: attributes come from its schema, the view from SectionHeadingView.
 import { mergeAttributes, Node } from '@tiptap/core';
 import { ReactNodeViewRenderer } from '@tiptap/react';
-import { sectionHeadingBlock } from '../../../../lib/guideline/blocks/sectionHeading';
-import { BLOCK_NODE_SPEC, blockAttributes } from '../attributes';
+import { sectionHeadingBlock } from '@/lib/guideline/blocks/sectionHeading';
+import { BLOCK_NODE_SPEC, blockAttributes } from '@/components/editor/blocks/attributes';
 import { SectionHeadingView } from './SectionHeadingView';
 
 export const SectionHeadingNode = Node.create({

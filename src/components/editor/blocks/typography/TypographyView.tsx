@@ -1,11 +1,11 @@
 // Settings of the typography block: roles shown, specimen text, the scale; flags unconfirmed font licences.
 import type { ReactNodeViewProps } from '@tiptap/react';
-import { FONT_LICENCE_CAUTION } from '../../../../lib/cautions';
-import type { TypographyAttrs } from '../../../../lib/guideline/blocks';
-import { TYPEFACE_ROLES } from '../../../../lib/identity/types';
-import { BlockFrame } from '../BlockFrame';
-import { MultiPick, TextInput, Toggle } from '../controls';
-import { useIdentity } from '../../IdentityContext';
+import { FONT_LICENCE_CAUTION } from '@/lib/cautions';
+import type { TypographyAttrs } from '@/lib/guideline/blocks';
+import { TYPEFACE_ROLES } from '@/lib/identity/types';
+import { BlockFrame } from '@/components/editor/blocks/BlockFrame';
+import { MultiPick, TextInput, Toggle } from '@/components/editor/blocks/controls';
+import { useIdentity } from '@/components/editor/IdentityContext';
 
 export function TypographyView(props: ReactNodeViewProps) {
   const identity = useIdentity();

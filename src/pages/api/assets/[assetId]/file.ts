@@ -1,12 +1,12 @@
-import { Asset } from '../../../../../db/models/assets';
-import { authorizeAssetRead } from '../../../../lib/assets/access.server';
-import { assetFor, downloadFile, renditionRequester } from '../../../../lib/assets/assets.server';
-import { renditionQuerySchema } from '../../../../lib/assets/kinds';
-import { queryObject } from '../../../../lib/assets/schemas';
-import { PRINT_CAUTION } from '../../../../lib/cautions';
-import { ApiError, endpoint, fileResponse, idParam, methodNotAllowed, notFound, parseWith } from '../../../../lib/http/api';
-import { requestClientAddress } from '../../../../lib/http/client-address.server';
-import '../../../../lib/db.server';
+import { Asset } from '@db/models/assets';
+import { authorizeAssetRead } from '@/lib/assets/access.server';
+import { assetFor, downloadFile, renditionRequester } from '@/lib/assets/assets.server';
+import { renditionQuerySchema } from '@/lib/assets/kinds';
+import { queryObject } from '@/lib/assets/schemas';
+import { PRINT_CAUTION } from '@/lib/cautions';
+import { ApiError, endpoint, fileResponse, idParam, methodNotAllowed, notFound, parseWith } from '@/lib/http/api';
+import { requestClientAddress } from '@/lib/http/client-address.server';
+import '@/lib/db.server';
 
 /** An asset's original or a rendition (?format, width, background, variant, color, preset, colorSpace); every call is logged. */
 export const GET = endpoint(async (context) => {

@@ -1,7 +1,7 @@
-import { authorizeAssetRead } from '../../../../lib/assets/access.server';
-import { bundle } from '../../../../lib/assets/assets.server';
-import { bundleSchema } from '../../../../lib/assets/schemas';
-import { endpoint, idParam, methodNotAllowed, readJson } from '../../../../lib/http/api';
+import { authorizeAssetRead } from '@/lib/assets/access.server';
+import { bundle } from '@/lib/assets/assets.server';
+import { bundleSchema } from '@/lib/assets/schemas';
+import { endpoint, idParam, methodNotAllowed, readJson } from '@/lib/http/api';
 
 /** A zip of chosen approved assets (or all approved logos) with renditions and USAGE.txt, streamed as it is packed. */
 export const POST = endpoint(async ({ locals, params, request }) => {

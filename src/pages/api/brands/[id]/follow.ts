@@ -1,6 +1,6 @@
-import { authorizeBrand } from '../../../../lib/auth/access.server';
-import { endpoint, idParam, json, methodNotAllowed } from '../../../../lib/http/api';
-import { isFollowing, setFollowing } from '../../../../lib/notices/follow.server';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, idParam, json, methodNotAllowed } from '@/lib/http/api';
+import { isFollowing, setFollowing } from '@/lib/notices/follow.server';
 
 /** Whether the caller follows the brand (followers are e-mailed when a version is published). */
 export const GET = endpoint(async ({ locals, params }) => {

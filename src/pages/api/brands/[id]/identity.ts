@@ -1,6 +1,6 @@
-import { authorizeBrand } from '../../../../lib/auth/access.server';
-import { endpoint, idParam, json, methodNotAllowed } from '../../../../lib/http/api';
-import { loadIdentity } from '../../../../lib/identity/identity.server';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, idParam, json, methodNotAllowed } from '@/lib/http/api';
+import { loadIdentity } from '@/lib/identity/identity.server';
 
 /** The brand's identity with every computed value: colours, logos, typefaces, type scale. */
 export const GET = endpoint(async ({ locals, params }) => {

@@ -1,7 +1,7 @@
-import { authorizeBrand } from '../../../../lib/auth/access.server';
-import { deleteBrand, summary, updateBrand } from '../../../../lib/brands/brands.server';
-import { updateBrandBody } from '../../../../lib/brands/schemas';
-import { endpoint, idParam, json, methodNotAllowed, readJson } from '../../../../lib/http/api';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { deleteBrand, summary, updateBrand } from '@/lib/brands/brands.server';
+import { updateBrandBody } from '@/lib/brands/schemas';
+import { endpoint, idParam, json, methodNotAllowed, readJson } from '@/lib/http/api';
 
 /** One brand, with the caller's role on it. */
 export const GET = endpoint(async ({ locals, params }) => {

@@ -1,7 +1,7 @@
-import { authorizeBrand } from '../../../../lib/auth/access.server';
-import { paletteReport } from '../../../../lib/color';
-import { endpoint, idParam, json, methodNotAllowed } from '../../../../lib/http/api';
-import { BrandColor } from '../../../../../db/models';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { paletteReport } from '@/lib/color';
+import { endpoint, idParam, json, methodNotAllowed } from '@/lib/http/api';
+import { BrandColor } from '@db/models';
 
 /** Contrast of every ordered pair of palette colours, near-duplicates, and colour-vision previews. */
 export const GET = endpoint(async ({ locals, params }) => {

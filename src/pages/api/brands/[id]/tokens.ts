@@ -1,8 +1,8 @@
 import { z } from 'zod';
-import { authorizeBrand } from '../../../../lib/auth/access.server';
-import { endpoint, idParam, methodNotAllowed, parseWith } from '../../../../lib/http/api';
-import { loadIdentity, tokensInput } from '../../../../lib/identity/identity.server';
-import { tokenFile, TOKEN_FORMATS } from '../../../../lib/tokens';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, idParam, methodNotAllowed, parseWith } from '@/lib/http/api';
+import { loadIdentity, tokensInput } from '@/lib/identity/identity.server';
+import { tokenFile, TOKEN_FORMATS } from '@/lib/tokens';
 
 const query = z.strictObject({ format: z.enum(TOKEN_FORMATS as [string, ...string[]], { error: `Choose a format: ${TOKEN_FORMATS.join(', ')}.` }).default('dtcg') });
 

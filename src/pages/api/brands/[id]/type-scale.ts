@@ -1,7 +1,7 @@
-import { authorizeBrand } from '../../../../lib/auth/access.server';
-import { endpoint, idParam, json, methodNotAllowed, readJson } from '../../../../lib/http/api';
-import { loadIdentity, setTypeScale } from '../../../../lib/identity/identity.server';
-import { typeScaleBody } from '../../../../lib/identity/schemas';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, idParam, json, methodNotAllowed, readJson } from '@/lib/http/api';
+import { loadIdentity, setTypeScale } from '@/lib/identity/identity.server';
+import { typeScaleBody } from '@/lib/identity/schemas';
 
 /** Set the type scale: base size, ratio, steps, line heights and the column the measure is computed for. */
 export const PUT = endpoint(async ({ locals, params, request }) => {

@@ -1,7 +1,7 @@
-import { openBrief, saveAnswers } from '../../../../lib/briefs/briefs.server';
-import { MAX_ANSWERS_BYTES, saveAnswersBody } from '../../../../lib/briefs/schemas';
-import { endpoint, json, methodNotAllowed, readJson } from '../../../../lib/http/api';
-import { tokenParam } from '../../../../lib/invitations/params';
+import { openBrief, saveAnswers } from '@/lib/briefs/briefs.server';
+import { MAX_ANSWERS_BYTES, saveAnswersBody } from '@/lib/briefs/schemas';
+import { endpoint, json, methodNotAllowed, readJson } from '@/lib/http/api';
+import { tokenParam } from '@/lib/invitations/params';
 
 /** The questionnaire and the answers saved so far; the link is the only key (no account). */
 export const GET = endpoint(async ({ params }) => {

@@ -1,7 +1,7 @@
-import { submitBrief } from '../../../../lib/briefs/briefs.server';
-import { submitBriefBody } from '../../../../lib/briefs/schemas';
-import { endpoint, json, methodNotAllowed, readJson } from '../../../../lib/http/api';
-import { tokenParam } from '../../../../lib/invitations/params';
+import { submitBrief } from '@/lib/briefs/briefs.server';
+import { submitBriefBody } from '@/lib/briefs/schemas';
+import { endpoint, json, methodNotAllowed, readJson } from '@/lib/http/api';
+import { tokenParam } from '@/lib/invitations/params';
 
 /** Send the answers to the designer; every required question must be answered first. */
 export const POST = endpoint(async ({ params, request }) => {

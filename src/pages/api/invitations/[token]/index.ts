@@ -1,6 +1,6 @@
-import { ApiError, endpoint, json, methodNotAllowed } from '../../../../lib/http/api';
-import { lookupInvitation } from '../../../../lib/invitations/invitations.server';
-import { tokenParam } from '../../../../lib/invitations/params';
+import { ApiError, endpoint, json, methodNotAllowed } from '@/lib/http/api';
+import { lookupInvitation } from '@/lib/invitations/invitations.server';
+import { tokenParam } from '@/lib/invitations/params';
 
 /** What the link holder may know: brand, role, invited address, and whether the link still works. No sign-in needed. */
 export const GET = endpoint(async ({ params }) => {

@@ -1,8 +1,8 @@
-import { authorizeAssetRead } from '../../../../../lib/assets/access.server';
-import { assetFor, assetView, deleteAsset, updateAsset } from '../../../../../lib/assets/assets.server';
-import { assetPatchSchema } from '../../../../../lib/assets/schemas';
-import { authorizeBrand } from '../../../../../lib/auth/access.server';
-import { endpoint, idParam, json, methodNotAllowed, readJson } from '../../../../../lib/http/api';
+import { authorizeAssetRead } from '@/lib/assets/access.server';
+import { assetFor, assetView, deleteAsset, updateAsset } from '@/lib/assets/assets.server';
+import { assetPatchSchema } from '@/lib/assets/schemas';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, idParam, json, methodNotAllowed, readJson } from '@/lib/http/api';
 
 /** One asset; drafts and retired assets are 404 for partners and share links. */
 export const GET = endpoint(async ({ locals, params }) => {

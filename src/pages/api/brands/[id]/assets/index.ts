@@ -1,9 +1,9 @@
-import { authorizeAssetRead } from '../../../../../lib/assets/access.server';
-import { listAssets, uploadAssets } from '../../../../../lib/assets/assets.server';
-import { MAX_ASSET_BYTES, MAX_FILES_PER_UPLOAD } from '../../../../../lib/assets/kinds';
-import { assetListQuerySchema, queryObject, uploadFieldsSchema } from '../../../../../lib/assets/schemas';
-import { authorizeBrand } from '../../../../../lib/auth/access.server';
-import { ApiError, endpoint, formFields, idParam, json, methodNotAllowed, parseWith, readForm } from '../../../../../lib/http/api';
+import { authorizeAssetRead } from '@/lib/assets/access.server';
+import { listAssets, uploadAssets } from '@/lib/assets/assets.server';
+import { MAX_ASSET_BYTES, MAX_FILES_PER_UPLOAD } from '@/lib/assets/kinds';
+import { assetListQuerySchema, queryObject, uploadFieldsSchema } from '@/lib/assets/schemas';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { ApiError, endpoint, formFields, idParam, json, methodNotAllowed, parseWith, readForm } from '@/lib/http/api';
 
 /** The brand's shelf as the caller may see it (partners and share links: approved only); filters state, tag, kind. */
 export const GET = endpoint(async ({ locals, params, url }) => {

@@ -1,8 +1,8 @@
-import { authorizeBrand } from '../../../../../lib/auth/access.server';
-import { listBriefs, questionnaireTemplates, sendBrief } from '../../../../../lib/briefs/briefs.server';
-import { sendBriefBody } from '../../../../../lib/briefs/schemas';
-import { endpoint, idParam, json, methodNotAllowed, readJson } from '../../../../../lib/http/api';
-import { allowMessage } from '../../../../../lib/mail/send-limit.server';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { listBriefs, questionnaireTemplates, sendBrief } from '@/lib/briefs/briefs.server';
+import { sendBriefBody } from '@/lib/briefs/schemas';
+import { endpoint, idParam, json, methodNotAllowed, readJson } from '@/lib/http/api';
+import { allowMessage } from '@/lib/mail/send-limit.server';
 
 /** The brand's briefs and the questionnaires one can be made from. */
 export const GET = endpoint(async ({ locals, params }) => {

@@ -1,7 +1,7 @@
-import { authorizeBrand } from '../../../../../lib/auth/access.server';
-import { endpoint, idParam, json, methodNotAllowed, readJson } from '../../../../../lib/http/api';
-import { deleteColor, updateColor } from '../../../../../lib/identity/identity.server';
-import { updateColorBody } from '../../../../../lib/identity/schemas';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, idParam, json, methodNotAllowed, readJson } from '@/lib/http/api';
+import { deleteColor, updateColor } from '@/lib/identity/identity.server';
+import { updateColorBody } from '@/lib/identity/schemas';
 
 /** Rename a colour, change its value, role, print values or spot reference. */
 export const PATCH = endpoint(async ({ locals, params, request }) => {

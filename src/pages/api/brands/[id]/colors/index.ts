@@ -1,7 +1,7 @@
-import { authorizeBrand } from '../../../../../lib/auth/access.server';
-import { endpoint, idParam, json, methodNotAllowed, readJson } from '../../../../../lib/http/api';
-import { createColor } from '../../../../../lib/identity/identity.server';
-import { createColorBody } from '../../../../../lib/identity/schemas';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, idParam, json, methodNotAllowed, readJson } from '@/lib/http/api';
+import { createColor } from '@/lib/identity/identity.server';
+import { createColorBody } from '@/lib/identity/schemas';
 
 /** Add a colour to the palette; every notation is computed from the value typed. */
 export const POST = endpoint(async ({ locals, params, request }) => {

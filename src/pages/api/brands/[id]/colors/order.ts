@@ -1,7 +1,7 @@
-import { authorizeBrand } from '../../../../../lib/auth/access.server';
-import { endpoint, idParam, json, methodNotAllowed, readJson } from '../../../../../lib/http/api';
-import { reorder } from '../../../../../lib/identity/identity.server';
-import { reorderBody } from '../../../../../lib/identity/schemas';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, idParam, json, methodNotAllowed, readJson } from '@/lib/http/api';
+import { reorder } from '@/lib/identity/identity.server';
+import { reorderBody } from '@/lib/identity/schemas';
 
 /** Put the palette in a new order: every colour id of the brand, once each. */
 export const PUT = endpoint(async ({ locals, params, request }) => {

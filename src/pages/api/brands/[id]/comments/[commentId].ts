@@ -1,7 +1,7 @@
-import { authorizeBrand } from '../../../../../lib/auth/access.server';
-import { endpoint, idParam, json, methodNotAllowed, readJson } from '../../../../../lib/http/api';
-import { resolveComment } from '../../../../../lib/reviews/reviews.server';
-import { resolveCommentBody } from '../../../../../lib/reviews/schemas';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, idParam, json, methodNotAllowed, readJson } from '@/lib/http/api';
+import { resolveComment } from '@/lib/reviews/reviews.server';
+import { resolveCommentBody } from '@/lib/reviews/schemas';
 
 /** Resolve a thread, or open it again. */
 export const PATCH = endpoint(async ({ locals, params, request }) => {

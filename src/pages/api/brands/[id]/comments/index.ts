@@ -1,9 +1,9 @@
 import { z } from 'zod';
-import { authorizeBrand } from '../../../../../lib/auth/access.server';
-import { blockIdSchema } from '../../../../../lib/guideline/ids';
-import { endpoint, idParam, json, methodNotAllowed, parseWith, readJson } from '../../../../../lib/http/api';
-import { addComment, listComments } from '../../../../../lib/reviews/reviews.server';
-import { addCommentBody } from '../../../../../lib/reviews/schemas';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { blockIdSchema } from '@/lib/guideline/ids';
+import { endpoint, idParam, json, methodNotAllowed, parseWith, readJson } from '@/lib/http/api';
+import { addComment, listComments } from '@/lib/reviews/reviews.server';
+import { addCommentBody } from '@/lib/reviews/schemas';
 
 const query = z.strictObject({ open: z.enum(['1', '0']).optional(), blockId: blockIdSchema.optional() });
 

@@ -1,8 +1,8 @@
-import { downloadLog, downloadLogRows } from '../../../../../lib/assets/assets.server';
-import { toCsv } from '../../../../../lib/assets/csv';
-import { downloadLogQuerySchema, queryObject } from '../../../../../lib/assets/schemas';
-import { authorizeBrand } from '../../../../../lib/auth/access.server';
-import { endpoint, idParam, json, methodNotAllowed, parseWith } from '../../../../../lib/http/api';
+import { downloadLog, downloadLogRows } from '@/lib/assets/assets.server';
+import { toCsv } from '@/lib/assets/csv';
+import { downloadLogQuerySchema, queryObject } from '@/lib/assets/schemas';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, idParam, json, methodNotAllowed, parseWith } from '@/lib/http/api';
 
 /** Who downloaded what and when (owners); filters kind, assetId, userId, via, from, to; ?format=csv for a spreadsheet. */
 export const GET = endpoint(async ({ locals, params, url }) => {

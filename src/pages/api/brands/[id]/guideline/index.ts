@@ -1,8 +1,8 @@
 import { z } from 'zod';
-import { authorizeBrand } from '../../../../../lib/auth/access.server';
-import { GUIDELINE_LIMITS } from '../../../../../lib/guideline/document';
-import { readDraft, saveDraft } from '../../../../../lib/guideline/draft.server';
-import { ApiError, endpoint, idParam, json, methodNotAllowed, readJson } from '../../../../../lib/http/api';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { GUIDELINE_LIMITS } from '@/lib/guideline/document';
+import { readDraft, saveDraft } from '@/lib/guideline/draft.server';
+import { ApiError, endpoint, idParam, json, methodNotAllowed, readJson } from '@/lib/http/api';
 
 const saveBody = z.strictObject({ baseRevision: z.number().int().min(0), doc: z.unknown() });
 

@@ -1,8 +1,8 @@
 import { z } from 'zod';
-import { authorizeBrand } from '../../../../../lib/auth/access.server';
-import { saveDraft, TEMPLATES, templateDoc } from '../../../../../lib/guideline/draft.server';
-import { endpoint, idParam, json, methodNotAllowed, readJson } from '../../../../../lib/http/api';
-import { loadIdentity } from '../../../../../lib/identity/identity.server';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { saveDraft, TEMPLATES, templateDoc } from '@/lib/guideline/draft.server';
+import { endpoint, idParam, json, methodNotAllowed, readJson } from '@/lib/http/api';
+import { loadIdentity } from '@/lib/identity/identity.server';
 
 const body = z.strictObject({
   template: z.enum(TEMPLATES, { error: `Choose a template: ${TEMPLATES.join(', ')}.` }),

@@ -1,7 +1,7 @@
-import { authorizeBrand } from '../../../../../lib/auth/access.server';
-import { endpoint, formFields, formFile, idParam, json, methodNotAllowed, parseWith, readForm } from '../../../../../lib/http/api';
-import { MAX_LOGO_BYTES, uploadLogo } from '../../../../../lib/identity/identity.server';
-import { logoFields } from '../../../../../lib/identity/schemas';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, formFields, formFile, idParam, json, methodNotAllowed, parseWith, readForm } from '@/lib/http/api';
+import { MAX_LOGO_BYTES, uploadLogo } from '@/lib/identity/identity.server';
+import { logoFields } from '@/lib/identity/schemas';
 
 /** Upload a logo (SVG or PNG, field "file"; optional "variant" and "name"); bounds and sizes are measured. */
 export const POST = endpoint(async ({ locals, params, request }) => {

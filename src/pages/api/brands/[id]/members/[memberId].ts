@@ -1,7 +1,7 @@
-import { authorizeBrand } from '../../../../../lib/auth/access.server';
-import { removeMember, updateMember } from '../../../../../lib/brands/brands.server';
-import { updateMemberBody } from '../../../../../lib/brands/schemas';
-import { endpoint, idParam, json, methodNotAllowed, readJson } from '../../../../../lib/http/api';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { removeMember, updateMember } from '@/lib/brands/brands.server';
+import { updateMemberBody } from '@/lib/brands/schemas';
+import { endpoint, idParam, json, methodNotAllowed, readJson } from '@/lib/http/api';
 
 /** Change a member's role; the last owner cannot be demoted. */
 export const PATCH = endpoint(async ({ locals, params, request }) => {

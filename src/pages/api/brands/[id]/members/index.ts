@@ -1,9 +1,9 @@
-import { authorizeBrand } from '../../../../../lib/auth/access.server';
-import { addMember, listMembers } from '../../../../../lib/brands/brands.server';
-import { addMemberBody } from '../../../../../lib/brands/schemas';
-import { endpoint, idParam, json, methodNotAllowed, readJson } from '../../../../../lib/http/api';
-import { mailInvitation } from '../../../../../lib/invitations/invitations.server';
-import { allowMessage } from '../../../../../lib/mail/send-limit.server';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { addMember, listMembers } from '@/lib/brands/brands.server';
+import { addMemberBody } from '@/lib/brands/schemas';
+import { endpoint, idParam, json, methodNotAllowed, readJson } from '@/lib/http/api';
+import { mailInvitation } from '@/lib/invitations/invitations.server';
+import { allowMessage } from '@/lib/mail/send-limit.server';
 
 /** The brand's members and pending invitations. */
 export const GET = endpoint(async ({ locals, params }) => {

@@ -1,8 +1,8 @@
-import { authorizeBrand } from '../../../../../lib/auth/access.server';
-import { endpoint, idParam, json, methodNotAllowed, readJson } from '../../../../../lib/http/api';
-import { directionStatus } from '../../../../../lib/moodboards';
-import { createBoard, listBoards } from '../../../../../lib/moodboards/moodboards.server';
-import { createBoardBody } from '../../../../../lib/moodboards/schemas';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, idParam, json, methodNotAllowed, readJson } from '@/lib/http/api';
+import { directionStatus } from '@/lib/moodboards';
+import { createBoard, listBoards } from '@/lib/moodboards/moodboards.server';
+import { createBoardBody } from '@/lib/moodboards/schemas';
 
 /** The brand's mood boards and whether a direction is approved. */
 export const GET = endpoint(async ({ locals, params }) => {

@@ -1,8 +1,8 @@
-import { authorizeBrand } from '../../../../../lib/auth/access.server';
-import { endpoint, idParam, json, methodNotAllowed, readJson } from '../../../../../lib/http/api';
-import { allowMessage } from '../../../../../lib/mail/send-limit.server';
-import { listReviews, requestReview } from '../../../../../lib/reviews/reviews.server';
-import { requestReviewBody } from '../../../../../lib/reviews/schemas';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, idParam, json, methodNotAllowed, readJson } from '@/lib/http/api';
+import { allowMessage } from '@/lib/mail/send-limit.server';
+import { listReviews, requestReview } from '@/lib/reviews/reviews.server';
+import { requestReviewBody } from '@/lib/reviews/schemas';
 
 /** Review requests, the latest decision and the number of open comment threads. */
 export const GET = endpoint(async ({ locals, params }) => {

@@ -1,6 +1,6 @@
-import { authorizeBrand } from '../../../../../lib/auth/access.server';
-import { endpoint, idParam, methodNotAllowed } from '../../../../../lib/http/api';
-import { revokeShareLink } from '../../../../../lib/publishing/share-links.server';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, idParam, methodNotAllowed } from '@/lib/http/api';
+import { revokeShareLink } from '@/lib/publishing/share-links.server';
 
 /** Revoke a share link: anyone holding it gets a clear "no longer works" page from now on. */
 export const DELETE = endpoint(async ({ locals, params }) => {

@@ -1,8 +1,8 @@
 import { z } from 'zod';
-import { isOneLine, ONE_LINE_MESSAGE } from '../../../../../lib/safe/values';
-import { authorizeBrand } from '../../../../../lib/auth/access.server';
-import { endpoint, idParam, json, methodNotAllowed, readJson } from '../../../../../lib/http/api';
-import { createShareLink, listShareLinks } from '../../../../../lib/publishing/share-links.server';
+import { isOneLine, ONE_LINE_MESSAGE } from '@/lib/safe/values';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, idParam, json, methodNotAllowed, readJson } from '@/lib/http/api';
+import { createShareLink, listShareLinks } from '@/lib/publishing/share-links.server';
 
 const createBody = z.strictObject({
   label: z.string().trim().max(120).refine(isOneLine, ONE_LINE_MESSAGE).optional(),

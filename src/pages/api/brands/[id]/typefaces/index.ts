@@ -1,7 +1,7 @@
-import { authorizeBrand } from '../../../../../lib/auth/access.server';
-import { endpoint, formFields, formFile, idParam, json, methodNotAllowed, parseWith, readForm, readJson } from '../../../../../lib/http/api';
-import { addShippedTypeface, MAX_FONT_BYTES, uploadTypeface } from '../../../../../lib/identity/identity.server';
-import { shippedTypefaceBody, typefaceUploadFields } from '../../../../../lib/identity/schemas';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, formFields, formFile, idParam, json, methodNotAllowed, parseWith, readForm, readJson } from '@/lib/http/api';
+import { addShippedTypeface, MAX_FONT_BYTES, uploadTypeface } from '@/lib/identity/identity.server';
+import { shippedTypefaceBody, typefaceUploadFields } from '@/lib/identity/schemas';
 
 /** Add a typeface: JSON to pick a shipped open font, or multipart to upload a font file (field "file"). */
 export const POST = endpoint(async ({ locals, params, request }) => {

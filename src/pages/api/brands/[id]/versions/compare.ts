@@ -1,7 +1,7 @@
 import { z } from 'zod';
-import { authorizeBrand } from '../../../../../lib/auth/access.server';
-import { endpoint, idParam, json, methodNotAllowed, parseWith } from '../../../../../lib/http/api';
-import { versionChanges } from '../../../../../lib/publishing/versions.server';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, idParam, json, methodNotAllowed, parseWith } from '@/lib/http/api';
+import { versionChanges } from '@/lib/publishing/versions.server';
 
 const query = z.strictObject({
   from: z.coerce.number().int().min(1),

@@ -1,10 +1,10 @@
 import { z } from 'zod';
-import { isCleanNote, NOTE_MESSAGE } from '../../../../../lib/safe/values';
-import { authorizeBrand } from '../../../../../lib/auth/access.server';
-import { endpoint, idParam, json, methodNotAllowed, readJson } from '../../../../../lib/http/api';
-import { listVersions, publishVersion } from '../../../../../lib/publishing/versions.server';
-import { preflightBrand } from '../../../../../lib/publishing/preflight.server';
-import { audit } from '../../../../../lib/audit.server';
+import { isCleanNote, NOTE_MESSAGE } from '@/lib/safe/values';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, idParam, json, methodNotAllowed, readJson } from '@/lib/http/api';
+import { listVersions, publishVersion } from '@/lib/publishing/versions.server';
+import { preflightBrand } from '@/lib/publishing/preflight.server';
+import { audit } from '@/lib/audit.server';
 
 const publishBody = z.strictObject({
   note: z.string({ error: 'Say in a line what this version changes.' }).trim().min(1, 'Say in a line what this version changes.').max(2000)

@@ -1,6 +1,6 @@
-import { endpoint, fileResponse, idParam, methodNotAllowed } from '../../../../../lib/http/api';
-import { tokenParam } from '../../../../../lib/invitations/params';
-import { boardImageByToken } from '../../../../../lib/moodboards/moodboards.server';
+import { endpoint, fileResponse, idParam, methodNotAllowed } from '@/lib/http/api';
+import { tokenParam } from '@/lib/invitations/params';
+import { boardImageByToken } from '@/lib/moodboards/moodboards.server';
 
 /** An image piece of the board, for the client's link. */
 export const GET = endpoint(async ({ params }) => {

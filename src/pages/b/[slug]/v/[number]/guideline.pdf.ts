@@ -1,5 +1,5 @@
 import type { APIRoute } from 'astro';
-import { pdfResponse } from '../../../../../lib/publishing/pdf-route.server';
+import { pdfResponse } from '@/lib/publishing/pdf-route.server';
 
 /** One version as a PDF (?size=a4|letter). */
 export const GET: APIRoute = (context) => {

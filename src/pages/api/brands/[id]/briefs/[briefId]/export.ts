@@ -1,8 +1,8 @@
-import { authorizeBrand } from '../../../../../../lib/auth/access.server';
-import { briefOf } from '../../../../../../lib/briefs/briefs.server';
-import { answersCsv, answersMarkdown } from '../../../../../../lib/briefs/questionnaire';
-import { ApiError, endpoint, idParam, methodNotAllowed } from '../../../../../../lib/http/api';
-import { slugify } from '../../../../../../lib/brands/slug';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { briefOf } from '@/lib/briefs/briefs.server';
+import { answersCsv, answersMarkdown } from '@/lib/briefs/questionnaire';
+import { ApiError, endpoint, idParam, methodNotAllowed } from '@/lib/http/api';
+import { slugify } from '@/lib/brands/slug';
 
 /** The answers as a download: ?format=md (Markdown) or ?format=csv (RFC 4180). */
 export const GET = endpoint(async ({ locals, params, url }) => {

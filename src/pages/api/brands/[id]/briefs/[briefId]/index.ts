@@ -1,6 +1,6 @@
-import { authorizeBrand } from '../../../../../../lib/auth/access.server';
-import { briefDetail, withdrawBrief } from '../../../../../../lib/briefs/briefs.server';
-import { endpoint, idParam, json, methodNotAllowed } from '../../../../../../lib/http/api';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { briefDetail, withdrawBrief } from '@/lib/briefs/briefs.server';
+import { endpoint, idParam, json, methodNotAllowed } from '@/lib/http/api';
 
 /** One brief with its questions and the client's answers so far. */
 export const GET = endpoint(async ({ locals, params }) => {

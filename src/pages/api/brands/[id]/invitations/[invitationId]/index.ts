@@ -1,6 +1,6 @@
-import { authorizeBrand } from '../../../../../../lib/auth/access.server';
-import { endpoint, idParam, methodNotAllowed } from '../../../../../../lib/http/api';
-import { revokeInvitation } from '../../../../../../lib/invitations/invitations.server';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, idParam, methodNotAllowed } from '@/lib/http/api';
+import { revokeInvitation } from '@/lib/invitations/invitations.server';
 
 /** Withdraw an invitation; its link then says so. */
 export const DELETE = endpoint(async ({ locals, params }) => {

@@ -1,7 +1,7 @@
-import { authorizeBrand } from '../../../../../../lib/auth/access.server';
-import { endpoint, idParam, json, methodNotAllowed } from '../../../../../../lib/http/api';
-import { resendInvitation } from '../../../../../../lib/invitations/invitations.server';
-import { allowMessage } from '../../../../../../lib/mail/send-limit.server';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, idParam, json, methodNotAllowed } from '@/lib/http/api';
+import { resendInvitation } from '@/lib/invitations/invitations.server';
+import { allowMessage } from '@/lib/mail/send-limit.server';
 
 /** A fresh link by e-mail; the earlier link stops working and the 14 days start again. */
 export const POST = endpoint(async ({ locals, params }) => {

@@ -1,7 +1,7 @@
 import { z } from 'zod';
-import { authorizeBrand } from '../../../../../../lib/auth/access.server';
-import { endpoint, fileResponse, idParam, methodNotAllowed, parseWith } from '../../../../../../lib/http/api';
-import { logoFile } from '../../../../../../lib/identity/identity.server';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, fileResponse, idParam, methodNotAllowed, parseWith } from '@/lib/http/api';
+import { logoFile } from '@/lib/identity/identity.server';
 
 const query = z.strictObject({
   variant: z.enum(['original', 'black', 'white', 'reversed', 'one-colour', 'on-dark']).default('original'),

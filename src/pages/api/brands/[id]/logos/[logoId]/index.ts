@@ -1,7 +1,7 @@
-import { authorizeBrand } from '../../../../../../lib/auth/access.server';
-import { endpoint, idParam, json, methodNotAllowed, readJson } from '../../../../../../lib/http/api';
-import { deleteLogo, updateLogo } from '../../../../../../lib/identity/identity.server';
-import { updateLogoBody } from '../../../../../../lib/identity/schemas';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, idParam, json, methodNotAllowed, readJson } from '@/lib/http/api';
+import { deleteLogo, updateLogo } from '@/lib/identity/identity.server';
+import { updateLogoBody } from '@/lib/identity/schemas';
 
 /** Change a logo's name, variant, clear-space unit and multiple, thinnest stroke or minimum sizes. */
 export const PATCH = endpoint(async ({ locals, params, request }) => {

@@ -1,6 +1,6 @@
-import { authorizeBrand } from '../../../../../../lib/auth/access.server';
-import { endpoint, idParam, json, methodNotAllowed } from '../../../../../../lib/http/api';
-import { adoptSwatches } from '../../../../../../lib/moodboards/moodboards.server';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, idParam, json, methodNotAllowed } from '@/lib/http/api';
+import { adoptSwatches } from '@/lib/moodboards/moodboards.server';
 
 /** Add an approved board's kept swatches to the identity's palette; colours already there are skipped. */
 export const POST = endpoint(async ({ locals, params }) => {

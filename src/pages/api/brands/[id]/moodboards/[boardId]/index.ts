@@ -1,7 +1,7 @@
-import { authorizeBrand } from '../../../../../../lib/auth/access.server';
-import { endpoint, idParam, json, methodNotAllowed, readJson } from '../../../../../../lib/http/api';
-import { boardView, deleteBoard, updateBoard } from '../../../../../../lib/moodboards/moodboards.server';
-import { updateBoardBody } from '../../../../../../lib/moodboards/schemas';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, idParam, json, methodNotAllowed, readJson } from '@/lib/http/api';
+import { boardView, deleteBoard, updateBoard } from '@/lib/moodboards/moodboards.server';
+import { updateBoardBody } from '@/lib/moodboards/schemas';
 
 const board = (id: string | undefined) => idParam(id, 'That mood board');
 

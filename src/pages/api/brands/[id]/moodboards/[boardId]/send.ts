@@ -1,8 +1,8 @@
-import { authorizeBrand } from '../../../../../../lib/auth/access.server';
-import { endpoint, idParam, json, methodNotAllowed, readJson } from '../../../../../../lib/http/api';
-import { allowMessage } from '../../../../../../lib/mail/send-limit.server';
-import { sendBoard } from '../../../../../../lib/moodboards/moodboards.server';
-import { sendBoardBody } from '../../../../../../lib/moodboards/schemas';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, idParam, json, methodNotAllowed, readJson } from '@/lib/http/api';
+import { allowMessage } from '@/lib/mail/send-limit.server';
+import { sendBoard } from '@/lib/moodboards/moodboards.server';
+import { sendBoardBody } from '@/lib/moodboards/schemas';
 
 /** E-mail the board to a client contact for a decision on direction. */
 export const POST = endpoint(async ({ locals, params, request }) => {

@@ -1,7 +1,7 @@
-import { authorizeBrand } from '../../../../../../lib/auth/access.server';
-import { endpoint, idParam, json, methodNotAllowed, readJson } from '../../../../../../lib/http/api';
-import { decideReview } from '../../../../../../lib/reviews/reviews.server';
-import { decideReviewBody } from '../../../../../../lib/reviews/schemas';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, idParam, json, methodNotAllowed, readJson } from '@/lib/http/api';
+import { decideReview } from '@/lib/reviews/reviews.server';
+import { decideReviewBody } from '@/lib/reviews/schemas';
 
 /** Approve the reviewed draft or ask for changes (with a note). */
 export const POST = endpoint(async ({ locals, params, request }) => {

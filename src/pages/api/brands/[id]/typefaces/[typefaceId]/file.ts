@@ -1,6 +1,6 @@
-import { authorizeBrand } from '../../../../../../lib/auth/access.server';
-import { endpoint, fileResponse, idParam, methodNotAllowed } from '../../../../../../lib/http/api';
-import { typefaceFile } from '../../../../../../lib/identity/identity.server';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, fileResponse, idParam, methodNotAllowed } from '@/lib/http/api';
+import { typefaceFile } from '@/lib/identity/identity.server';
 
 /** The font file, for previews in the identity screens (members who read drafts). */
 export const GET = endpoint(async ({ locals, params }) => {

@@ -1,7 +1,7 @@
-import { authorizeBrand } from '../../../../../../lib/auth/access.server';
-import { endpoint, idParam, json, methodNotAllowed, readJson } from '../../../../../../lib/http/api';
-import { deleteTypeface, updateTypeface } from '../../../../../../lib/identity/identity.server';
-import { updateTypefaceBody } from '../../../../../../lib/identity/schemas';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, idParam, json, methodNotAllowed, readJson } from '@/lib/http/api';
+import { deleteTypeface, updateTypeface } from '@/lib/identity/identity.server';
+import { updateTypefaceBody } from '@/lib/identity/schemas';
 
 /** Change a typeface's role, fallback stack or weights, or confirm its licence for web embedding. */
 export const PATCH = endpoint(async ({ locals, params, request }) => {

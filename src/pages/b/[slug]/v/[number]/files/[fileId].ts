@@ -1,10 +1,10 @@
 import type { APIRoute } from 'astro';
-import { PRINT_WEIGHTS } from '../../../../../../lib/guideline/identity';
-import { oneColourLogo, type OneColourVariant } from '../../../../../../lib/logo/knockout.server';
-import { siteAccess } from '../../../../../../lib/publishing/site-access.server';
-import { versionVariantFileId } from '../../../../../../lib/publishing/versions.server';
-import { staticInstance } from '../../../../../../lib/type/font-instance.server';
-import { storage } from '../../../../../../lib/storage/index.server';
+import { PRINT_WEIGHTS } from '@/lib/guideline/identity';
+import { oneColourLogo, type OneColourVariant } from '@/lib/logo/knockout.server';
+import { siteAccess } from '@/lib/publishing/site-access.server';
+import { versionVariantFileId } from '@/lib/publishing/versions.server';
+import { staticInstance } from '@/lib/type/font-instance.server';
+import { storage } from '@/lib/storage/index.server';
 
 const VARIANTS = new Set(['black', 'white', 'reversed', 'on-dark']);
 /** Computed versions of a version's files, which never change: the last hundred kept in memory. */

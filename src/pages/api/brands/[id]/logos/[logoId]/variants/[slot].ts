@@ -1,8 +1,8 @@
 import { z } from 'zod';
-import { authorizeBrand } from '../../../../../../../lib/auth/access.server';
-import { endpoint, formFile, idParam, json, methodNotAllowed, parseWith, readForm } from '../../../../../../../lib/http/api';
-import { deleteLogoVariant, MAX_LOGO_BYTES, uploadLogoVariant } from '../../../../../../../lib/identity/identity.server';
-import { LOGO_VARIANT_SLOTS } from '../../../../../../../lib/identity/types';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, formFile, idParam, json, methodNotAllowed, parseWith, readForm } from '@/lib/http/api';
+import { deleteLogoVariant, MAX_LOGO_BYTES, uploadLogoVariant } from '@/lib/identity/identity.server';
+import { LOGO_VARIANT_SLOTS } from '@/lib/identity/types';
 
 const slotParam = z.enum(LOGO_VARIANT_SLOTS, { error: `The version must be one of: ${LOGO_VARIANT_SLOTS.join(', ')}.` });
 

@@ -1,7 +1,7 @@
-import { authorizeBrand } from '../../../../../../../lib/auth/access.server';
-import { endpoint, formFields, formFile, idParam, json, methodNotAllowed, parseWith, readForm, readJson } from '../../../../../../../lib/http/api';
-import { addImage, addItem, MAX_BOARD_IMAGE_BYTES } from '../../../../../../../lib/moodboards/moodboards.server';
-import { imageCaption, newItemSchema } from '../../../../../../../lib/moodboards/schemas';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, formFields, formFile, idParam, json, methodNotAllowed, parseWith, readForm, readJson } from '@/lib/http/api';
+import { addImage, addItem, MAX_BOARD_IMAGE_BYTES } from '@/lib/moodboards/moodboards.server';
+import { imageCaption, newItemSchema } from '@/lib/moodboards/schemas';
 
 /** Add a piece: JSON for a swatch, type sample or note; multipart/form-data ("file", "caption") for an image. */
 export const POST = endpoint(async ({ locals, params, request }) => {

@@ -1,6 +1,6 @@
-import { authorizeBrand } from '../../../../../../../../lib/auth/access.server';
-import { endpoint, fileResponse, idParam, methodNotAllowed } from '../../../../../../../../lib/http/api';
-import { boardImage } from '../../../../../../../../lib/moodboards/moodboards.server';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, fileResponse, idParam, methodNotAllowed } from '@/lib/http/api';
+import { boardImage } from '@/lib/moodboards/moodboards.server';
 
 /** An image piece's bytes, for the designer's view of the board. */
 export const GET = endpoint(async ({ locals, params }) => {

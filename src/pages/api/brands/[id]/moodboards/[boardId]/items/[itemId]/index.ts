@@ -1,6 +1,6 @@
-import { authorizeBrand } from '../../../../../../../../lib/auth/access.server';
-import { endpoint, idParam, methodNotAllowed } from '../../../../../../../../lib/http/api';
-import { deleteItem } from '../../../../../../../../lib/moodboards/moodboards.server';
+import { authorizeBrand } from '@/lib/auth/access.server';
+import { endpoint, idParam, methodNotAllowed } from '@/lib/http/api';
+import { deleteItem } from '@/lib/moodboards/moodboards.server';
 
 export const DELETE = endpoint(async ({ locals, params }) => {
   const { caller, brand } = await authorizeBrand(locals, idParam(params.id), 'draft.edit');
