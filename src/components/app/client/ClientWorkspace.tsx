@@ -2,10 +2,9 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState, type ReactNode } from 'react';
 import { api } from '@/lib/client/api';
-import type { BriefView } from '@/lib/briefs/briefs.server';
-import type { BoardView } from '@/lib/moodboards/moodboards.server';
-import type { DirectionStatus } from '@/lib/moodboards/direction.server';
-import type { CommentView, ReviewSummary, ReviewView } from '@/lib/reviews/reviews.server';
+import type { BriefView } from '@/lib/briefs/views';
+import type { BoardView, DirectionStatus } from '@/lib/moodboards/views';
+import type { CommentView, ReviewSummary, ReviewView } from '@/lib/reviews/views';
 import { QueryRoot } from '@/components/app/QueryRoot';
 import { BoardPiece } from './BoardPiece';
 import { formatDate } from '@/lib/format';
