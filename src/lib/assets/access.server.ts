@@ -1,5 +1,5 @@
 // Who may read the shelf of a brand: a member whose role allows downloads, or a share link for that brand that allows them.
-import { Brand } from '@db/models';
+import { Asset, Brand } from '@db/models';
 import { authorizeBrand, type Caller } from '@/lib/auth/access.server';
 import { can } from '@/lib/auth/policy';
 import type { BrandRole } from '@/lib/auth/roles';
@@ -33,4 +33,10 @@ export async function authorizeAssetRead(locals: App.Locals, brandId: string): P
   const brand = await Brand.findByPk(brandId);
   if (!brand) throw new ApiError(404, 'not_found', 'That brand was not found.');
   return { brand, caller: null, role: null, shareLinkId: grant.linkId, approvedOnly: true };
+}
+
+/** The brand an asset belongs to, or null when no asset has that id (the first step before deciding who may read it). */
+export async function brandOfAsset(assetId: string): Promise<string | null> {
+  const found = await Asset.findByPk(assetId, { attributes: ['id', 'brandId'] });
+  return found?.brandId ?? null;
 }

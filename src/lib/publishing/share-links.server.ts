@@ -101,6 +101,9 @@ export async function revokeShareLink(caller: Caller, brand: Brand, linkId: stri
 /** The link a token opens, or null when no link has that token. */
 export const linkForToken = (token: string) => (/^[A-Za-z0-9_-]{20,100}$/.test(token) ? ShareLink.findOne({ where: { tokenHash: hashToken(token) } }) : null);
 
+/** The brand a link opens (links are deleted with their brand, so it is always there). */
+export const brandOfLink = async (link: ShareLink): Promise<Brand> => (await Brand.findByPk(link.brandId))!;
+
 /** The cookie value for an opened link: the token plus a signature proving any password was given. */
 export const shareCookieValue = (token: string) => `${token}.${createHmac('sha256', AUTH_SECRET).update(`share:${token}`).digest('base64url')}`;
 

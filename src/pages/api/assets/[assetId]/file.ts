@@ -1,5 +1,4 @@
-import { Asset } from '@db/models/assets';
-import { authorizeAssetRead } from '@/lib/assets/access.server';
+import { authorizeAssetRead, brandOfAsset } from '@/lib/assets/access.server';
 import { assetFor, downloadFile, renditionRequester } from '@/lib/assets/assets.server';
 import { renditionQuerySchema } from '@/lib/assets/kinds';
 import { queryObject } from '@/lib/assets/schemas';
@@ -17,10 +16,10 @@ export const GET = endpoint(async (context) => {
   if (!locals.user && locals.shareGrant && !locals.shareGrant.allowDownloads) await authorizeAssetRead(locals, locals.shareGrant.brandId);
   const assetId = idParam(params.assetId, 'That asset');
   const query = parseWith(renditionQuerySchema, queryObject(url), 'query');
-  const found = await Asset.findByPk(assetId, { attributes: ['id', 'brandId'] });
-  if (!found) throw notFound('That asset');
+  const brandId = await brandOfAsset(assetId);
+  if (!brandId) throw notFound('That asset');
   // An asset of a brand the caller cannot read is answered exactly like a random id: no existence leak.
-  const reader = await authorizeAssetRead(locals, found.brandId).catch((err) => {
+  const reader = await authorizeAssetRead(locals, brandId).catch((err) => {
     throw err instanceof ApiError && (err.status === 401 || err.status === 404) ? notFound('That asset') : err;
   });
   const asset = await assetFor(reader.brand.id, assetId, reader.approvedOnly);
