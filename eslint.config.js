@@ -2,6 +2,7 @@
 import js from '@eslint/js';
 import astro from 'eslint-plugin-astro';
 import tseslint from 'typescript-eslint';
+import layers from './eslint.layers.js';
 
 export default tseslint.config(
   { ignores: ['dist/', 'dist-test/', 'dist-bench/', '.astro/', '.data/', 'node_modules/', 'coverage/'] },
@@ -14,6 +15,7 @@ export default tseslint.config(
       '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
     },
   },
+  ...layers,
   {
     files: ['tests/**/*.ts'],
     rules: { '@typescript-eslint/no-explicit-any': 'off' },
