@@ -2,8 +2,11 @@
 import { readFileSync } from 'node:fs';
 import { renderToStaticMarkup } from 'react-dom/server';
 import { createElement } from 'react';
+import Color from 'colorjs.io';
+import { wcagContrast } from 'culori';
+import { parse as parseHtml } from 'parse5';
 import { describe, expect, test } from 'vitest';
-import { colorValues, contrastRatio } from '@/lib/color';
+import { colorValues } from '@/lib/color';
 import { PRINT_CAUTION, CONTRAST_CAUTION } from '@/lib/cautions';
 import { BLOCKS, blockDefinition, blocksByGroup } from '@/lib/guideline/blocks';
 import { GUIDELINE_LIMITS, guidelineDocSchema, validateGuideline, type GuidelineDoc } from '@/lib/guideline/document';
@@ -181,9 +184,10 @@ describe('templates', () => {
     const pairs = suggestedPairs(identity);
     expect(pairs[0]).toEqual({ foreground: 'c-espresso', background: 'c-filter-paper' });
     expect(pairs.every((p) => p.foreground !== p.background)).toBe(true);
-    // Beyond text on ground, every suggestion reaches WCAG 2.2 AA for body text (SC 1.4.3: 4.5:1).
-    const value = (id: string) => identity.colors.find((c) => c.id === id)!.value;
-    expect(pairs.slice(1).every((p) => contrastRatio(value(p.foreground), value(p.background)) >= 4.5)).toBe(true);
+    // Beyond text on ground, every suggestion reaches WCAG 2.2 AA for body text (SC 1.4.3: 4.5:1), measured with
+    // culori's wcagContrast (a general-purpose reference library), not our own contrastRatio.
+    const hex = (id: string) => identity.colors.find((c) => c.id === id)!.hex;
+    for (const p of pairs.slice(1)) expect(wcagContrast(hex(p.foreground), hex(p.background)), `${p.foreground} on ${p.background}`).toBeGreaterThanOrEqual(4.5);
     expect(pairs.length).toBeGreaterThan(1);
     expect(starterAttrs({ colorIds: ['$all'] }, identity).colorIds).toHaveLength(identity.colors.length);
   });
@@ -242,22 +246,40 @@ describe('published renderer', () => {
   const book = instantiateTemplate(brandBook, identity);
   const html = render(book);
 
-  test('every section title appears in its own <section> with an anchor link', () => {
-    for (const entry of outline(book)) {
-      expect(html).toContain(`<section id="${entry.anchor}"`);
-      expect(html).toContain(`href="#${entry.anchor}"`);
-      expect(html).toContain(`>${entry.title.replace(/&/g, '&amp;')}<`);
+  test('every section title of the template appears in its own <section> with a link to it (read back with parse5)', () => {
+    type El = { nodeName: string; value?: string; attrs?: { name: string; value: string }[]; childNodes?: El[] };
+    const all = (n: El): El[] => [n, ...(n.childNodes ?? []).flatMap(all)];
+    // A heading's own words, leaving out the "#" link it carries.
+    const text = (n: El): string => (n.nodeName === '#text' ? n.value! : n.nodeName === 'a' ? '' : (n.childNodes ?? []).map(text).join(''));
+    const attr = (n: El, name: string) => n.attrs?.find((a) => a.name === name)?.value;
+    const nodes = all(parseHtml(html) as unknown as El);
+    const links = new Set(nodes.filter((n) => n.nodeName === 'a').map((n) => attr(n, 'href')));
+    // The titles as typed in templates/guidelines/brand-book.json, not as our outline() reads them.
+    const titles = (brandBook.doc.content as { type: string; attrs: { title: string } }[]).filter((n) => n.type === 'sectionHeading').map((n) => n.attrs.title);
+    expect(titles.length).toBeGreaterThan(10);
+    for (const title of titles) {
+      const section = nodes.find((n) => n.nodeName === 'section' && all(n).some((h) => /^h[1-3]$/.test(h.nodeName) && text(h).trim() === title));
+      expect(section, title).toBeDefined();
+      expect(attr(section!, 'id'), title).toMatch(/^[a-z0-9-]+$/);
+      expect(links.has(`#${attr(section!, 'id')}`), title).toBe(true);
     }
   });
 
-  test('the palette shows HEX, RGB and CMYK exactly as colorValues computes them', () => {
+  test('the palette shows HEX, RGB, OKLCH and CMYK as colorjs.io and the plain formula give them', () => {
+    const round = (v: number, places: number) => Math.round(v * 10 ** places) / 10 ** places;
     for (const color of identity.colors) {
-      const v = colorValues(color.value);
-      expect(html).toContain(`>${v.hex}<`);
-      expect(html).toContain(`>rgb(${v.rgb.join(' ')})<`);
-      const [c, m, y, k] = color.cmykOverride ?? v.cmyk;
-      expect(html).toContain(`>C ${c} M ${m} Y ${y} K ${k}<`);
-      expect(html).toContain(`>${v.oklch.css}<`);
+      // colorjs.io (a general-purpose reference library) reads the value as typed, in any CSS notation.
+      const hex = new Color(color.value).to('srgb').toString({ format: 'hex', collapse: false });
+      const srgb = new Color(hex).coords.map(Number);
+      const [l, c, h] = new Color(hex).to('oklch').coords.map((x) => Number(x ?? 0));
+      expect(html).toContain(`>${hex}<`);
+      expect(html).toContain(`>rgb(${srgb.map((v) => Math.round(v * 255)).join(' ')})<`);
+      expect(html).toContain(`>oklch(${round(l * 100, 2)}% ${round(c, 4)} ${round(c, 4) === 0 ? 0 : round(h, 2)})<`);
+      // Plain RGB→CMYK (common practice): K = 1 − max(R, G, B), C = (1 − R − K) / (1 − K), … in percent to 0.1.
+      const k = 1 - Math.max(...srgb);
+      const plain = k >= 1 ? [0, 0, 0, 100] : [...srgb.map((v) => round(((1 - v - k) / (1 - k)) * 100, 1)), round(k * 100, 1)];
+      const [cc, mm, yy, kk] = color.cmykOverride ?? plain;
+      expect(html).toContain(`>C ${cc} M ${mm} Y ${yy} K ${kk}<`);
     }
     expect(html).toContain(PRINT_CAUTION.slice(0, 40));
   });
@@ -271,8 +293,8 @@ describe('published renderer', () => {
     const d = doc({ type: 'contrastPairs', attrs: { id: 'cp', pairs: [{ foreground: 'c-steam-grey', background: 'c-filter-paper' }, { foreground: 'c-espresso', background: 'c-filter-paper' }] } });
     const out = render(d);
     // #767676 on #ffffff is 4.54:1: passes AA (4.5:1) and AA large, fails AAA (7:1). WCAG 2.2 SC 1.4.3 / 1.4.6 thresholds;
-    // the 4.54:1 figure is the common practice worked example for this grey (from memory), recomputed here by contrastRatio.
-    expect(contrastRatio('#767676', '#ffffff')).toBeCloseTo(4.54, 2);
+    // the 4.54:1 figure is the common practice worked example for this grey (from memory), confirmed with culori.
+    expect(wcagContrast('#767676', '#ffffff')).toBeCloseTo(4.54, 2);
     const grey = out.slice(out.indexOf('data-pair="c-steam-grey/c-filter-paper"'), out.indexOf('data-pair="c-espresso/c-filter-paper"'));
     expect(grey).toContain('4.54:1');
     expect(grey).toContain('data-level="aa" data-pass="yes"');

@@ -47,6 +47,12 @@ describe.each(cases)('print files of $label', ({ name }) => {
     box = artworkBox(svg, drawn);
   });
 
+  test('the artwork box is the drawn disc: radius 45 in a 100 px square = 90 px = 67.5 pt (CSS: 96 px = 72 pt)', () => {
+    // The fixture's own geometry; the bounds are measured on a raster, so within a fifth of a point.
+    expect(Math.abs(box.widthPt - 67.5)).toBeLessThan(0.2);
+    expect(Math.abs(box.heightPt - 67.5)).toBeLessThan(0.2);
+  });
+
   test('the RGB PDF is one page the size of the artwork, drawn with paths in RGB, no images', async () => {
     const pdf = await readBack(await logoPrintFile(svg, drawn, 'pdf', 'rgb'));
     expect(pdf.pages).toBe(1);

@@ -46,8 +46,11 @@ describe('what the check finds', () => {
     expect(found).not.toContain('image_placeholder');
   });
   test('fonts whose web licence is not confirmed are listed once each', () => {
-    const found = preflight({ doc: doc(), identity, shelf: noShelf, instructions }).filter((f) => f.code === 'font_unlicensed');
-    expect(found).toHaveLength(identity.typefaces.filter((f) => !f.licence.confirmed).length);
+    // The fixture's two faces (DM Sans, Source Serif 4) with their licences not yet confirmed.
+    const unconfirmed: Identity = { ...identity, typefaces: identity.typefaces.map((f) => ({ ...f, licence: { ...f.licence, confirmed: false } })) };
+    const found = preflight({ doc: doc(), identity: unconfirmed, shelf: noShelf, instructions }).filter((f) => f.code === 'font_unlicensed');
+    expect(found.map((f) => f.where)).toEqual(['Typeface DM Sans', 'Typeface Source Serif 4']);
+    expect(codes(doc(), licensed)).not.toContain('font_unlicensed');
   });
   test('contrast below the claimed level: #777777 on white is 4.48:1 — under AA; #595959 on white is 7.00:1 — AAA (WebAIM contrast checker worked values, from memory)', () => {
     const grey = { ...identity.colors[0], id: 'grey', name: 'Grey', value: '#777777' };

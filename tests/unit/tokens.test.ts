@@ -1,10 +1,10 @@
 import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import Color from 'colorjs.io';
 import StyleDictionary from 'style-dictionary';
 import type { DesignTokens } from 'style-dictionary/types';
 import { afterAll, describe, expect, test } from 'vitest';
-import { modularScale, SCALE_RATIOS } from '@/lib/type';
 import {
   toCss,
   toDtcg,
@@ -17,8 +17,8 @@ import {
   type IdentityForTokens,
 } from '@/lib/tokens';
 
-// Invented demo identity (not a real brand).
-const names = ['small', 'body', 'h4', 'h3', 'h2', 'h1'];
+// Invented demo identity (not a real brand). The scale is a major third (5:4) from 16 px, worked by hand:
+// 16 × 1.25ⁿ for n = −1…4.
 const identity: IdentityForTokens = {
   brand: { name: 'Harbour & Finch', slug: 'harbour-finch' },
   colors: [
@@ -34,12 +34,15 @@ const identity: IdentityForTokens = {
   typeScale: {
     basePx: 16,
     ratioName: 'major-third',
-    ratio: SCALE_RATIOS['major-third'].ratio,
-    steps: modularScale({ base: 16, ratio: 'major-third', stepsUp: 4, stepsDown: 1 }).map((s, i) => ({
-      name: names[i],
-      px: s.px,
-      lineHeight: s.step > 0 ? 1.2 : 1.5,
-    })),
+    ratio: 1.25,
+    steps: [
+      { name: 'small', px: 12.8, lineHeight: 1.5 },
+      { name: 'body', px: 16, lineHeight: 1.5 },
+      { name: 'h4', px: 20, lineHeight: 1.2 },
+      { name: 'h3', px: 25, lineHeight: 1.2 },
+      { name: 'h2', px: 31.25, lineHeight: 1.2 },
+      { name: 'h1', px: 39.0625, lineHeight: 1.2 },
+    ],
   },
   spacing: [
     { name: 'sm', px: 8 },
@@ -71,18 +74,18 @@ describe('DTCG 2025.10 export follows the format rules (Design Tokens Format Mod
       for (const part of path) expect(part).toMatch(/^[^${}.][^{}.]*$/);
     }
   });
-  test('colours: colorSpace srgb, three components in 0–1, hex matches the components (Color Module: srgb)', () => {
+  test('colours: colorSpace srgb, components and hex as colorjs.io reads the typed value (Color Module: srgb)', () => {
     const colors = all.filter(([, t]) => t.$type === 'color');
     expect(colors).toHaveLength(4);
-    for (const [, t] of colors) {
+    const typed = new Map(identity.colors.map((c) => [c.name.toLowerCase().replace(/\s+/g, '-'), c.hex]));
+    for (const [path, t] of colors) {
       const v = t.$value as { colorSpace: string; components: number[]; hex: string; alpha?: number };
+      const ref = new Color(typed.get(path[path.length - 1])!);
       expect(v.colorSpace).toBe('srgb');
       expect(v.components).toHaveLength(3);
-      v.components.forEach((c) => expect(c >= 0 && c <= 1).toBe(true));
-      expect(v.hex).toMatch(/^#[0-9a-f]{6}$/);
-      const fromComponents = `#${v.components.map((c) => Math.round(c * 255).toString(16).padStart(2, '0')).join('')}`;
-      expect(fromComponents).toBe(v.hex);
-      if (v.alpha !== undefined) expect(v.alpha > 0 && v.alpha < 1).toBe(true);
+      v.components.forEach((c, i) => expect(c).toBeCloseTo(Number(ref.coords[i]), 4));
+      expect(v.hex).toBe(ref.toString({ format: 'hex', collapse: false, alpha: false }));
+      if (v.alpha !== undefined) expect(v.alpha).toBeCloseTo(ref.alpha.valueOf(), 3);
     }
     expect(((tree.color as Node)['deep-harbour'] as Node).$description).toBe('Primary text and marks');
     expect(((tree.color as Node).mist as Node).$value).toMatchObject({ alpha: 0.502 });

@@ -1,12 +1,15 @@
 import { readFileSync } from 'node:fs';
+import { createRequire } from 'node:module';
 import { brotliDecompressSync } from 'node:zlib';
-import { describe, expect, test } from 'vitest';
+import * as harfbuzz from 'harfbuzzjs';
+import { beforeAll, describe, expect, test } from 'vitest';
 import {
   columnWidthFor,
   fontMetrics,
   lineHeightFromMetrics,
   measure,
   MEASURE_RANGE,
+  MEASURE_SAMPLE,
   mmToPt,
   modularScale,
   openFont,
@@ -178,37 +181,67 @@ describe('fontMetrics of shipped OFL fonts agree with an independent read of the
       expect((error as TypographyError).code).toBe('font_unreadable');
     }
   });
-  test('line heights: body never below 1.5 (WCAG 2.2 SC 1.4.8)', () => {
+  test('line heights: body never below 1.5 (WCAG 2.2 SC 1.4.8); natural spacing from the raw tables (OpenType spec)', () => {
     const lh = lineHeightFromMetrics(fontMetrics(DM_SANS));
     expect(lh.body).toBeGreaterThanOrEqual(1.5);
-    expect(lh.natural).toBeGreaterThan(1);
+    // OpenType spec, OS/2 fsSelection bit 7 USE_TYPO_METRICS: typo ascender − descender + line gap, else hhea's.
+    const tables = readWoff2Tables(DM_SANS);
+    const [hhea, os2] = [tables.get('hhea')!, tables.get('OS/2')!];
+    const useTypo = (os2.readUInt16BE(62) & 0x80) !== 0;
+    const [ascender, descender, lineGap] = useTypo ? [68, 70, 72].map((o) => os2.readInt16BE(o)) : [4, 6, 8].map((o) => hhea.readInt16BE(o));
+    expect(lh.natural).toBeCloseTo((ascender - descender + lineGap) / tables.get('head')!.readUInt16BE(18), 12);
   });
 });
 
+// The reference for the average advance: HarfBuzz (the shaping engine of Chromium and Firefox, through harfbuzzjs)
+// shapes the same sample from the font's TrueType tables (WOFF2 unpacked by Google's woff2 decoder, through wawoff2),
+// independently of fontkit, which our measure uses. Both packages come with subset-font.
+const woff2ToTtf = createRequire(import.meta.url)('wawoff2/decompress') as (woff2: Uint8Array) => Promise<Uint8Array>;
+async function harfbuzzAdvanceEm(woff2: Buffer, text: string): Promise<number> {
+  const face = new harfbuzz.Face(new harfbuzz.Blob(await woff2ToTtf(woff2)), 0);
+  const buffer = new harfbuzz.Buffer();
+  buffer.addText(text);
+  buffer.guessSegmentProperties();
+  harfbuzz.shape(new harfbuzz.Font(face), buffer);
+  const advance = buffer.getGlyphPositions().reduce((sum, p) => sum + p.xAdvance, 0);
+  return advance / [...text].length / face.upem;
+}
+
 describe('measure: characters per line (Bringhurst, The Elements of Typographic Style, §2.1.2: 45–75, 66 ideal)', () => {
   const font = openFont(DM_SANS);
+  let referenceEm: number;
+  beforeAll(async () => {
+    referenceEm = await harfbuzzAdvanceEm(DM_SANS, MEASURE_SAMPLE);
+  });
+  test('the range is Bringhurst\'s: 45 to 75 characters, 66 the ideal', () => {
+    expect(MEASURE_RANGE).toEqual({ min: 45, max: 75, ideal: 66 });
+  });
   test.each([
     ['DM Sans 16 px in a 520 px column', DM_SANS, 16, 520],
     ['DM Sans 18 px in a 560 px column', DM_SANS, 18, 560],
     ['Source Serif 4 17 px in a 560 px column', SOURCE_SERIF, 17, 560],
   ])('%s falls in the comfortable range', (_name, file, size, width) => {
     const m = measure(file, { sizePx: size, columnWidthPx: width });
-    expect(m.charsPerLine).toBeGreaterThanOrEqual(MEASURE_RANGE.min);
-    expect(m.charsPerLine).toBeLessThanOrEqual(MEASURE_RANGE.max);
+    expect(m.charsPerLine).toBeGreaterThanOrEqual(45);
+    expect(m.charsPerLine).toBeLessThanOrEqual(75);
     expect(m.verdict).toBe('comfortable');
   });
-  test('scales linearly with column width and inversely with size (advance widths scale with the em)', () => {
-    const a = measure(font, { sizePx: 16, columnWidthPx: 300 }).charsPerLine;
-    expect(measure(font, { sizePx: 16, columnWidthPx: 600 }).charsPerLine).toBeCloseTo(2 * a, 9);
-    expect(measure(font, { sizePx: 32, columnWidthPx: 600 }).charsPerLine).toBeCloseTo(a, 9);
+  test.each([
+    [16, 300],
+    [16, 600],
+    [32, 600],
+    [18, 560],
+  ])('at %i px in a %i px column: the width over the average advance HarfBuzz gives for the sample', (sizePx, columnWidthPx) => {
+    expect(measure(font, { sizePx, columnWidthPx }).charsPerLine).toBeCloseTo(columnWidthPx / (sizePx * referenceEm), 6);
+  });
+  test('verdicts outside the range', () => {
     expect(measure(font, { sizePx: 16, columnWidthPx: 200 }).verdict).toBe('too-short');
     expect(measure(font, { sizePx: 16, columnWidthPx: 1400 }).verdict).toBe('too-long');
     // A 680 px column at 16 px already runs past 75 characters in this face: wide columns need larger type.
     expect(measure(font, { sizePx: 16, columnWidthPx: 680 }).verdict).toBe('too-long');
   });
-  test('the column for 66 characters is read back as 66', () => {
-    const width = columnWidthFor(font, 18);
-    expect(measure(font, { sizePx: 18, columnWidthPx: width }).charsPerLine).toBeCloseTo(66, 9);
+  test('the column for 66 characters is 66 of HarfBuzz\'s average advances wide', () => {
+    expect(columnWidthFor(font, 18)).toBeCloseTo(66 * 18 * referenceEm, 6);
   });
   test('bad sizes are typed errors', () => {
     expect(() => measure(font, { sizePx: -1, columnWidthPx: 600 })).toThrow(TypographyError);
