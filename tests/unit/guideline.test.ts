@@ -5,7 +5,7 @@ import { createElement } from 'react';
 import { describe, expect, test } from 'vitest';
 import { colorValues, contrastRatio } from '@/lib/color';
 import { PRINT_CAUTION, CONTRAST_CAUTION } from '@/lib/cautions';
-import { BLOCKS, blockDefinition, blocksByGroup } from '@/lib/guideline/blocks';
+import { BLOCKS, blockDefinition, blocksByGroup } from '@/blocks';
 import { GUIDELINE_LIMITS, guidelineDocSchema, validateGuideline, type GuidelineDoc } from '@/lib/guideline/document';
 import { decideRestore, draftKey, readDraft, writeDraft } from '@/lib/guideline/draft';
 import { isSafeHref, safeAssetUrl } from '@/lib/guideline/links';
@@ -185,7 +185,7 @@ describe('templates', () => {
     const value = (id: string) => identity.colors.find((c) => c.id === id)!.value;
     expect(pairs.slice(1).every((p) => contrastRatio(value(p.foreground), value(p.background)) >= 4.5)).toBe(true);
     expect(pairs.length).toBeGreaterThan(1);
-    expect(starterAttrs({ colorIds: ['$all'] }, identity).colorIds).toHaveLength(identity.colors.length);
+    expect(starterAttrs(blockDefinition('colorPalette')!, identity).colorIds).toHaveLength(identity.colors.length);
   });
 });
 
