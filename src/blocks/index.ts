@@ -16,8 +16,6 @@ export const BLOCKS: readonly BlockDefinition[] = Object.entries(found)
   })
   .sort((a, b) => a.order - b.order);
 
-export type BlockType = string;
-
 const byType = new Map<string, BlockDefinition>(BLOCKS.map((b) => [b.type, b]));
 
 /** The registry entry of a block type, or undefined for a type we do not know. */

@@ -8,7 +8,7 @@ import type { BlockDefinition } from './define';
 const kebab = (key: string) => key.replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`);
 
 /** The node options every guideline block shares: a top-level, draggable, atomic block. */
-export const BLOCK_NODE_SPEC = {
+const BLOCK_NODE_SPEC = {
   group: 'guidelineBlock',
   atom: true,
   draggable: true,
@@ -17,7 +17,7 @@ export const BLOCK_NODE_SPEC = {
 } as const;
 
 /** id (data-block-id) plus one data-* attribute per field, JSON-encoded so lists and nulls survive copy and paste. */
-export function blockAttributes(defaults: Record<string, unknown>): Attributes {
+function blockAttributes(defaults: Record<string, unknown>): Attributes {
   const attrs: Attributes = {
     id: {
       default: null,

@@ -9,7 +9,7 @@ type Renderer = ComponentType<{ attrs: never; identity: Identity; mode: RenderMo
 const found = import.meta.glob<{ Render?: Renderer }>('./*/Render.tsx', { eager: true });
 
 /** Renderers of the blocks that draw from the identity (a section's Render.tsx holds the header the document draws). */
-export const BLOCK_RENDERERS: ReadonlyMap<string, Renderer> = new Map(
+const BLOCK_RENDERERS: ReadonlyMap<string, Renderer> = new Map(
   Object.entries(found).flatMap(([path, { Render }]) => (Render ? [[blockFolder(path), Render] as const] : [])),
 );
 
