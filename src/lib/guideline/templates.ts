@@ -74,6 +74,9 @@ function resolveLogo(identity: Identity, token: string, path: string): string | 
   throw new TemplateError(path, `Unknown logo placeholder "${token}"; use "$all", "$primary" or "$mark".`);
 }
 
+/** The declared reference of one attribute or item field (own keys only: a template's keys are not trusted). */
+const refOf = (refs: Readonly<Record<string, RefSpec>> | undefined, key: string) => (refs && Object.hasOwn(refs, key) ? refs[key] : undefined);
+
 /** A list of objects whose declared references are a foreground colour on a background colour. */
 const isColorPairs = (ref: RefSpec | undefined) => typeof ref === 'object' && ref.foreground === 'colour' && ref.background === 'colour';
 
@@ -100,7 +103,7 @@ function resolveValue(identity: Identity, ref: RefSpec | undefined, key: string,
   }
   if (value && typeof value === 'object') {
     const fields = typeof ref === 'object' ? ref : {};
-    const resolved = Object.fromEntries(Object.entries(value).map(([k, v]) => [k, resolveValue(identity, fields[k], k, v, `${path}.${k}`)]));
+    const resolved = Object.fromEntries(Object.entries(value).map(([k, v]) => [k, resolveValue(identity, refOf(fields, k), k, v, `${path}.${k}`)]));
     // An item (a contrast pair) with a colour or logo that did not resolve is dropped by the caller.
     const unresolved = Object.entries(fields).some(([k, kind]) => (kind === 'colour' || kind === 'logo') && k in resolved && resolved[k] === null);
     return unresolved ? null : resolved;
@@ -112,7 +115,7 @@ function resolveValue(identity: Identity, ref: RefSpec | undefined, key: string,
 function resolveAttrs(identity: Identity, block: BlockDefinition | undefined, attrs: Record<string, unknown>, path: (key: string) => string) {
   return Object.fromEntries(
     Object.entries(attrs).map(([key, value]) => {
-      const out = resolveValue(identity, block?.refs[key], key, value, path(key));
+      const out = resolveValue(identity, refOf(block?.refs, key), key, value, path(key));
       return [key, Array.isArray(out) ? out.filter((x) => x !== null) : out];
     }),
   );
