@@ -3,7 +3,7 @@
 import { readFileSync } from 'node:fs';
 import { Editor } from '@tiptap/core';
 import { afterEach, describe, expect, test } from 'vitest';
-import { BLOCKS } from '@/lib/guideline/blocks';
+import { BLOCKS } from '@/blocks';
 import { validateGuideline } from '@/lib/guideline/document';
 import { instantiateTemplate } from '@/lib/guideline/templates';
 import type { Identity } from '@/lib/identity/types';

@@ -6,9 +6,8 @@ import Color from 'colorjs.io';
 import { wcagContrast } from 'culori';
 import { parse as parseHtml } from 'parse5';
 import { describe, expect, test } from 'vitest';
-import { colorValues } from '@/lib/color';
-import { PRINT_CAUTION, CONTRAST_CAUTION } from '@/lib/cautions';
-import { BLOCKS, blockDefinition, blocksByGroup } from '@/lib/guideline/blocks';
+import { PRINT_CAUTION } from '@/lib/cautions';
+import { BLOCKS, blockDefinition, blocksByGroup } from '@/blocks';
 import { GUIDELINE_LIMITS, guidelineDocSchema, validateGuideline, type GuidelineDoc } from '@/lib/guideline/document';
 import { decideRestore, draftKey, readDraft, writeDraft } from '@/lib/guideline/draft';
 import { isSafeHref, safeAssetUrl } from '@/lib/guideline/links';
@@ -72,7 +71,6 @@ describe('validateGuideline rejects bad documents and names the first bad path',
   test('an unknown block type, by name', () => expectError(doc(para('a', 'x'), { type: 'sparkleBox', attrs: { id: 'b' } }), 'content.1.type', /Unknown block type "sparkleBox"/));
   test('a bad attribute value', () => expectError(doc(para('a', 'x'), { type: 'colorPalette', attrs: { id: 'b', colorIds: [42] } }), 'content.1.attrs.colorIds.0', /colour id/));
   test('an attribute the block does not have', () => expectError(doc({ type: 'misuse', attrs: { id: 'b', glitter: true } }), 'content.0.attrs.glitter', /Unknown attribute "glitter"/));
-  test('a misuse tile we do not draw', () => expectError(doc({ type: 'misuse', attrs: { id: 'b', tiles: ['stretched', 'melted'] } }), 'content.0.attrs.tiles.1', /tile must be one of/));
   test('a javascript: link', () =>
     expectError(doc(para('a', 'click', [{ type: 'link', attrs: { href: 'javascript:alert(1)' } }])), 'content.0.content.0.marks.0.attrs.href', /http:\/\/, https:\/\/ or mailto:/));
   test('a link with a hidden scheme behind whitespace', () =>
@@ -107,10 +105,6 @@ describe('validateGuideline rejects bad documents and names the first bad path',
     expectError({ type: 'page', content: [] }, 'type', /type "doc"/);
     expectError(doc('text'), 'content.0', /Expected a block/);
   });
-  test('an image source that is a script address', () =>
-    expectError(doc({ type: 'imagery', attrs: { id: 'i', items: [{ src: 'javascript:alert(1)', alt: '', verdict: 'do', caption: '' }] } }), 'content.0.attrs.items.0.src', /asset shelf; outside addresses are not accepted/));
-  test('an image source that is an outside address', () =>
-    expectError(doc({ type: 'imagery', attrs: { id: 'i', items: [{ src: 'https://attacker.example/x.png', alt: '', verdict: 'do', caption: '' }] } }), 'content.0.attrs.items.0.src', /outside addresses are not accepted/));
 });
 
 describe('links and asset addresses', () => {
@@ -189,7 +183,7 @@ describe('templates', () => {
     const hex = (id: string) => identity.colors.find((c) => c.id === id)!.hex;
     for (const p of pairs.slice(1)) expect(wcagContrast(hex(p.foreground), hex(p.background)), `${p.foreground} on ${p.background}`).toBeGreaterThanOrEqual(4.5);
     expect(pairs.length).toBeGreaterThan(1);
-    expect(starterAttrs({ colorIds: ['$all'] }, identity).colorIds).toHaveLength(identity.colors.length);
+    expect(starterAttrs(blockDefinition('colorPalette')!, identity).colorIds).toHaveLength(identity.colors.length);
   });
 });
 
@@ -287,31 +281,6 @@ describe('published renderer', () => {
   test('copy buttons are plain buttons carrying the value; print leaves them out', () => {
     expect(html).toContain('data-copy="#767676"');
     expect(render(book, 'print')).not.toContain('data-copy=');
-  });
-
-  test('contrast pairs show WCAG 2.2 verdicts', () => {
-    const d = doc({ type: 'contrastPairs', attrs: { id: 'cp', pairs: [{ foreground: 'c-steam-grey', background: 'c-filter-paper' }, { foreground: 'c-espresso', background: 'c-filter-paper' }] } });
-    const out = render(d);
-    // #767676 on #ffffff is 4.54:1: passes AA (4.5:1) and AA large, fails AAA (7:1). WCAG 2.2 SC 1.4.3 / 1.4.6 thresholds;
-    // the 4.54:1 figure is the common practice worked example for this grey (from memory), confirmed with culori.
-    expect(wcagContrast('#767676', '#ffffff')).toBeCloseTo(4.54, 2);
-    const grey = out.slice(out.indexOf('data-pair="c-steam-grey/c-filter-paper"'), out.indexOf('data-pair="c-espresso/c-filter-paper"'));
-    expect(grey).toContain('4.54:1');
-    expect(grey).toContain('data-level="aa" data-pass="yes"');
-    expect(grey).toContain('data-level="aaLarge" data-pass="yes"');
-    expect(grey).toContain('data-level="aaa" data-pass="no"');
-    expect(grey).toContain('data-level="aaaLarge" data-pass="yes"');
-    // SC 1.4.11 non-text contrast: 3:1.
-    expect(grey).toContain('data-level="nonText" data-pass="yes"');
-    expect(out).toContain(CONTRAST_CAUTION.slice(0, 40));
-  });
-
-  test('a near miss never reads as a pass: 4.478:1 is shown as 4.47, not rounded up', () => {
-    // #777777 on #ffffff is 4.478…:1, just under AA 4.5:1 (from memory; recomputed with the WCAG 2.2 formula).
-    const sameGrey = { ...identity, colors: [...identity.colors, { ...identity.colors[3], id: 'c-777', name: 'Grey 777', ...colorValues('#777777') }] };
-    const out = render(doc({ type: 'contrastPairs', attrs: { id: 'cp', pairs: [{ foreground: 'c-777', background: 'c-filter-paper' }] } }), 'site', sameGrey);
-    expect(out).toContain('4.47:1');
-    expect(out).toContain('data-level="aa" data-pass="no"');
   });
 
   test('a colour removed from the identity renders a gentle placeholder, not a crash', () => {

@@ -1,5 +1,5 @@
 // What the insert menu offers: rich text first, then the registry's blocks by group, each with its starting content.
-import { blocksByGroup } from '@/lib/guideline/blocks';
+import { blocksByGroup } from '@/blocks';
 import { newBlockId } from '@/lib/guideline/ids';
 import { starterAttrs } from '@/lib/guideline/templates';
 import type { Identity } from '@/lib/identity/types';
@@ -36,7 +36,7 @@ export function insertItems(): InsertItem[] {
       label: b.label,
       description: b.description,
       group: label,
-      content: (identity: Identity) => ({ type: b.type, attrs: { ...b.defaults, ...starterAttrs(b.starter, identity), id: newBlockId() } }),
+      content: (identity: Identity) => ({ type: b.type, attrs: { ...b.defaults, ...starterAttrs(b, identity), id: newBlockId() } }),
     })),
   );
   const [structure, ...rest] = blocks.reduce<InsertItem[][]>((groups, item) => {

@@ -5,7 +5,9 @@ import { brandStyle } from '@/lib/guideline/identity';
 import { outline, type OutlineEntry } from '@/lib/guideline/outline';
 import { RICH_TEXT_TYPES, type RichBlockNode } from '@/lib/guideline/richText';
 import type { Identity } from '@/lib/identity/types';
-import { BlockRenderer } from './blocks';
+import { BlockRenderer } from '@/blocks/renderers';
+import { SectionHeader } from '@/blocks/sectionHeading/Render';
+import { sectionHeadingBlock } from '@/blocks/sectionHeading/definition';
 import type { RenderMode } from './parts';
 import { RichBlock } from './RichText';
 
@@ -21,25 +23,6 @@ function Node({ node, identity, mode }: { node: TopLevelNode; identity: Identity
   );
 }
 
-function SectionHeader({ entry, intro, mode }: { entry: OutlineEntry; intro: string; mode: RenderMode }) {
-  // In print the section title is the document's top heading level, so the PDF outline has one entry per section.
-  const Title = mode === 'print' ? 'h1' : 'h2';
-  return (
-    <header className="mb-6">
-      {entry.eyebrow ? <p className="text-xs font-semibold uppercase tracking-[0.16em] opacity-70">{entry.eyebrow}</p> : null}
-      <Title id={`${entry.anchor}-title`} className="group mt-1 text-4xl font-semibold leading-tight" style={{ fontFamily: 'var(--brand-heading-font)' }}>
-        {entry.title}
-        {mode === 'print' ? null : (
-          <a href={`#${entry.anchor}`} className="ml-3 text-2xl no-underline opacity-0 group-hover:opacity-40 focus-visible:opacity-60" aria-label={`Link to the section ${entry.title}`}>
-            #
-          </a>
-        )}
-      </Title>
-      {intro ? <p className="mt-3 max-w-prose text-lg leading-relaxed opacity-85">{intro}</p> : null}
-    </header>
-  );
-}
-
 /** The CSS page name of the nth section in the print edition (running heads carry its title). */
 export const printPageName = (index: number) => `section-${index + 1}`;
 
@@ -50,7 +33,7 @@ export function GuidelineDocument({ doc, identity, mode }: { doc: GuidelineDoc; 
   let sectionIndex = 0;
   for (const node of doc.content) {
     if (node.type === 'sectionHeading') {
-      const attrs = parseBlockAttrs('sectionHeading', node.attrs);
+      const attrs = parseBlockAttrs(sectionHeadingBlock, node.attrs);
       groups.push({ entry: entries[sectionIndex++], intro: attrs?.intro ?? '', nodes: [] });
     } else groups[groups.length - 1].nodes.push(node);
   }

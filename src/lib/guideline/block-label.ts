@@ -1,5 +1,5 @@
 // A reader's name for a top-level block, used wherever a block is referred to in words (review lists, the margin).
-import { blockDefinition } from './blocks';
+import { blockDefinition } from '@/blocks';
 
 export interface LabelledBlock {
   type: string;

@@ -1,6 +1,6 @@
 // The guideline document: ProseMirror JSON made of registry blocks and rich text, with the limits the server enforces.
 import * as z from 'zod';
-import { BLOCKS, blockDefinition, type BlockAttrs, type BlockType } from './blocks';
+import { BLOCKS, blockDefinition, type BlockDefinition } from '@/blocks';
 import {
   blockquoteSchema,
   bulletListSchema,
@@ -21,7 +21,8 @@ export const GUIDELINE_LIMITS = {
   maxTopLevelBlocks: 2000,
 } as const;
 
-export type IdentityBlockNode = { [T in BlockType]: { type: T; attrs: BlockAttrs<T> } }[BlockType];
+/** A registry block: its type names a folder under src/blocks, its attributes fit that block's schema. */
+export type IdentityBlockNode = { type: string; attrs: { id: string } & Record<string, unknown> };
 export type TopLevelNode = IdentityBlockNode | RichBlockNode;
 export interface GuidelineDoc {
   type: 'doc';
@@ -130,11 +131,9 @@ export function validateGuideline(doc: unknown): ValidationResult {
 }
 
 /** Parses a block's attributes through its schema (defaults filled), or null when they do not fit. */
-export function parseBlockAttrs<T extends BlockType>(type: T, attrs: unknown): BlockAttrs<T> | null {
-  const def = blockDefinition(type);
-  if (!def) return null;
-  const result = def.schema.safeParse(attrs ?? {});
-  return result.success ? (result.data as BlockAttrs<T>) : null;
+export function parseBlockAttrs<S extends z.ZodObject>(block: BlockDefinition<string, S>, attrs: unknown): z.output<S> | null {
+  const result = block.schema.safeParse(attrs ?? {});
+  return result.success ? result.data : null;
 }
 
 /** True for a top-level node that is a registry block (not rich text). */

@@ -9,7 +9,8 @@ import { sequelize } from '@/lib/db.server';
 import { ApiError } from '@/lib/http/api';
 import type { Identity } from '@/lib/identity/types';
 import { isAssetRef } from '@/lib/safe/values';
-import { OUTSIDE_IMAGE_MESSAGE } from './blocks';
+import { blockRefs } from '@/blocks';
+import { OUTSIDE_IMAGE_MESSAGE } from '@/blocks/imagery/definition';
 import { validateGuideline, type GuidelineDoc } from './document';
 import { instantiateTemplate, templateInstructions } from './templates';
 
@@ -33,12 +34,13 @@ export function checkDoc(doc: unknown): GuidelineDoc {
   return result.doc;
 }
 
-/** Every asset id an imagery block names must be a file of this brand's own shelf; else a 400 naming the first. */
+/** Every asset id a block declares as an image must be a file of this brand's own shelf; else a 400 naming the first. */
 async function checkShelfImages(brand: Brand, doc: GuidelineDoc): Promise<void> {
   const used: { id: string; path: string }[] = [];
   doc.content.forEach((node, i) => {
-    if (node.type !== 'imagery') return;
-    node.attrs.items.forEach((item, j) => isAssetRef(item.src) && used.push({ id: item.src, path: `content.${i}.attrs.items.${j}.src` }));
+    for (const ref of blockRefs(node.type, node.attrs)) {
+      if (ref.kind === 'image' && isAssetRef(ref.value)) used.push({ id: ref.value, path: `content.${i}.attrs.${ref.path.join('.')}` });
+    }
   });
   if (used.length === 0) return;
   const found = new Set((await Asset.findAll({ where: { brandId: brand.id, id: [...new Set(used.map((u) => u.id))] }, attributes: ['id'] })).map((a) => a.id));

@@ -6,12 +6,14 @@ import { contrastRatio } from '@/lib/color/contrast';
 import { validateGuideline, type GuidelineDoc } from './document';
 import { newBlockId } from './ids';
 import { colorForRole, colorsInOrder, extremes, logosInOrder, markLogo, primaryLogo } from './identity';
-import type { ContrastPair } from './blocks/contrastPairs';
+import type { ContrastPair } from '@/blocks/contrastPairs/definition';
+import { blockDefinition, type BlockDefinition, type RefSpec } from '@/blocks';
 
 /**
- * Placeholders: colour fields take "$all" (in a list) or a role ("$primary", "$text", "$background", …);
- * logo fields take "$all", "$primary" or "$mark"; contrast pairs take "$suggested". Anything unresolvable
- * becomes null (single) or is dropped (lists), so the block shows its empty state.
+ * Placeholders, allowed where a block's definition declares a reference: colour fields take "$all" (in a list) or a
+ * role ("$primary", "$text", "$background", …); logo fields take "$all", "$primary" or "$mark"; a list of colour
+ * pairs (foreground on background) takes "$suggested". Anything unresolvable becomes null (single) or is dropped
+ * (lists), so the block shows its empty state.
  */
 export const templateSchema = z.strictObject({
   name: z.string().min(1).max(120),
@@ -28,9 +30,6 @@ export class TemplateError extends Error {
     super(`${path}: ${message}`);
   }
 }
-
-const COLOR_KEY = /(colou?rIds?|^foreground|^background)$/i;
-const LOGO_KEY = /logoIds?$/i;
 
 /**
  * Pairs worth showing first: text on the ground, then each key colour with whichever extreme (lightest or darkest)
@@ -75,17 +74,23 @@ function resolveLogo(identity: Identity, token: string, path: string): string | 
   throw new TemplateError(path, `Unknown logo placeholder "${token}"; use "$all", "$primary" or "$mark".`);
 }
 
-function resolveValue(identity: Identity, key: string, value: unknown, path: string): unknown {
-  if (key === 'pairs' && value === '$suggested') return suggestedPairs(identity);
-  const isColor = COLOR_KEY.test(key);
-  const isLogo = LOGO_KEY.test(key);
+/** The declared reference of one attribute or item field (own keys only: a template's keys are not trusted). */
+const refOf = (refs: Readonly<Record<string, RefSpec>> | undefined, key: string) => (refs && Object.hasOwn(refs, key) ? refs[key] : undefined);
+
+/** A list of objects whose declared references are a foreground colour on a background colour. */
+const isColorPairs = (ref: RefSpec | undefined) => typeof ref === 'object' && ref.foreground === 'colour' && ref.background === 'colour';
+
+function resolveValue(identity: Identity, ref: RefSpec | undefined, key: string, value: unknown, path: string): unknown {
+  if (value === '$suggested' && isColorPairs(ref)) return suggestedPairs(identity);
+  const isColor = ref === 'colour';
+  const isLogo = ref === 'logo';
   if (Array.isArray(value)) {
-    if (!isColor && !isLogo) return value.map((item, i) => resolveValue(identity, key, item, `${path}.${i}`));
+    if (!isColor && !isLogo) return value.map((item, i) => resolveValue(identity, ref, key, item, `${path}.${i}`));
     const out: unknown[] = [];
     value.forEach((item, i) => {
       if (item === '$all') out.push(...(isColor ? colorsInOrder(identity) : logosInOrder(identity)).map((x) => x.id));
       else {
-        const resolved = resolveValue(identity, key, item, `${path}.${i}`);
+        const resolved = resolveValue(identity, ref, key, item, `${path}.${i}`);
         if (resolved !== null) out.push(resolved);
       }
     });
@@ -97,12 +102,23 @@ function resolveValue(identity: Identity, key: string, value: unknown, path: str
     throw new TemplateError(path, `"${value}" is a placeholder, but "${key}" takes no identity reference.`);
   }
   if (value && typeof value === 'object') {
-    const obj = value as Record<string, unknown>;
-    const resolved = Object.fromEntries(Object.entries(obj).map(([k, v]) => [k, resolveValue(identity, k, v, `${path}.${k}`)]));
-    // A contrast pair with a side that did not resolve is dropped by the caller.
-    return 'foreground' in obj && (resolved.foreground === null || resolved.background === null) ? null : resolved;
+    const fields = typeof ref === 'object' ? ref : {};
+    const resolved = Object.fromEntries(Object.entries(value).map(([k, v]) => [k, resolveValue(identity, refOf(fields, k), k, v, `${path}.${k}`)]));
+    // An item (a contrast pair) with a colour or logo that did not resolve is dropped by the caller.
+    const unresolved = Object.entries(fields).some(([k, kind]) => (kind === 'colour' || kind === 'logo') && k in resolved && resolved[k] === null);
+    return unresolved ? null : resolved;
   }
   return value;
+}
+
+/** A block's attributes with every placeholder resolved against the identity, by the block's declared references. */
+function resolveAttrs(identity: Identity, block: BlockDefinition | undefined, attrs: Record<string, unknown>, path: (key: string) => string) {
+  return Object.fromEntries(
+    Object.entries(attrs).map(([key, value]) => {
+      const out = resolveValue(identity, refOf(block?.refs, key), key, value, path(key));
+      return [key, Array.isArray(out) ? out.filter((x) => x !== null) : out];
+    }),
+  );
 }
 
 /** Resolves a template's placeholders against an identity, gives every block a fresh id, and validates the result. */
@@ -114,12 +130,7 @@ export function instantiateTemplate(template: unknown, identity: Identity): Guid
   }
   const content = parsed.data.doc.content.map(({ instruction: _instruction, ...node }, i) => {
     const attrs = (node.attrs ?? {}) as Record<string, unknown>;
-    const resolved = Object.fromEntries(
-      Object.entries(attrs).map(([key, value]) => {
-        const out = resolveValue(identity, key, value, `doc.content.${i}.attrs.${key}`);
-        return [key, Array.isArray(out) ? out.filter((x) => x !== null) : out];
-      }),
-    );
+    const resolved = resolveAttrs(identity, blockDefinition(node.type), attrs, (key) => `doc.content.${i}.attrs.${key}`);
     return { ...node, attrs: { ...resolved, id: newBlockId() } };
   });
   const result = validateGuideline({ type: 'doc', content });
@@ -144,11 +155,6 @@ export function templateInstructions(template: unknown): string[] {
 }
 
 /** Attributes for a newly inserted block: its registry starter resolved against the identity. */
-export function starterAttrs(starter: Record<string, unknown>, identity: Identity): Record<string, unknown> {
-  return Object.fromEntries(
-    Object.entries(starter).map(([key, value]) => {
-      const out = resolveValue(identity, key, value, key);
-      return [key, Array.isArray(out) ? out.filter((x) => x !== null) : out];
-    }),
-  );
+export function starterAttrs(block: BlockDefinition, identity: Identity): Record<string, unknown> {
+  return resolveAttrs(identity, block, block.starter, (key) => key);
 }

@@ -1,6 +1,6 @@
 // What changed between two published versions (or a version and the draft): blocks, colours and type.
-import { blockDefinition } from '@/lib/guideline/blocks';
-import type { Identity } from '@/lib/identity/types';
+import { blockDefinition } from '@/blocks';
+import { TYPEFACE_ROLES, type Identity } from '@/lib/identity/types';
 
 interface AnyBlock {
   type: string;
@@ -64,7 +64,7 @@ export function compareSnapshots(before: Snapshot, after: Snapshot): VersionChan
   for (const [id, c] of oldColors) if (!newColors.has(id)) colors.push({ what: `Colour ${c.name}`, from: c.hex, to: null });
 
   const type: ValueChange[] = [];
-  for (const role of ['heading', 'body', 'accent'] as const) {
+  for (const role of TYPEFACE_ROLES) {
     const from = before.identity.typefaces.find((f) => f.role === role)?.family ?? null;
     const to = after.identity.typefaces.find((f) => f.role === role)?.family ?? null;
     if (from !== to) type.push({ what: `${role[0].toUpperCase()}${role.slice(1)} typeface`, from, to });

@@ -7,7 +7,7 @@ import { audit } from '@/lib/audit.server';
 import type { Caller } from '@/lib/auth/access.server';
 import { sequelize } from '@/lib/db.server';
 import { ApiError } from '@/lib/http/api';
-import { withStoredAttrs } from '@/lib/guideline/blocks';
+import { documentRefs, withStoredAttrs } from '@/blocks';
 import type { GuidelineDoc } from '@/lib/guideline/document';
 import { loadIdentity } from '@/lib/identity/identity.server';
 import type { Identity } from '@/lib/identity/types';
@@ -41,9 +41,10 @@ async function copyFiles(brand: Brand, identity: Identity, doc: GuidelineDoc): P
     files[fileId] = { key, contentType };
   };
   const logoType = (format: 'svg' | 'png') => (format === 'svg' ? 'image/svg+xml' : 'image/png');
-  // Imagery shows approved images of the brand's own shelf only, copied like the logos.
+  // Blocks show approved images of the brand's own shelf only (their declared image references), copied like the logos;
+  // a name that is not yet an asset ("photo-to-come-1") has nothing to copy.
   const approvedImages = new Set((identity.assets ?? []).filter((a) => a.kind === 'image').map((a) => a.id));
-  const wanted = imageryAssetIds(doc).filter((id) => approvedImages.has(id));
+  const wanted = documentRefs(doc, 'image').filter((id) => isAssetRef(id) && approvedImages.has(id));
   const images = wanted.length ? await Asset.findAll({ where: { brandId: brand.id, id: wanted, state: 'approved', kind: 'image' }, attributes: ['id', 'storageKey', 'mime', 'format'] }) : [];
   for (const image of images) await copy(image.id, image.storageKey, image.format, image.mime);
   const logos = await BrandLogo.findAll({ where: { brandId: brand.id }, attributes: ['id', 'storageKey', 'format', 'variantFiles'] });
@@ -63,16 +64,6 @@ async function copyFiles(brand: Brand, identity: Identity, doc: GuidelineDoc): P
     files[face.id] = { key, contentType: `font/${face.format}` };
   }
   return files;
-}
-
-/** Shelf asset ids the imagery blocks of a document show. */
-function imageryAssetIds(doc: GuidelineDoc): string[] {
-  const ids = new Set<string>();
-  for (const node of doc.content) {
-    if (node.type !== 'imagery') continue;
-    for (const item of (node.attrs as { items?: { src?: unknown }[] }).items ?? []) if (isAssetRef(item.src)) ids.add(item.src);
-  }
-  return [...ids];
 }
 
 const emptyDraft = () => new ApiError(409, 'empty_draft', 'There is nothing to publish yet: add at least one block to the guidelines first.');
@@ -155,6 +146,12 @@ export async function findVersion(brandId: string, number: number | null, opts: 
     : GuidelineVersion.findOne({ where: { brandId, number }, attributes });
 }
 
+/** A version's frozen document and identity, read from the row when it was loaded without them. */
+export async function versionSnapshot(version: GuidelineVersion): Promise<{ doc: GuidelineDoc; identity: Identity }> {
+  const row = version.snapshot ? version : await GuidelineVersion.findByPk(version.id, { attributes: ['snapshot'] });
+  return row!.snapshot as { doc: GuidelineDoc; identity: Identity };
+}
+
 /** The newest version number of a brand, or null. */
 export async function latestNumber(brandId: string): Promise<number | null> {
   return (await GuidelineVersion.max<number, GuidelineVersion>('number', { where: { brandId } })) ?? null;
@@ -176,3 +173,6 @@ export async function versionChanges(brand: Brand, from: number, to: number | 'd
   const changes = compareSnapshots(a.snapshot as Snapshot, b);
   return { from, to, changes, summary: changeSummary(changes) };
 }
+
+/** A stored version as the screens that render it see it (they read it through this module, never from db/). */
+export type VersionRecord = GuidelineVersion;

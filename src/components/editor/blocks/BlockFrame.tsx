@@ -1,8 +1,8 @@
 // The editor's frame around every guideline block: drag handle, name, move/copy/remove, live preview and settings.
 import { NodeViewWrapper, type ReactNodeViewProps } from '@tiptap/react';
 import { useId, useState, type ReactNode } from 'react';
-import { blockDefinition } from '@/lib/guideline/blocks';
-import { BlockRenderer } from '@/components/guideline/blocks';
+import { blockDefinition } from '@/blocks';
+import { BlockRenderer } from '@/blocks/renderers';
 import { deleteBlock, duplicateBlock, moveBlock, topLevelIndex } from '@/components/editor/commands';
 import { useIdentity } from '@/components/editor/IdentityContext';
 

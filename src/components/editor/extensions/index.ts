@@ -2,7 +2,7 @@
 import { Node, type AnyExtension } from '@tiptap/core';
 import StarterKit from '@tiptap/starter-kit';
 import { isSafeHref } from '@/lib/guideline/links';
-import { BLOCK_NODES } from '@/components/editor/blocks';
+import { BLOCK_NODES } from '@/blocks/editor';
 import { BlockIds } from './blockIds';
 import { BlockKeys } from './blockKeys';
 

@@ -1,5 +1,5 @@
 import type { APIRoute } from 'astro';
-import { versionPageResponse } from '@/lib/publishing/site-page.server';
+import { versionPageResponse } from '@/site/version-page.server';
 
 /** The current version of a brand's guidelines. */
 export const GET: APIRoute = (context) => versionPageResponse(context, null);
