@@ -10,6 +10,8 @@ export interface AuthSettings {
   signInLimit: number;
   /** Mails the link that proves an address (the server passes our mail module; scripts that only migrate or seed do not). */
   sendVerificationEmail?: (to: { email: string; name: string }, url: string) => Promise<void>;
+  /** Told when an idle connection is dropped (the server logs it; scripts that only migrate or seed end first). */
+  onPoolError?: (err: Error) => void;
 }
 
 /** The header our auth route fills from the socket address, so the limiter keys on the real client. */
@@ -26,7 +28,7 @@ export function authOptions(settings: AuthSettings): BetterAuthOptions {
   const secure = settings.siteUrl.startsWith('https://');
   const pool = new pg.Pool({ connectionString: settings.databaseUrl, max: 5 });
   // An idle connection dropped by the server (restart, shutdown) must not take the process down.
-  pool.on('error', (err) => console.error('[auth] database connection lost:', err.message));
+  pool.on('error', (err) => settings.onPoolError?.(err));
   return {
     appName: 'Plumbline',
     baseURL: settings.siteUrl,
