@@ -12,6 +12,8 @@ export interface AuthSettings {
   sendVerificationEmail?: (to: { email: string; name: string }, url: string) => Promise<void>;
   /** Told when an idle connection is dropped (the server logs it; scripts that only migrate or seed end first). */
   onPoolError?: (err: Error) => void;
+  /** Where better-auth's own messages go (the server's logger); its coloured console lines otherwise. */
+  log?: NonNullable<BetterAuthOptions['logger']>['log'];
 }
 
 /** The header our auth route fills from the socket address, so the limiter keys on the real client. */
@@ -36,6 +38,7 @@ export function authOptions(settings: AuthSettings): BetterAuthOptions {
     secret: settings.secret,
     trustedOrigins: [settings.siteUrl],
     database: pool,
+    ...(settings.log ? { logger: { log: settings.log } } : {}),
     emailAndPassword: {
       enabled: true,
       minPasswordLength: PASSWORD_MIN,

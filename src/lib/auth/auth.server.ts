@@ -16,6 +16,11 @@ export const auth = betterAuth(
       if (!outcome.sent) log.error({ to: to.email, problem: outcome.problem }, 'auth: the address link was not sent');
     },
     onPoolError: (err) => log.error({ err }, 'auth: database connection lost'),
+    log: (level, message, ...args) => {
+      const err = args.find((a) => a instanceof Error);
+      const details = args.filter((a) => !(a instanceof Error));
+      log[level]({ ...(err ? { err } : {}), ...(details.length ? { details } : {}) }, `auth: ${message}`);
+    },
   }),
 );
 
