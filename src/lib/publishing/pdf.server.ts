@@ -6,6 +6,7 @@ import PgBoss from 'pg-boss';
 import { ParseSpeeds, PDFArray, PDFDict, PDFDocument, PDFHexString, PDFName, PDFRef, PDFString } from 'pdf-lib';
 import puppeteer, { type Browser } from 'puppeteer-core';
 import { Brand, GuidelineVersion, PdfExport, Studio } from '@db/models';
+import { formatLongDate, SITE_LOCALE } from '@/lib/format';
 import { log } from '@/lib/log.server';
 import { storage } from '@/lib/storage/index.server';
 import { newKey } from '@/lib/storage/storage';
@@ -194,7 +195,7 @@ function queue(): Promise<PgBoss> {
 
 /** Title, author (the studio), subject and keywords of a version's PDF. */
 export function bookMeta(brandName: string, studioName: string, number: number, published: Date): BookMeta {
-  const date = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric' }).format(published);
+  const date = formatLongDate(published, SITE_LOCALE);
   return {
     title: `${brandName} brand guidelines, version ${number}`,
     author: studioName,
