@@ -4,7 +4,6 @@ import { assetFor, downloadFile, renditionRequester } from '@/lib/assets/assets.
 import { renditionQuerySchema } from '@/lib/assets/kinds';
 import { queryObject } from '@/lib/assets/schemas';
 import { PRINT_CAUTION } from '@/lib/cautions';
-import { AppError } from '@/lib/errors';
 import { ApiError, endpoint, fileResponse, idParam, methodNotAllowed, notFound, parseWith } from '@/lib/http/api';
 import { requestClientAddress } from '@/lib/http/client-address.server';
 import '@/lib/db.server';
@@ -22,7 +21,7 @@ export const GET = endpoint(async (context) => {
   if (!found) throw notFound('That asset');
   // An asset of a brand the caller cannot read is answered exactly like a random id: no existence leak.
   const reader = await authorizeAssetRead(locals, found.brandId).catch((err) => {
-    throw err instanceof AppError && (err.status === 401 || err.status === 404) ? notFound('That asset') : err;
+    throw err instanceof ApiError && (err.status === 401 || err.status === 404) ? notFound('That asset') : err;
   });
   const asset = await assetFor(reader.brand.id, assetId, reader.approvedOnly);
   const { rendition, filename, params: resolved } = await downloadFile(reader, asset, query, renditionRequester(reader, requestClientAddress(context)));
