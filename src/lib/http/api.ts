@@ -2,11 +2,8 @@
 import type { APIContext, APIRoute } from 'astro';
 import busboy from 'busboy';
 import { z } from 'zod';
-import { AppError, type ErrorBody } from '@/lib/errors';
+import { AppError } from '@/lib/errors';
 import { log } from '@/lib/log.server';
-
-export type ApiErrorBody = ErrorBody;
-export { AppError };
 
 /** The one error class written status first, as routes think of it: `new ApiError(404, 'not_found', '…')`. */
 export class ApiError extends AppError {
