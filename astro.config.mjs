@@ -52,6 +52,8 @@ export default defineConfig({
       MAIL_CAPTURE_DIR: envField.string({ context: 'server', access: 'secret', optional: true }),
       // E-mails one account may send per hour: invitations, resends, briefs, mood boards, review requests.
       MAIL_SEND_LIMIT: envField.number({ context: 'server', access: 'secret', default: 60 }),
+      // The logger's level (src/lib/log.server.ts): JSON lines on stdout at this level and above.
+      LOG_LEVEL: envField.enum({ context: 'server', access: 'secret', values: ['trace', 'debug', 'info', 'warn', 'error', 'fatal', 'silent'], default: 'info' }),
     },
   },
 });

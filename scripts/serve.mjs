@@ -7,6 +7,7 @@ import http from 'node:http';
 import { join, resolve } from 'node:path';
 import { setTimeout } from 'node:timers';
 import { pathToFileURL } from 'node:url';
+import { pino } from 'pino';
 import send from 'send';
 
 const outDir = resolve(process.argv[2] ?? process.env.PLUMBLINE_OUT_DIR ?? 'dist');
@@ -14,6 +15,8 @@ const clientDir = join(outDir, 'client');
 const { handler } = await import(pathToFileURL(join(outDir, 'server', 'entry.mjs')).href);
 const host = process.env.HOST ?? '127.0.0.1';
 const port = Number(process.env.PORT ?? 4321);
+// This script runs outside the bundle, so it cannot share src/lib/log.server.ts; its few lines use the same form.
+const log = pino({ level: process.env.LOG_LEVEL ?? 'info', timestamp: pino.stdTimeFunctions.isoTime });
 
 /** The built file a GET may be answered with, or null (routes, missing files, folders). */
 function staticFile(pathname) {
@@ -76,5 +79,5 @@ const server = http.createServer((req, res) => {
   handler(req, res, undefined, { socketAddress: req.socket.remoteAddress });
 });
 
-server.listen(port, host, () => console.log(`Plumbline listening on http://${host}:${port}`));
+server.listen(port, host, () => log.info({ url: `http://${host}:${port}` }, 'Plumbline listening'));
 for (const signal of ['SIGINT', 'SIGTERM']) process.on(signal, () => process.exit(0));

@@ -9,5 +9,7 @@ declare namespace App {
     shareGrant: { brandId: string; linkId: string; allowDownloads: boolean; version: number | null } | null;
     /** The TCP peer's address, set by scripts/serve.mjs; read it through requestClientAddress(), never directly. */
     socketAddress?: string;
+    /** This request's id (src/middleware.ts): in every log line written while it is served and its X-Request-Id. */
+    requestId?: string;
   }
 }

@@ -1,14 +1,24 @@
-// Resolves the session and the share link into locals and nothing else: authorisation lives in
-// src/lib/auth/policy.ts (members) and src/lib/publishing/site-access.server.ts (published sites).
+// Gives each request its id and log scope, then resolves the session and the share link into locals and nothing
+// else: authorisation lives in src/lib/auth/policy.ts (members) and src/lib/publishing/site-access.server.ts (sites).
+import type { APIContext, MiddlewareNext } from 'astro';
 import { defineMiddleware } from 'astro:middleware';
 import { auth } from './lib/auth/auth.server';
+import { log, requestIdFrom, serveLogged } from './lib/log.server';
 import { shareGrants } from './lib/publishing/grant-cache';
 import { linkForToken, linkState, SHARE_COOKIE, tokenFromCookie } from './lib/publishing/share-links.server';
 
 // No memory of sessions here: a signed-out or revoked session is refused on the very next request, in every process.
 const sessionKey = (cookie: string) => /session_token=([^;]+)/.exec(cookie)?.[1] ?? null;
 
-export const onRequest = defineMiddleware(async (context, next) => {
+export const onRequest = defineMiddleware((context, next) => {
+  const requestId = requestIdFrom(context.request.headers.get('x-request-id'));
+  context.locals.requestId = requestId;
+  // Prerendering runs at build time: there is no request to log.
+  if (context.isPrerendered) return resolveCaller(context, next);
+  return serveLogged(log, { method: context.request.method, pathname: context.url.pathname, requestId }, () => resolveCaller(context, next));
+});
+
+async function resolveCaller(context: APIContext, next: MiddlewareNext): Promise<Response> {
   context.locals.user = null;
   context.locals.session = null;
   context.locals.shareGrant = null;
@@ -34,4 +44,4 @@ export const onRequest = defineMiddleware(async (context, next) => {
     context.locals.shareGrant = grant;
   }
   return next();
-});
+}

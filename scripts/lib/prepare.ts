@@ -51,10 +51,11 @@ export interface ServerEnv {
 }
 
 /** Start the built server (scripts/serve.mjs over outDir()) and resolve once it answers HTTP. */
-export async function startServer(env: ServerEnv, opts: { quiet?: boolean } = {}): Promise<ChildProcess> {
+export async function startServer(env: ServerEnv, opts: { quiet?: boolean; pipeLog?: boolean } = {}): Promise<ChildProcess> {
   const child = spawn(process.execPath, [join(projectRoot, 'scripts', 'serve.mjs'), outDir()], {
     cwd: projectRoot,
-    stdio: opts.quiet ? ['ignore', 'ignore', 'inherit'] : 'inherit',
+    // pipeLog: the log lines (stdout) are kept on child.stdout for a test to read.
+    stdio: opts.pipeLog ? ['ignore', 'pipe', 'inherit'] : opts.quiet ? ['ignore', 'ignore', 'inherit'] : 'inherit',
     env: {
       ...process.env,
       // The built server runs as production whatever the caller's environment (vitest sets NODE_ENV=test).

@@ -32,8 +32,8 @@ export function viewerLocale(): string {
 
 const toDate = (value: DateInput) => (value instanceof Date ? value : new Date(value));
 const formatters = new Map<string, Intl.DateTimeFormat>();
-function formatter(locale: string, kind: 'date' | 'long' | 'dateTime' | 'time'): Intl.DateTimeFormat {
-  const key = `${locale}|${kind}`;
+function formatter(locale: string, kind: 'date' | 'long' | 'dateTime' | 'time', timeZone?: string): Intl.DateTimeFormat {
+  const key = `${locale}|${kind}|${timeZone ?? ''}`;
   let f = formatters.get(key);
   if (!f) {
     const options: Intl.DateTimeFormatOptions =
@@ -41,20 +41,30 @@ function formatter(locale: string, kind: 'date' | 'long' | 'dateTime' | 'time'):
       : kind === 'long' ? { day: 'numeric', month: 'long', year: 'numeric' }
       : kind === 'dateTime' ? { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit' }
       : { hour: '2-digit', minute: '2-digit' };
-    f = new Intl.DateTimeFormat(locale, options);
+    f = new Intl.DateTimeFormat(locale, timeZone ? { ...options, timeZone } : options);
     formatters.set(key, f);
   }
   return f;
 }
 
+// `timeZone`: the runtime's own unless given (e-mail gives UTC, so a date never depends on the server's clock zone).
 /** "2 Dec 2026" / "Dec 2, 2026": a date with the month as a word. */
-export const formatDate = (value: DateInput, locale = viewerLocale()) => formatter(locale, 'date').format(toDate(value));
+export const formatDate = (value: DateInput, locale = viewerLocale(), timeZone?: string) => formatter(locale, 'date', timeZone).format(toDate(value));
 /** "2 December 2026": for documents and letters. */
-export const formatLongDate = (value: DateInput, locale = viewerLocale()) => formatter(locale, 'long').format(toDate(value));
+export const formatLongDate = (value: DateInput, locale = viewerLocale(), timeZone?: string) => formatter(locale, 'long', timeZone).format(toDate(value));
 /** "2 Dec 2026, 14:05". */
-export const formatDateTime = (value: DateInput, locale = viewerLocale()) => formatter(locale, 'dateTime').format(toDate(value));
+export const formatDateTime = (value: DateInput, locale = viewerLocale(), timeZone?: string) => formatter(locale, 'dateTime', timeZone).format(toDate(value));
 /** "14:05" / "2:05 PM". */
-export const formatTime = (value: DateInput, locale = viewerLocale()) => formatter(locale, 'time').format(toDate(value));
-/** Grouped digits in the viewer's locale: 12,345 / 12 345 / 12.345. */
+export const formatTime = (value: DateInput, locale = viewerLocale(), timeZone?: string) => formatter(locale, 'time', timeZone).format(toDate(value));
+/** Grouped digits in the viewer's locale: 12,345 / 12 345 / 12.345; `digits` fixes the decimals (4.50). */
 export const formatNumber = (value: number, locale = viewerLocale(), digits?: number) =>
   new Intl.NumberFormat(locale, digits === undefined ? undefined : { maximumFractionDigits: digits, minimumFractionDigits: digits }).format(value);
+
+const KIB = 1024;
+const MIB = 1024 * 1024;
+/**
+ * A file's size for people: "12 KB" below a mebibyte (rounded up, so nothing looks smaller than it is), "3.4 MB" from
+ * there. Binary multiples written KB/MB, as file managers and the JEDEC convention do (common practice).
+ */
+export const formatFileSize = (bytes: number, locale = viewerLocale()) =>
+  bytes < MIB ? `${formatNumber(Math.max(1, Math.ceil(bytes / KIB)), locale)} KB` : `${formatNumber(bytes / MIB, locale, 1)} MB`;

@@ -1,7 +1,7 @@
 // Dates for people: the month always as a word, so 3/4 is never ambiguous. Expected strings are CLDR's patterns as
 // shipped in Node's ICU (checked against the Unicode CLDR date-format charts for en-GB, en-US and de).
 import { describe, expect, test } from 'vitest';
-import { formatDate, formatDateTime, formatLongDate, formatNumber, localeFromHeader, SITE_LOCALE } from '@/lib/format';
+import { formatDate, formatDateTime, formatFileSize, formatLongDate, formatNumber, localeFromHeader, SITE_LOCALE } from '@/lib/format';
 
 const aprilThird = '2026-04-03T12:00:00Z';
 
@@ -22,6 +22,29 @@ describe('dates for the viewer', () => {
   test('numbers grouped by the locale (CLDR number symbols)', () => {
     expect(formatNumber(12345.5, 'en-GB', 1)).toBe('12,345.5');
     expect(formatNumber(12345.5, 'de-DE', 1)).toBe('12.345,5');
+    // Fixed decimals, as contrast ratios are written (WCAG 2.2 writes 4.5:1; the report shows two places).
+    expect(formatNumber(4.5, 'en-GB', 2)).toBe('4.50');
+  });
+  test('a time zone fixes the day: 23:30 UTC on 3 April is already 4 April in Auckland (IANA tz: NZDT, UTC+13, until 5 April 2026)', () => {
+    const lateEvening = '2026-04-03T23:30:00Z';
+    expect(formatLongDate(lateEvening, 'en-GB', 'UTC')).toBe('3 April 2026');
+    expect(formatLongDate(lateEvening, 'en-GB', 'Pacific/Auckland')).toBe('4 April 2026');
+  });
+});
+
+describe('file sizes', () => {
+  // 1 KiB = 1024 bytes and 1 MiB = 1 048 576 bytes (IEC 80000-13 binary prefixes), labelled KB/MB as file managers
+  // do (JEDEC usage, common practice); below 1 MiB rounded up, so a file never looks smaller than it is.
+  test.each([
+    [1, 'en-GB', '1 KB'],
+    [1024, 'en-GB', '1 KB'],
+    [1025, 'en-GB', '2 KB'],
+    [1_048_575, 'en-GB', '1,024 KB'],
+    [1_048_576, 'en-GB', '1.0 MB'],
+    [1_572_864, 'en-GB', '1.5 MB'],
+    [1_572_864, 'de-DE', '1,5 MB'],
+  ])('%d bytes in %s → %s', (bytes, locale, text) => {
+    expect(formatFileSize(bytes, locale)).toBe(text);
   });
 });
 

@@ -2,6 +2,7 @@
 // and a conflict the designer resolves (keep theirs or take the server's). Status: saved/pending/saving/offline/conflict/error.
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { ApiClientError, api } from '@/lib/client/api';
+import { formatTime } from '@/lib/format';
 import { validateGuideline, type GuidelineDoc } from '@/lib/guideline/document';
 import { clearDraft, decideRestore, readDraft, writeDraft } from '@/lib/guideline/draft';
 import { summarize, type DocSummary } from '@/lib/guideline/outline';
@@ -221,7 +222,7 @@ export function useAutosave({ brandId, initialRevision, initialDoc, delayMs = 80
 export function statusText(state: SaveState): string {
   switch (state.status) {
     case 'saved':
-      return state.savedAt ? `All changes saved at ${new Date(state.savedAt).toLocaleTimeString(undefined, { hour: '2-digit', minute: '2-digit' })}` : 'All changes saved';
+      return state.savedAt ? `All changes saved at ${formatTime(state.savedAt)}` : 'All changes saved';
     case 'pending':
       return state.message ?? 'Unsaved changes…';
     case 'saving':

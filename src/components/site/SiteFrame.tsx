@@ -2,6 +2,7 @@
 // Plumbline recedes to the footer. The chrome (header, contents, footer) sets its text in our own inks, so it
 // stays readable whatever text colour the brand chose for its pages. Rendered to a string on the server, by
 // the Astro layout and by the cached page path alike.
+import { formatLongDate, SITE_LOCALE } from '@/lib/format';
 import type { OutlineEntry } from '@/lib/guideline/outline';
 import { brandStyle, fontFaceCss, markLogo, primaryLogo } from '@/lib/guideline/identity';
 import type { Identity } from '@/lib/identity/types';
@@ -53,7 +54,7 @@ export function SiteFrame({ identity, slug, version, latest, outline, isEditor, 
   const unlicensed = identity.typefaces.filter((f) => !f.licence.confirmed);
   const logo = primaryLogo(identity);
   const icon = markLogo(identity) ?? logo;
-  const date = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric' }).format(new Date(version.publishedAt));
+  const date = formatLongDate(version.publishedAt, SITE_LOCALE);
   const base = `/b/${slug}`;
   const pdf = `${versionPath(slug, version.number)}/guideline.pdf`;
   return (

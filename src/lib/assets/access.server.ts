@@ -3,6 +3,7 @@ import { Asset, Brand } from '@db/models';
 import { authorizeBrand, type Caller } from '@/lib/auth/access.server';
 import { can } from '@/lib/auth/policy';
 import type { BrandRole } from '@/lib/auth/roles';
+import { AppError } from '@/lib/errors';
 import { ApiError } from '@/lib/http/api';
 
 export interface AssetReader {
@@ -25,7 +26,7 @@ export async function authorizeAssetRead(locals: App.Locals, brandId: string): P
       return { brand, caller, role, shareLinkId: null, approvedOnly: !can(role, 'asset.readDraft') };
     } catch (err) {
       // Signed in but not on this brand (or not yet verified): a share link for it still counts.
-      if (!(grant && err instanceof ApiError && (err.status === 404 || err.code === 'email_unverified'))) throw err;
+      if (!(grant && err instanceof AppError && (err.status === 404 || err.code === 'email_unverified'))) throw err;
     }
   }
   if (!grant) throw new ApiError(401, 'unauthenticated', 'Sign in to continue.');

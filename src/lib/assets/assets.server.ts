@@ -9,7 +9,9 @@ import type { Brand } from '@db/models';
 import { audit } from '@/lib/audit.server';
 import type { Caller } from '@/lib/auth/access.server';
 import { sequelize } from '@/lib/db.server';
+import { AppError } from '@/lib/errors';
 import { ApiError, notFound } from '@/lib/http/api';
+import { log } from '@/lib/log.server';
 import { loadIdentity } from '@/lib/identity/identity.server';
 import { cleanName } from '@/lib/safe/values';
 import { LogoError } from '@/lib/logo/errors';
@@ -20,7 +22,7 @@ import type { AssetReader } from './access.server';
 import { inspectUpload, UploadRejection } from './inspect.server';
 import { canMoveState, FORMAT_INFO, PREVIEW_MAX_WIDTH, renditionFilename, STANDARD_RENDITIONS, VECTOR_PRINT_RENDITIONS, type AssetKind, type AssetState, type RenditionParams, type RenditionQuery } from './kinds';
 import { cachedRendition, renditionKey, type Rendition } from './render.server';
-import { checkRenditionSize, RenditionError, resolveRendition } from './renditions';
+import { checkRenditionSize, resolveRendition } from './renditions';
 import { usageNote } from './usage';
 
 export interface AssetView {
@@ -225,14 +227,9 @@ export async function deleteAsset(caller: Caller, brand: Brand, assetId: string)
 
 // ---------------------------------------------------------------- files and renditions
 
-/** Resolve a request for an asset, mapping refusals to 400s. */
+/** Resolve a request for an asset; a refusal is a RenditionError (400, or 422 over a limit). */
 export function renditionParams(asset: Asset, query: RenditionQuery): RenditionParams {
-  try {
-    return resolveRendition(query, asset);
-  } catch (err) {
-    if (err instanceof RenditionError) throw new ApiError(err.status, err.code, err.message);
-    throw err;
-  }
+  return resolveRendition(query, asset);
 }
 
 // ---------------------------------------------------------------- limits on what a caller can make us draw
@@ -331,9 +328,8 @@ export async function renditionOf(asset: Asset, params: RenditionParams, request
       },
     );
   } catch (err) {
-    if (err instanceof RenditionError) throw new ApiError(err.status, err.code, err.message);
     // A stored SVG that today's upload checks refuse (e.g. an embedded image over the pixel cap) is not drawn.
-    if (err instanceof LogoError) throw new ApiError(422, err.code, err.message);
+    if (err instanceof LogoError) throw new LogoError(err.code, err.message, 422);
     throw err;
   }
 }
@@ -435,7 +431,7 @@ export async function bundle(reader: AssetReader, request: { assetIds?: string[]
         made = await renditionOf(asset, params);
       } catch (err) {
         // Over a pixel cap (a very tall or wide logo): the bundle goes without that file; the original is in it.
-        if (err instanceof ApiError && err.status === 422) continue;
+        if (err instanceof AppError && err.status === 422) continue;
         throw err;
       }
       plan.push({ path: `${folder}/${item.folder}/${renditionFilename(brand.slug, asset.name, params, asset.format)}`, source: async () => made.body, size: made.body.length, asset });
@@ -459,7 +455,7 @@ export async function bundle(reader: AssetReader, request: { assetIds?: string[]
       for (const entry of plan) archive.append(await entry.source(), { name: entry.path });
       await archive.finalize();
     } catch (err) {
-      console.error('[assets] bundle failed', err);
+      log.error({ err }, 'assets: bundle failed');
       archive.destroy(err as Error);
     }
   })();

@@ -5,15 +5,14 @@ import sharp from 'sharp';
 import { drawnBounds } from '@/lib/logo/bounds.server';
 import type { Box } from '@/lib/logo/geometry';
 import { sanitizeSvg } from '@/lib/logo/sanitize';
+import { AppError } from '@/lib/errors';
 import { fontMetrics } from '@/lib/type/metrics';
 import { EXTENSIONS, FORMAT_INFO, MAX_ASSET_BYTES, MAX_IMAGE_PIXELS, type AssetFormat, type AssetKind } from './kinds';
 
-export class UploadRejection extends Error {
-  constructor(
-    readonly code: string,
-    message: string,
-  ) {
-    super(message);
+/** A file refused with its reason; the upload route lists each one and answers 400 when none was accepted. */
+export class UploadRejection extends AppError {
+  constructor(code: string, message: string) {
+    super(code, message, { status: 400 });
   }
 }
 

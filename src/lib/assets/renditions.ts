@@ -1,15 +1,12 @@
 // Turns a file request (format, width, preset, variant…) into one fully resolved rendition, or a plain-worded refusal.
 import { parseColor } from '@/lib/color/parse';
+import { AppError } from '@/lib/errors';
 import { FAVICON_SIZES, MAX_RENDITION_PIXELS, MAX_RENDITION_SIDE, type AssetFormat, type AssetKind, type RenditionParams, type RenditionQuery } from './kinds';
 
 /** A refused rendition request; 400 for a request that makes no sense, 422 for one over a limit. */
-export class RenditionError extends Error {
-  constructor(
-    readonly code: string,
-    message: string,
-    readonly status = 400,
-  ) {
-    super(message);
+export class RenditionError extends AppError {
+  constructor(code: string, message: string, status = 400) {
+    super(code, message, { status });
   }
 }
 

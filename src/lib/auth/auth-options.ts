@@ -10,6 +10,10 @@ export interface AuthSettings {
   signInLimit: number;
   /** Mails the link that proves an address (the server passes our mail module; scripts that only migrate or seed do not). */
   sendVerificationEmail?: (to: { email: string; name: string }, url: string) => Promise<void>;
+  /** Told when an idle connection is dropped (the server logs it; scripts that only migrate or seed end first). */
+  onPoolError?: (err: Error) => void;
+  /** Where better-auth's own messages go (the server's logger); its coloured console lines otherwise. */
+  log?: NonNullable<BetterAuthOptions['logger']>['log'];
 }
 
 /** The header our auth route fills from the socket address, so the limiter keys on the real client. */
@@ -26,7 +30,7 @@ export function authOptions(settings: AuthSettings): BetterAuthOptions {
   const secure = settings.siteUrl.startsWith('https://');
   const pool = new pg.Pool({ connectionString: settings.databaseUrl, max: 5 });
   // An idle connection dropped by the server (restart, shutdown) must not take the process down.
-  pool.on('error', (err) => console.error('[auth] database connection lost:', err.message));
+  pool.on('error', (err) => settings.onPoolError?.(err));
   return {
     appName: 'Plumbline',
     baseURL: settings.siteUrl,
@@ -34,6 +38,7 @@ export function authOptions(settings: AuthSettings): BetterAuthOptions {
     secret: settings.secret,
     trustedOrigins: [settings.siteUrl],
     database: pool,
+    ...(settings.log ? { logger: { log: settings.log } } : {}),
     emailAndPassword: {
       enabled: true,
       minPasswordLength: PASSWORD_MIN,

@@ -1,4 +1,5 @@
 // The one fetch helper on the client: JSON in and out, our error shape turned into a readable Error.
+import { readErrorBody } from '@/lib/errors';
 
 export class ApiClientError extends Error {
   constructor(
@@ -7,8 +8,16 @@ export class ApiClientError extends Error {
     message: string,
     readonly details?: unknown,
     readonly body?: unknown,
+    /** The server's id for a failure on its side; the message quotes it so a person can pass it on. */
+    readonly requestId?: string,
   ) {
-    super(message);
+    super(requestId ? `${message} (Reference: ${requestId})` : message);
+  }
+
+  /** The error an answer of ours (`{error:{code,message,…}}`, parsed or not) stands for. */
+  static from(status: number, body: unknown): ApiClientError {
+    const e = readErrorBody(status, body);
+    return new ApiClientError(status, e.code, e.message, e.details, body, e.requestId);
   }
 }
 
@@ -33,10 +42,6 @@ export async function api<T>(path: string, init: { method?: string; body?: unkno
   } catch {
     // Not JSON: fall through to a generic message.
   }
-  if (!response.ok) {
-    const err = (body as { error?: { code?: string; message?: string; details?: unknown }; message?: string; code?: string }) ?? {};
-    const message = err.error?.message ?? err.message ?? `The server answered ${response.status}.`;
-    throw new ApiClientError(response.status, err.error?.code ?? err.code ?? 'http_error', message, err.error?.details, body);
-  }
+  if (!response.ok) throw ApiClientError.from(response.status, body);
   return body as T;
 }

@@ -1,12 +1,11 @@
+import { AppError } from '@/lib/errors';
+
 /** Error codes the colour library reports. */
 export type ColorErrorCode = 'color_unparsed' | 'invalid_input';
 
-/** A typed, plain-worded colour error that callers can map to a response. */
-export class ColorError extends Error {
-  readonly code: ColorErrorCode;
+/** A plain-worded colour error: a value that is not a colour, or arguments out of range (400). */
+export class ColorError extends AppError<ColorErrorCode> {
   constructor(code: ColorErrorCode, message: string) {
-    super(message);
-    this.name = 'ColorError';
-    this.code = code;
+    super(code, message, { status: 400 });
   }
 }

@@ -3,6 +3,7 @@ import * as z from 'zod';
 import type { ColorRole, Identity } from '@/lib/identity/types';
 import { COLOR_ROLES } from '@/lib/identity/types';
 import { contrastRatio } from '@/lib/color/contrast';
+import { AppError } from '@/lib/errors';
 import { validateGuideline, type GuidelineDoc } from './document';
 import { newBlockId } from './ids';
 import { colorForRole, colorsInOrder, extremes, logosInOrder, markLogo, primaryLogo } from './identity';
@@ -22,12 +23,13 @@ export const templateSchema = z.strictObject({
 });
 export type GuidelineTemplate = z.output<typeof templateSchema>;
 
-export class TemplateError extends Error {
+/** A starter template of ours that does not hold together: our fault, so a 500 that names where. */
+export class TemplateError extends AppError<'invalid_template'> {
   constructor(
     readonly path: string,
     message: string,
   ) {
-    super(`${path}: ${message}`);
+    super('invalid_template', `${path}: ${message}`, { status: 500 });
   }
 }
 

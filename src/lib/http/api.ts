@@ -2,21 +2,13 @@
 import type { APIContext, APIRoute } from 'astro';
 import busboy from 'busboy';
 import { z } from 'zod';
+import { AppError } from '@/lib/errors';
+import { log } from '@/lib/log.server';
 
-export interface ApiErrorBody {
-  error: { code: string; message: string; details?: unknown };
-}
-
-/** An error that maps to an HTTP status and our JSON error shape. */
-export class ApiError extends Error {
-  constructor(
-    readonly status: number,
-    readonly code: string,
-    message: string,
-    readonly details?: unknown,
-    readonly extra?: Record<string, unknown>,
-  ) {
-    super(message);
+/** The one error class written status first, as routes think of it: `new ApiError(404, 'not_found', '…')`. */
+export class ApiError extends AppError {
+  constructor(status: number, code: string, message: string, details?: unknown, extra?: Record<string, unknown>) {
+    super(code, message, { status, details, extra });
   }
 }
 
@@ -30,11 +22,20 @@ export function json(body: unknown, status = 200, headers: Record<string, string
   });
 }
 
-/** The error shape as a response. */
-export function errorResponse(err: ApiError): Response {
-  const body: ApiErrorBody = { error: { code: err.code, message: err.message } };
-  if (err.details !== undefined) body.error.details = err.details;
-  return json({ ...body, ...err.extra }, err.status);
+/** The error shape as a response; failures on our side (5xx) carry the request id, so a person can quote it. */
+export function errorResponse(err: AppError, requestId?: string): Response {
+  return json(err.toBody(err.status >= 500 ? requestId : undefined), err.status);
+}
+
+/** Any thrown value as our error shape: an AppError answers as itself; anything else is logged and answers 500. */
+export function errorAnswer(err: unknown, context: Pick<APIContext, 'locals'>): Response {
+  const requestId = context.locals.requestId;
+  if (err instanceof AppError) {
+    if (err.status >= 500) log.error({ err, code: err.code }, 'request failed');
+    return errorResponse(err, requestId);
+  }
+  log.error({ err }, 'unexpected failure');
+  return errorResponse(new AppError('internal', 'Something went wrong on our side. Please try again.', { status: 500 }), requestId);
 }
 
 /** Readable details for a zod failure: each problem with its path. */
@@ -109,15 +110,13 @@ export async function readJson<T extends z.ZodType>(request: Request, schema: T,
 
 type Handler = (context: APIContext) => Promise<Response> | Response;
 
-/** Wrap an endpoint so thrown ApiErrors and unexpected failures both answer in our error shape. */
+/** Wrap an endpoint so thrown AppErrors and unexpected failures both answer in our error shape. */
 export function endpoint(handler: Handler): APIRoute {
   return async (context) => {
     try {
       return await handler(context);
     } catch (err) {
-      if (err instanceof ApiError) return errorResponse(err);
-      console.error(`[api] ${context.request.method} ${context.url.pathname}`, err);
-      return errorResponse(new ApiError(500, 'internal', 'Something went wrong on our side. Please try again.'));
+      return errorAnswer(err, context);
     }
   };
 }
@@ -136,7 +135,7 @@ export interface FormLimits {
   /** The most one file may hold; the default is the whole request's cap. */
   maxFileBytes?: number;
   /** The error for a file over maxFileBytes (default: 413 too_large), raised as soon as it is passed. */
-  fileTooLarge?: (filename: string) => ApiError;
+  fileTooLarge?: (filename: string) => AppError;
 }
 
 /**
@@ -188,7 +187,7 @@ export async function readForm(request: Request, maxBytes: number, limits: FormL
     if (oversized) throw fileTooLarge(oversized);
   } catch (err) {
     parser.destroy();
-    if (err instanceof ApiError) throw err;
+    if (err instanceof AppError) throw err;
     throw malformed();
   }
   return form;

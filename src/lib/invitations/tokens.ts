@@ -1,6 +1,7 @@
 // Link tokens for people without an account: 32 random bytes in the link, only the SHA-256 hash stored.
 import { randomBytes } from 'node:crypto';
 import { hashToken } from '@/lib/brands/brands.server';
+import { formatLongDate, SITE_LOCALE } from '@/lib/format';
 
 export { hashToken };
 
@@ -14,4 +15,4 @@ export function newToken(): { token: string; hash: string } {
 export const looksLikeToken = (value: string | undefined): value is string => !!value && /^[A-Za-z0-9_-]{43}$/.test(value);
 
 /** A date as people read it in an e-mail, e.g. "14 December 2026". */
-export const longDate = (d: Date) => d.toLocaleDateString('en-GB', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
+export const longDate = (d: Date) => formatLongDate(d, SITE_LOCALE, 'UTC');

@@ -1,3 +1,5 @@
+import { AppError } from '@/lib/errors';
+
 /** Error codes the logo library reports. */
 export type LogoErrorCode =
   | 'svg_not_svg'
@@ -18,13 +20,10 @@ export interface LogoErrorInfo {
   message: string;
 }
 
-/** A typed, plain-worded logo error that callers can map to a response. */
-export class LogoError extends Error {
-  readonly code: LogoErrorCode;
-  constructor(code: LogoErrorCode, message: string) {
-    super(message);
-    this.name = 'LogoError';
-    this.code = code;
+/** A plain-worded logo error: a file or argument the logo library refuses (400 unless the caller says otherwise). */
+export class LogoError extends AppError<LogoErrorCode> {
+  constructor(code: LogoErrorCode, message: string, status = 400) {
+    super(code, message, { status });
   }
 }
 

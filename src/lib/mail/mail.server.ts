@@ -1,6 +1,7 @@
 // Sending: one nodemailer transport from the astro:env settings; a failed send is reported, never thrown.
 import nodemailer, { type Transporter } from 'nodemailer';
 import { MAIL_CAPTURE_DIR, MAIL_FROM, SITE_URL, SMTP_HOST, SMTP_PASSWORD, SMTP_PORT, SMTP_USER } from 'astro:env/server';
+import { log } from '@/lib/log.server';
 import { renderMail, type TemplateData } from './templates';
 
 let transport: Transporter | null | undefined;
@@ -52,7 +53,7 @@ export async function sendTemplate(to: string, name: string, data: TemplateData,
     });
     return { sent: true };
   } catch (err) {
-    console.error(`[mail] sending "${name}" to ${to} failed`, err);
+    log.error({ err, template: name, to }, 'mail: sending failed');
     return { sent: false, problem: 'The e-mail could not be sent just now. Everything else was saved; try sending it again later.' };
   }
 }

@@ -1,6 +1,7 @@
 // Told when a version is published, so followers can be e-mailed the note and the what-changed summary.
 import { QueryTypes } from 'sequelize';
 import { sequelize } from '@/lib/db.server';
+import { log } from '@/lib/log.server';
 import { sendTemplate, siteLink } from '@/lib/mail/mail.server';
 
 export interface PublishedNotice {
@@ -44,7 +45,7 @@ export async function notifyPublished(notice: PublishedNotice): Promise<{ notifi
       (outcome.sent ? notified : failed).push(f.email);
     }
   } catch (err) {
-    console.error('[notices] publish notices failed', err);
+    log.error({ err }, 'notices: publish notices failed');
   }
   return { notified, failed };
 }

@@ -2,6 +2,8 @@
 import type { APIContext } from 'astro';
 import { simplePage, siteAccess } from './site-access.server';
 import { PAPER_SIZES, versionPdf, type PaperSize } from './pdf.server';
+import { AppError } from '@/lib/errors';
+import { ApiError, errorAnswer, errorResponse } from '@/lib/http/api';
 import { escapeHtml } from '@/lib/safe/escape';
 
 /** Answer GET …/guideline.pdf?size=a4|letter for the version `number` (latest when null). */
@@ -10,14 +12,14 @@ export async function pdfResponse(context: APIContext, number: number | null): P
   if (access instanceof Response) return access;
   const size = (context.url.searchParams.get('size') ?? 'a4').toLowerCase();
   if (!PAPER_SIZES.includes(size as PaperSize)) {
-    return Response.json({ error: { code: 'invalid_input', message: 'Choose a paper size: a4 or letter.' } }, { status: 400 });
+    return errorResponse(new ApiError(400, 'invalid_input', 'Choose a paper size: a4 or letter.'));
   }
   const wantsJson = (context.request.headers.get('accept') ?? '').includes('application/json');
   let result;
   try {
     result = await versionPdf(access.version, size as PaperSize);
   } catch (err) {
-    return Response.json({ error: { code: 'pdf_unavailable', message: (err as Error).message } }, { status: 503 });
+    return errorAnswer(new AppError('pdf_unavailable', (err as Error).message, { status: 503, cause: err }), context);
   }
   if ('pdf' in result) {
     return new Response(new Uint8Array(result.pdf), {

@@ -6,6 +6,8 @@ import PgBoss from 'pg-boss';
 import { ParseSpeeds, PDFArray, PDFDict, PDFDocument, PDFHexString, PDFName, PDFRef, PDFString } from 'pdf-lib';
 import puppeteer, { type Browser } from 'puppeteer-core';
 import { Brand, GuidelineVersion, PdfExport, Studio } from '@db/models';
+import { formatLongDate, SITE_LOCALE } from '@/lib/format';
+import { log } from '@/lib/log.server';
 import { storage } from '@/lib/storage/index.server';
 import { newKey } from '@/lib/storage/storage';
 import { PRINT_COOKIE, printPass } from './print-grant.server';
@@ -106,10 +108,10 @@ export async function printBook(url: string, cookie: { name: string; value: stri
     }, starts.map((p) => p + 1));
     const front = await PDFDocument.load(await page.pdf({ preferCSSPageSize: true, printBackground: true, tagged: false, timeout: 60_000 }), { parseSpeed: ParseSpeeds.Fastest });
     times.push(performance.now());
-    if (blocked.length) console.warn(`[pdf] blocked ${blocked.length} request(s) while printing ${new URL(url).pathname}: ${blocked.slice(0, 3).join(', ')}`);
+    if (blocked.length) log.warn({ path: new URL(url).pathname, blocked: blocked.length, first: blocked.slice(0, 3) }, 'pdf: requests blocked while printing');
     const bound = Buffer.from(await bindBook(book, front, starts, meta));
     const ms = (a: number, b: number) => Math.round(b - a);
-    console.log(`[pdf] ${new URL(url).pathname}: load ${ms(t0, times[0])} ms, body ${ms(times[0], times[1])} ms, front ${ms(times[1], times[2])} ms, bind ${ms(times[2], performance.now())} ms`);
+    log.info({ path: new URL(url).pathname, loadMs: ms(t0, times[0]), bodyMs: ms(times[0], times[1]), frontMs: ms(times[1], times[2]), bindMs: ms(times[2], performance.now()) }, 'pdf: printed');
     return bound;
   } finally {
     await page.close();
@@ -182,7 +184,7 @@ function queue(): Promise<PgBoss> {
     // Chromium starts while pg-boss does, so the first PDF does not wait for both in turn.
     Promise.resolve().then(warmBrowser).catch(() => undefined);
     const b = new PgBoss({ connectionString: DATABASE_URL, schema: 'pgboss', max: 3 });
-    b.on('error', (err) => console.error('[pdf] queue error', err));
+    b.on('error', (err) => log.error({ err }, 'pdf: queue error'));
     await b.start();
     await b.createQueue(QUEUE);
     await b.work<{ exportId: string }>(QUEUE, { batchSize: 1, pollingIntervalSeconds: 0.5 }, async ([job]) => renderExport(job.data.exportId));
@@ -193,7 +195,7 @@ function queue(): Promise<PgBoss> {
 
 /** Title, author (the studio), subject and keywords of a version's PDF. */
 export function bookMeta(brandName: string, studioName: string, number: number, published: Date): BookMeta {
-  const date = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric' }).format(published);
+  const date = formatLongDate(published, SITE_LOCALE);
   return {
     title: `${brandName} brand guidelines, version ${number}`,
     author: studioName,
@@ -220,7 +222,7 @@ async function renderExport(exportId: string): Promise<void> {
     await storage.put(key, pdf, 'application/pdf');
     await job.update({ state: 'done', progress: 100, storageKey: key, error: null });
   } catch (err) {
-    console.error('[pdf] render failed', err);
+    log.error({ err, exportId }, 'pdf: render failed');
     await job.update({ state: 'failed', error: String((err as Error).message).slice(0, 500) });
   }
 }

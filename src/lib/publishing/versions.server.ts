@@ -10,6 +10,7 @@ import { ApiError } from '@/lib/http/api';
 import { documentRefs, withStoredAttrs } from '@/blocks';
 import type { GuidelineDoc } from '@/lib/guideline/document';
 import { loadIdentity } from '@/lib/identity/identity.server';
+import { log } from '@/lib/log.server';
 import type { Identity } from '@/lib/identity/types';
 import { notifyPublished } from '@/lib/notices/publish.server';
 import { isAssetRef } from '@/lib/safe/values';
@@ -114,7 +115,7 @@ export async function publishVersion(caller: Caller, brand: Brand, note: string)
     note,
     publishedBy: { id: caller.id, name: caller.name },
     summary,
-  }).catch((err) => console.error('[publish] notice failed', err));
+  }).catch((err) => log.error({ err }, 'publish: notice failed'));
   return { number: version.number, publishedAt: version.publishedAt.toISOString(), note, author: { id: caller.id, name: caller.name }, draftRevision: version.draftRevision };
 }
 

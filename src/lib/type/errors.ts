@@ -1,13 +1,12 @@
+import { AppError } from '@/lib/errors';
+
 /** Error codes the typography library reports. */
 export type TypographyErrorCode = 'font_unreadable' | 'invalid_input';
 
-/** A typed, plain-worded typography error that callers can map to a response. */
-export class TypographyError extends Error {
-  readonly code: TypographyErrorCode;
+/** A plain-worded typography error: a font that cannot be read, or arguments out of range (400). */
+export class TypographyError extends AppError<TypographyErrorCode> {
   constructor(code: TypographyErrorCode, message: string) {
-    super(message);
-    this.name = 'TypographyError';
-    this.code = code;
+    super(code, message, { status: 400 });
   }
 }
 

@@ -2,6 +2,7 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useRef, useState, type DragEvent } from 'react';
 import { api } from '@/lib/client/api';
+import { formatFileSize, SITE_LOCALE } from '@/lib/format';
 import { ACCEPT_ATTRIBUTE, ASSET_KINDS, STATE_LABELS, type AssetKind, type AssetState } from '@/lib/assets/kinds';
 import { QueryRoot } from '@/components/app/QueryRoot';
 import { DownloadLog } from './DownloadLog';
@@ -43,7 +44,8 @@ const STATE_BADGE: Record<AssetState, string> = {
   retired: 'bg-paper text-ink-faint line-through',
 };
 const KIND_LABEL: Record<AssetKind, string> = { logo: 'Logo', image: 'Image', document: 'Document', font: 'Font', archive: 'Archive' };
-const size = (bytes: number) => (bytes < 1024 * 1024 ? `${Math.max(1, Math.round(bytes / 1024))} KB` : `${(bytes / 1024 / 1024).toFixed(1)} MB`);
+// The site's locale, so the server's render and the browser's agree.
+const size = (bytes: number) => formatFileSize(bytes, SITE_LOCALE);
 
 function Shelf(props: ShelfProps) {
   const { brandId, canUpload, canApprove, seesDrafts } = props;

@@ -9,8 +9,7 @@ export async function downloadBundle(brandId: string, body: { assetIds?: string[
     credentials: 'same-origin',
   });
   if (!response.ok || !response.body) {
-    const err = (await response.json().catch(() => ({}))) as { error?: { code: string; message: string } };
-    throw new ApiClientError(response.status, err.error?.code ?? 'http_error', err.error?.message ?? `The server answered ${response.status}.`);
+    throw ApiClientError.from(response.status, await response.json().catch(() => undefined));
   }
   const estimate = Number(response.headers.get('x-bundle-estimate-bytes') ?? 0);
   const name = /filename="([^"]+)"/.exec(response.headers.get('content-disposition') ?? '')?.[1] ?? 'assets.zip';

@@ -26,7 +26,7 @@ export function uploadFile(path: string, file: File, onProgress: (fraction: numb
         // Not JSON: the generic message below.
       }
       if (xhr.status >= 200 && xhr.status < 300) return resolve(body as UploadReply);
-      reject(new ApiClientError(xhr.status, body.error?.code ?? 'http_error', body.error?.message ?? `The server answered ${xhr.status}.`, undefined, body));
+      reject(ApiClientError.from(xhr.status, body));
     };
     xhr.send(form);
   });

@@ -8,8 +8,12 @@ import { WCAG_THRESHOLDS } from '@/lib/color/contrast';
 import { nearestPassing } from '@/lib/color/nearest';
 import { NEAR_DUPLICATE_DELTA_E, type PalettePair, type PaletteReport } from '@/lib/color/palette';
 import { COLOR_VISION_KINDS, type ColorVisionKind } from '@/lib/color/vision';
+import { formatNumber, SITE_LOCALE } from '@/lib/format';
 import type { IdentityColor } from '@/lib/identity/types';
 import { Caution, IdentityRoot, inkOn, LoadState, messageOf, Notice, reportKey, useIdentity, useRefreshIdentity } from './shared';
+
+/** Ratios and ΔE with fixed decimals, in the site's locale so the server's render and the browser's agree. */
+const decimals = (value: number, digits: number) => formatNumber(value, SITE_LOCALE, digits);
 
 const LEVELS: { key: 'aa' | 'aaLarge' | 'aaa' | 'nonText'; label: string; need: number }[] = [
   { key: 'aa', label: 'AA', need: WCAG_THRESHOLDS.aa },
@@ -46,7 +50,7 @@ function PairCell({ pair, fg, bg, selected, onPick }: { pair: PalettePair; fg: I
       </div>
       <div className="px-2 py-2">
         <p className="font-mono text-base font-semibold text-ink" data-ratio>
-          {pair.ratio.toFixed(2)}<span className="text-xs font-normal text-ink-soft">:1</span>
+          {decimals(pair.ratio, 2)}<span className="text-xs font-normal text-ink-soft">:1</span>
         </p>
         <ul className="mt-1 space-y-0.5 text-xs">
           {LEVELS.map((l) => (
@@ -102,7 +106,7 @@ function PassingShade({ brandId, fg, bg, canEdit, onClose }: { brandId: string; 
           <div className="text-sm">
             <p>
               Now <span className="font-mono">{fg.hex}</span> · {' '}
-              <strong>suggested <span className="font-mono">{shade.hex}</span></strong> at <span className="font-mono">{shade.ratio.toFixed(2)}:1</span>
+              <strong>suggested <span className="font-mono">{shade.hex}</span></strong> at <span className="font-mono">{decimals(shade.ratio, 2)}:1</span>
             </p>
             <p className="text-ink-soft">Same hue, lightness moved in OKLCH until the ratio is reached.</p>
           </div>
@@ -214,7 +218,7 @@ function Report({ brandId, canEdit }: { brandId: string; canEdit: boolean }) {
                     <span className="h-7 w-10" style={{ background: b.hex }} />
                   </span>
                   <span>
-                    <strong>{a.name}</strong> and <strong>{b.name}</strong> differ by only ΔE2000 {d.deltaE2000.toFixed(1)} (below {NEAR_DUPLICATE_DELTA_E}): readers may take
+                    <strong>{a.name}</strong> and <strong>{b.name}</strong> differ by only ΔE2000 {decimals(d.deltaE2000, 1)} (below {NEAR_DUPLICATE_DELTA_E}): readers may take
                     them for the same colour. Merge them, or move one further apart.
                   </span>
                 </li>

@@ -64,14 +64,14 @@ export function uploadWithProgress<T>(path: string, form: FormData, onProgress: 
     xhr.upload.onprogress = (e) => e.lengthComputable && onProgress(e.loaded / e.total);
     xhr.onerror = () => reject(new ApiClientError(0, 'offline', 'Plumbline could not be reached. Check your connection and try again.'));
     xhr.onload = () => {
-      let body: { error?: { code?: string; message?: string } } | undefined;
+      let body: unknown;
       try {
         body = xhr.responseText ? JSON.parse(xhr.responseText) : undefined;
       } catch {
         body = undefined;
       }
       if (xhr.status >= 200 && xhr.status < 300) resolve(body as T);
-      else reject(new ApiClientError(xhr.status, body?.error?.code ?? 'http_error', body?.error?.message ?? `The server answered ${xhr.status}.`));
+      else reject(ApiClientError.from(xhr.status, body));
     };
     xhr.send(form);
   });

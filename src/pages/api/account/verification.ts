@@ -3,6 +3,7 @@ import { auth } from '@/lib/auth/auth.server';
 import { isVerified, requireCaller } from '@/lib/auth/access.server';
 import { ApiError, endpoint, json, methodNotAllowed, readJson } from '@/lib/http/api';
 import { safeNext } from '@/lib/http/redirect';
+import { log } from '@/lib/log.server';
 import { allowVerificationResend } from '@/lib/mail/send-limit.server';
 
 const resendBody = z.strictObject({
@@ -25,7 +26,7 @@ export const POST = endpoint(async ({ locals, request }) => {
   try {
     await auth.api.sendVerificationEmail({ body: { email: caller.email, callbackURL: safeNext(body.next) }, headers: request.headers });
   } catch (err) {
-    console.error('[auth] a new address link could not be made', err);
+    log.error({ err }, 'auth: a new address link could not be made');
     throw new ApiError(502, 'mail_failed', 'The link could not be sent just now. Try again in a minute.');
   }
   return json({ sent: true, email: caller.email });

@@ -2,7 +2,8 @@
 import type { APIRoute } from 'astro';
 import { CLIENT_IP_HEADER } from '@/lib/auth/auth-options';
 import { auth } from '@/lib/auth/auth.server';
-import { ApiError, errorResponse, readBody } from '@/lib/http/api';
+import { AppError } from '@/lib/errors';
+import { errorResponse, readBody } from '@/lib/http/api';
 import { requestClientAddress } from '@/lib/http/client-address.server';
 
 /** Sign-in, sign-up and the rest carry a few fields; anything bigger is refused as it streams in. */
@@ -18,7 +19,7 @@ export const ALL: APIRoute = async (context) => {
     try {
       init.body = new Uint8Array(await readBody(request, MAX_AUTH_BODY_BYTES));
     } catch (err) {
-      if (err instanceof ApiError) return errorResponse(err);
+      if (err instanceof AppError) return errorResponse(err);
       throw err;
     }
     headers.delete('content-length');

@@ -1,5 +1,6 @@
 import type { APIRoute } from 'astro';
 import { PRINT_WEIGHTS } from '@/lib/guideline/identity';
+import { log } from '@/lib/log.server';
 import { oneColourLogo, type OneColourVariant } from '@/lib/logo/knockout.server';
 import { siteAccess } from '@/lib/publishing/site-access.server';
 import { versionVariantFileId } from '@/lib/publishing/versions.server';
@@ -53,7 +54,7 @@ export const GET: APIRoute = async (context) => {
       body = await staticInstance(body, weight);
       contentType = 'font/ttf';
     } catch (err) {
-      console.warn('[files] no static instance of', file.key, (err as Error).message);
+      log.warn({ key: file.key, problem: (err as Error).message }, 'files: no static instance');
     }
   }
   return new Response(new Uint8Array(body), {
