@@ -11,7 +11,7 @@ import { LogoError } from '@/lib/logo/errors';
 import type { Box } from '@/lib/logo/geometry';
 import { sanitizeSvg } from '@/lib/logo/sanitize';
 import { fontMetrics, type FontMetrics } from '@/lib/type/metrics';
-import { FORMAT_TYPES, formatList, RASTER_FORMATS, UPLOAD_RULES, type UploadFormat, type UploadKind, type UploadRule } from './rules';
+import { FORMAT_TYPES, formatList, RASTER_FORMATS, UPLOAD_RULES, type UploadFormat, type RenamableCode, type UploadKind, type UploadRule } from './rules';
 
 /** An upload refused: the code and message the API answers with (413 for size, 400 otherwise). */
 export class UploadRejection extends ApiError {
@@ -75,8 +75,8 @@ const MB = (n: number) => `${Math.round(n / 1024 / 1024)} MB`;
 const extensionOf = (filename: string) => /\.([a-z0-9]{1,8})$/i.exec(filename)?.[1]?.toLowerCase() ?? null;
 
 /** Refuse with the code this kind of upload answers with. */
-function rejectAs(rule: UploadRule, code: 'unsupported_file' | 'too_many_pixels' | (string & {}), message: string): never {
-  throw new UploadRejection((rule.codes as Record<string, string> | undefined)?.[code] ?? code, message);
+function rejectAs(rule: UploadRule, code: RenamableCode, message: string): never {
+  throw new UploadRejection(rule.codes?.[code] ?? code, message);
 }
 const reject = (code: string, message: string): never => {
   throw new UploadRejection(code, message);
@@ -151,14 +151,14 @@ async function inspectImage(rule: UploadRule, format: UploadFormat, bytes: Buffe
     if (/pixel limit/i.test(String((err as Error).message))) {
       return rejectAs(rule, 'too_many_pixels', `The image declares more than ${rule.maxPixels / 1e6} million pixels; Plumbline refuses images that large. Export a smaller version.`);
     }
-    return reject('unreadable_image', `The ${FORMAT_TYPES[format].label} could not be read to the end: it may be truncated or damaged. Export it again.`);
+    return rejectAs(rule, 'unreadable_image', `The ${FORMAT_TYPES[format].label} could not be read to the end: it may be truncated or damaged. Export it again.`);
   }
 }
 
 /** Inspect one uploaded file for the kind of upload named in `as`; resolves to what will be stored, or throws an UploadRejection. */
 export async function inspectUpload(bytes: Buffer, options: InspectOptions): Promise<InspectedUpload> {
   const rule: UploadRule = UPLOAD_RULES[options.as];
-  if (bytes.length === 0) reject('empty_file', 'The file is empty (0 bytes).');
+  if (bytes.length === 0) rejectAs(rule, 'empty_file', 'The file is empty (0 bytes).');
   if (bytes.length > rule.maxBytes) reject('too_large', `The file is ${MB(bytes.length)}; ${rule.noun.toLowerCase()} can be at most ${MB(rule.maxBytes)}.`);
 
   const { format, detected } = await sniffFormat(bytes);

@@ -27,6 +27,9 @@ export const FONT_FORMATS = ['woff2', 'woff', 'ttf', 'otf'] as const;
 
 const MB = 1024 * 1024;
 
+/** Inspector codes a kind of upload may answer under an older name of its own. */
+export type RenamableCode = 'empty_file' | 'unsupported_file' | 'unreadable_image' | 'too_many_pixels';
+
 export interface UploadRule {
   /** What this upload is, for messages ("A logo must be …"). */
   noun: string;
@@ -35,7 +38,7 @@ export interface UploadRule {
   /** Images above this many pixels are refused before they are decoded (decompression bombs). */
   maxPixels: number;
   /** Codes this kind has always answered with in place of the inspector's own (kept stable for the API). */
-  codes?: Partial<Record<'unsupported_file' | 'too_many_pixels', string>>;
+  codes?: Partial<Record<RenamableCode, string>>;
   /** Added to the refusal of a format this kind does not take. */
   hint?: string;
 }
@@ -53,7 +56,7 @@ export const UPLOAD_RULES = {
     accept: ['jpeg', 'png', 'webp', 'gif', 'avif'],
     maxBytes: 15 * MB,
     maxPixels: 50_000_000,
-    codes: { unsupported_file: 'not_an_image', too_many_pixels: 'too_large' },
+    codes: { empty_file: 'not_an_image', unsupported_file: 'not_an_image', unreadable_image: 'not_an_image', too_many_pixels: 'too_large' },
     hint: 'Vector files belong in the identity or the asset shelf.',
   },
 } as const satisfies Record<string, UploadRule>;
