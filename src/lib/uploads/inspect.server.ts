@@ -92,7 +92,7 @@ function asText(bytes: Buffer): string | null {
 }
 
 /** What the bytes are: file-type's answer, else an SVG by its text, else a font by its tag; null when none of ours. */
-export async function sniffFormat(bytes: Buffer): Promise<{ format: UploadFormat | null; detected: { ext: string; mime: string } | null }> {
+async function sniffFormat(bytes: Buffer): Promise<{ format: UploadFormat | null; detected: { ext: string; mime: string } | null }> {
   const detected = (await fileTypeFromBuffer(bytes)) ?? null;
   if (detected && DETECTED[detected.ext]) return { format: DETECTED[detected.ext], detected };
   if (detected && detected.ext !== 'xml') return { format: null, detected };
