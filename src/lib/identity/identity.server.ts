@@ -11,7 +11,7 @@ import { sequelize } from '@/lib/db.server';
 import { ApiError } from '@/lib/http/api';
 import { clearSpace, minimumSize } from '@/lib/logo';
 import { oneColourLogo, type OneColourVariant } from '@/lib/logo/knockout.server';
-import { drawnBounds } from '@/lib/logo/bounds.server';
+import { drawnBounds, type DrawnBounds } from '@/lib/logo/bounds.server';
 import { thinnestStroke } from '@/lib/logo/stroke.server';
 import type { Box } from '@/lib/logo/geometry';
 import { newKey } from '@/lib/storage/storage';
@@ -146,18 +146,20 @@ export async function reorder(caller: Caller, brand: Brand, kind: 'color' | 'log
 
 export const MAX_LOGO_BYTES = UPLOAD_RULES.logo.maxBytes;
 
-/** Read an uploaded logo through the one upload inspector: SVG (cleaned) or PNG, and what it draws. */
-async function readLogoFile(bytes: Buffer, filename: string): Promise<{ format: 'svg' | 'png'; stored: Buffer; canvas: Box; bounds: Box }> {
+/** Read an uploaded logo through the one upload inspector: SVG (cleaned and measured) or PNG. */
+async function readLogoFile(bytes: Buffer, filename: string): Promise<{ format: 'svg' | 'png'; stored: Buffer; canvas: Box; drawn: DrawnBounds | null }> {
   const logo = await inspectUpload(bytes, { as: 'logo', filename });
-  const format = logo.format as 'svg' | 'png';
-  let drawn = logo.drawn;
+  const canvas = logo.viewBox ?? { x: 0, y: 0, width: logo.width!, height: logo.height! };
+  return { format: logo.format as 'svg' | 'png', stored: logo.stored, canvas, drawn: logo.drawn };
+}
+
+/** What a logo draws, in its own units: the inspector measured an SVG already, a PNG is measured here. */
+async function logoBounds(logo: { stored: Buffer; drawn: DrawnBounds | null }): Promise<Box> {
   try {
-    drawn ??= await drawnBounds(logo.stored);
+    return (logo.drawn ?? (await drawnBounds(logo.stored))).box;
   } catch (err) {
     throw new ApiError(400, (err as { code?: string }).code ?? 'logo_unreadable', (err as Error).message);
   }
-  const canvas = logo.viewBox ?? { x: 0, y: 0, width: logo.width!, height: logo.height! };
-  return { format, stored: logo.stored, canvas, bounds: drawn.box };
 }
 
 /** The logo's default clear-space unit: a quarter of its drawn height (common practice starts from a letter height). */
@@ -169,11 +171,13 @@ export async function uploadLogo(
   file: File,
   fields: { name?: string; variant: LogoVariant },
 ): Promise<{ logo: IdentityLogo; duplicate: boolean }> {
-  const { format, stored, canvas, bounds } = await readLogoFile(Buffer.from(await file.arrayBuffer()), file.name);
+  const read = await readLogoFile(Buffer.from(await file.arrayBuffer()), file.name);
+  const { format, stored, canvas } = read;
   const contentHash = createHash('sha256').update(stored).digest('hex');
   const existing = await BrandLogo.findOne({ where: { brandId: brand.id, contentHash } });
   if (existing) return { logo: logoView(existing), duplicate: true };
 
+  const bounds = await logoBounds(read);
   const stroke = await thinnestStroke(stored, canvas, format === 'svg');
   const key = newKey(brand.id, 'logo', format);
   await storage.put(key, stored, format === 'svg' ? 'image/svg+xml' : 'image/png');
