@@ -5,7 +5,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import sharp from 'sharp';
 import { encode as encodeIco } from 'sharp-ico';
-import { inspectUpload } from '@/lib/assets/inspect.server';
+import { inspectUpload } from '@/lib/uploads/inspect.server';
 import { STANDARD_RENDITIONS } from '@/lib/assets/kinds';
 import { cachedRendition } from '@/lib/assets/render.server';
 import { resolveRendition } from '@/lib/assets/renditions';
@@ -66,8 +66,8 @@ async function plainLoop(svg: string, bounds: { x: number; y: number; width: num
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
 export default async function bench(): Promise<void> {
-  const logo = await inspectUpload('bench-lockup.svg', Buffer.from(LOGO));
-  const bounds = logo.drawnBounds!;
+  const logo = await inspectUpload(Buffer.from(LOGO), { as: 'shelf', filename: 'bench-lockup.svg' });
+  const bounds = logo.drawn!.fraction;
   const jobs = STANDARD_RENDITIONS.map((r) => resolveRendition(r.query, { kind: 'logo', format: 'svg' }));
   sharp.cache(false); // neither side may profit from libvips' operation cache
   await plainLoop(logo.stored.toString(), bounds); // warm-up: load libvips, fonts, codecs

@@ -4,7 +4,7 @@
 // real domain functions, not built by hand, so the test sees the codes callers get.
 import { readFileSync } from 'node:fs';
 import { describe, expect, test } from 'vitest';
-import { inspectUpload, UploadRejection } from '@/lib/assets/inspect.server';
+import { inspectUpload, UploadRejection } from '@/lib/uploads/inspect.server';
 import { checkRenditionSize, RenditionError, resolveRendition } from '@/lib/assets/renditions';
 import { ApiClientError } from '@/lib/client/api';
 import { ColorError, toColor } from '@/lib/color';
@@ -52,7 +52,7 @@ describe('each error class answers with its status and code', () => {
       422,
       'rendition_too_large',
     ],
-    ['an empty upload', () => inspectUpload('logo.svg', Buffer.alloc(0)), UploadRejection, 400, 'empty_file'],
+    ['an empty upload', () => inspectUpload(Buffer.alloc(0), { as: 'shelf', filename: 'logo.svg' }), UploadRejection, 400, 'empty_file'],
     [
       'a starter template with an unknown placeholder',
       () => instantiateTemplate({ name: 'x', description: '', doc: { type: 'doc', content: [{ type: 'clearSpace', attrs: { logoId: '$favourite' } }] } }, identity),

@@ -14,13 +14,15 @@ import { ApiError, notFound } from '@/lib/http/api';
 import { log } from '@/lib/log.server';
 import { loadIdentity } from '@/lib/identity/identity.server';
 import { cleanName } from '@/lib/safe/values';
+import { drawnBounds } from '@/lib/logo/bounds.server';
 import { LogoError } from '@/lib/logo/errors';
+import type { Box } from '@/lib/logo/geometry';
 import { consumeAttempt } from '@/lib/publishing/rate-limit.server';
 import { newKey } from '@/lib/storage/storage';
 import { storage } from '@/lib/storage/index.server';
+import { inspectUpload, UploadRejection } from '@/lib/uploads/inspect.server';
 import type { AssetReader } from './access.server';
-import { inspectUpload, UploadRejection } from './inspect.server';
-import { canMoveState, FORMAT_INFO, PREVIEW_MAX_WIDTH, renditionFilename, STANDARD_RENDITIONS, VECTOR_PRINT_RENDITIONS, type AssetKind, type AssetState, type RenditionParams, type RenditionQuery } from './kinds';
+import { canMoveState, FORMAT_INFO, PREVIEW_MAX_WIDTH, renditionFilename, STANDARD_RENDITIONS, VECTOR_PRINT_RENDITIONS, type AssetFormat, type AssetKind, type AssetState, type RenditionParams, type RenditionQuery } from './kinds';
 import { cachedRendition, renditionKey, type Rendition } from './render.server';
 import { checkRenditionSize, resolveRendition } from './renditions';
 import { usageNote } from './usage';
@@ -95,9 +97,25 @@ export interface UploadOutcome {
   rejected: { filename: string; code: string; message: string }[];
 }
 
+/** The kind a shelf file is filed under: drawings and images as the uploader says (logo or image), the rest by format. */
+function shelfKind(format: AssetFormat, wanted: AssetKind | undefined): AssetKind {
+  const rasterish = format === 'svg' || format === 'png' || format === 'jpeg' || format === 'webp';
+  return rasterish && (wanted === 'logo' || wanted === 'image') ? wanted : FORMAT_INFO[format].kind;
+}
+
+/** What a shelf logo draws, as fractions of its canvas: an SVG's from the inspector, a PNG logo's measured here (null when nothing usable). */
+async function shelfBounds(format: AssetFormat, kind: AssetKind, inspected: { stored: Buffer; drawn: { fraction: Box } | null }): Promise<Box | null> {
+  if (format === 'svg') return inspected.drawn?.fraction ?? null;
+  if (format !== 'png' || kind !== 'logo') return null;
+  return drawnBounds(inspected.stored).then((b) => b.fraction, () => null);
+}
+
 /** Store one inspected file and its row, or nothing at all: the file is removed again when the row cannot be written. */
-async function storeOne(caller: Caller, brand: Brand, file: File, kind: AssetKind | undefined): Promise<AssetView & { duplicate: boolean; sanitised: string[] }> {
-  const inspected = await inspectUpload(file.name, Buffer.from(await file.arrayBuffer()), kind);
+async function storeOne(caller: Caller, brand: Brand, file: File, wanted: AssetKind | undefined): Promise<AssetView & { duplicate: boolean; sanitised: string[] }> {
+  const checked = await inspectUpload(Buffer.from(await file.arrayBuffer()), { as: 'shelf', filename: file.name });
+  const format = checked.format as AssetFormat;
+  const kind = shelfKind(format, wanted);
+  const inspected = { ...checked, format, kind, drawnBounds: await shelfBounds(format, kind, checked) };
   const contentHash = createHash('sha256').update(inspected.stored).digest('hex');
   const existing = await Asset.findOne({ where: { brandId: brand.id, contentHash } });
   if (existing) return { ...assetView(existing), duplicate: true, sanitised: [] };

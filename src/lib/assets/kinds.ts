@@ -1,13 +1,16 @@
 // What the asset shelf accepts, the states an asset moves through, and the renditions it can be asked for.
 // Browser-safe: the shelf island imports the same lists the server validates with.
 import { z } from 'zod';
+import { acceptAttribute, FORMAT_TYPES, UPLOAD_RULES } from '@/lib/uploads/rules';
 
-export const ASSET_FORMATS = ['svg', 'png', 'jpeg', 'webp', 'pdf', 'woff2', 'woff', 'ttf', 'otf', 'zip'] as const;
+export const ASSET_FORMATS = UPLOAD_RULES.shelf.accept;
 export type AssetFormat = (typeof ASSET_FORMATS)[number];
 
 /** What an asset is for: logos get every rendition, images get web sizes, the rest are served as uploaded. */
 export const ASSET_KINDS = ['logo', 'image', 'document', 'font', 'archive'] as const;
 export type AssetKind = (typeof ASSET_KINDS)[number];
+
+const DEFAULT_KIND: Record<AssetFormat, AssetKind> = { svg: 'logo', png: 'image', jpeg: 'image', webp: 'image', pdf: 'document', woff2: 'font', woff: 'font', ttf: 'font', otf: 'font', zip: 'archive' };
 
 export const ASSET_STATES = ['draft', 'approved', 'retired'] as const;
 export type AssetState = (typeof ASSET_STATES)[number];
@@ -26,39 +29,17 @@ export function canMoveState(from: AssetState, to: AssetState): boolean {
   return from === 'approved';
 }
 
-export const FORMAT_INFO: Record<AssetFormat, { mime: string; ext: string; kind: AssetKind; label: string }> = {
-  svg: { mime: 'image/svg+xml', ext: 'svg', kind: 'logo', label: 'SVG' },
-  png: { mime: 'image/png', ext: 'png', kind: 'image', label: 'PNG' },
-  jpeg: { mime: 'image/jpeg', ext: 'jpg', kind: 'image', label: 'JPEG' },
-  webp: { mime: 'image/webp', ext: 'webp', kind: 'image', label: 'WebP' },
-  pdf: { mime: 'application/pdf', ext: 'pdf', kind: 'document', label: 'PDF' },
-  woff2: { mime: 'font/woff2', ext: 'woff2', kind: 'font', label: 'WOFF2' },
-  woff: { mime: 'font/woff', ext: 'woff', kind: 'font', label: 'WOFF' },
-  ttf: { mime: 'font/ttf', ext: 'ttf', kind: 'font', label: 'TrueType' },
-  otf: { mime: 'font/otf', ext: 'otf', kind: 'font', label: 'OpenType' },
-  zip: { mime: 'application/zip', ext: 'zip', kind: 'archive', label: 'ZIP' },
-};
+/** Type, extension and label of each shelf format (from the one upload table), and the asset kind it defaults to. */
+export const FORMAT_INFO: Record<AssetFormat, { mime: string; ext: string; kind: AssetKind; label: string }> = Object.fromEntries(
+  ASSET_FORMATS.map((f) => [f, { mime: FORMAT_TYPES[f].mime, ext: FORMAT_TYPES[f].ext, kind: DEFAULT_KIND[f], label: FORMAT_TYPES[f].label }]),
+) as Record<AssetFormat, { mime: string; ext: string; kind: AssetKind; label: string }>;
 
-/** Filename extensions that honestly name each format (a PNG called .svg is refused). */
-export const EXTENSIONS: Record<AssetFormat, string[]> = {
-  svg: ['svg'],
-  png: ['png'],
-  jpeg: ['jpg', 'jpeg', 'jpe'],
-  webp: ['webp'],
-  pdf: ['pdf'],
-  woff2: ['woff2'],
-  woff: ['woff'],
-  ttf: ['ttf'],
-  otf: ['otf'],
-  zip: ['zip'],
-};
+export const ACCEPT_ATTRIBUTE = acceptAttribute('shelf');
 
-export const ACCEPT_ATTRIBUTE = Object.values(EXTENSIONS).flat().map((e) => `.${e}`).join(',');
-
-export const MAX_ASSET_BYTES = 25 * 1024 * 1024;
+export const MAX_ASSET_BYTES = UPLOAD_RULES.shelf.maxBytes;
 export const MAX_FILES_PER_UPLOAD = 20;
-/** Images above this many pixels are refused before they are decoded (decompression bombs). */
-export const MAX_IMAGE_PIXELS = 60_000_000;
+/** Images above this many pixels are refused before they are decoded (decompression bombs), at upload and when drawn. */
+export const MAX_IMAGE_PIXELS = UPLOAD_RULES.shelf.maxPixels;
 
 export const RENDITION_FORMATS = ['original', 'svg', 'png', 'jpg', 'webp', 'ico', 'tiff', 'pdf', 'eps'] as const;
 /** Print-ready vector formats, made from SVG logos only (a raster would only be wrapped, not turned into vectors). */

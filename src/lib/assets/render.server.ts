@@ -1,10 +1,12 @@
-// Draws one rendition of a logo or image with sharp, and caches it under a key made of the asset and its parameters.
+// The one rendition function: every drawn, recoloured or converted version of a logo or image (shelf renditions, logo
+// versions for routes, pages and bundles, favicons, print files) comes from renderRendition, so sizing caps, colour
+// treatment and output encoding are decided here once. Drawn renditions are cached under a key of asset and parameters.
 // No astro:env here: the benchmark and the app share this code, each with its own store.
 import { createHash } from 'node:crypto';
 import sharp, { type Sharp } from 'sharp';
 import { encode as encodeIco } from 'sharp-ico';
 import { knockoutSvg } from '@/lib/logo/knockout';
-import { knockoutRaster, variantInk } from '@/lib/logo/knockout.server';
+import { knockoutRaster, variantInk } from '@/lib/logo/recolour.server';
 import { logoPrintFile } from '@/lib/logo/print-files.server';
 import { toSanitizedSvg } from '@/lib/logo/sanitize';
 import type { Box } from '@/lib/logo/geometry';
@@ -22,6 +24,19 @@ export interface RenditionSource {
   drawnBounds: Box | null;
 }
 
+/** What the drawing needs of a source; the cache needs its id and brand as well. */
+export type DrawnSource = Pick<RenditionSource, 'bytes' | 'format' | 'drawnBounds'>;
+
+/**
+ * What to make, the one parameter type: size and fit (width, square, padding, sizes), format and encoding (format,
+ * colorSpace, background) and colour treatment (variant, color as the ink, paintOn). format 'original' is the file as
+ * stored, recoloured when a variant is asked.
+ */
+export interface RenditionSpec extends RenditionParams {
+  /** For a one-colour SVG shown on a known ground: shapes in that ground's colour are painted, not cut out. */
+  paintOn?: string | null;
+}
+
 export interface Rendition {
   body: Buffer;
   mime: string;
@@ -36,13 +51,24 @@ const rgba = (hex: string | null) => (hex ? hex : TRANSPARENT);
 
 const svgMemo = new Map<string, { text: string; width: number; height: number }>();
 
+/** The colour treatment of an SVG: the variant's ink painted in, vectors kept (knockout.ts). */
+function recolourSvg(text: string, spec: RenditionSpec): string {
+  if (spec.variant === 'original') return text;
+  return knockoutSvg(text, { ink: variantInk(spec.variant, spec.color), paintOn: spec.paintOn ?? undefined });
+}
+
+/** The colour treatment of a raster: the variant's ink sorted into its pixels, as a PNG. */
+async function recolourRaster(bytes: Buffer, spec: RenditionSpec): Promise<Buffer> {
+  return spec.variant === 'original' ? bytes : knockoutRaster(bytes, variantInk(spec.variant, spec.color));
+}
+
 /** The SVG text with the variant painted in, plus its intrinsic size; memoised, as sanitising costs more than drawing small icons. */
-function svgFor(bytes: Buffer, params: RenditionParams): { text: string; width: number; height: number } {
-  const memoKey = `${createHash('sha1').update(bytes).digest('hex')}|${params.variant}|${params.color ?? ''}`;
+function svgFor(bytes: Buffer, params: RenditionSpec): { text: string; width: number; height: number } {
+  const memoKey = `${createHash('sha1').update(bytes).digest('hex')}|${params.variant}|${params.color ?? ''}|${params.paintOn ?? ''}`;
   const known = svgMemo.get(memoKey);
   if (known) return known;
   const clean = toSanitizedSvg(bytes.toString('utf8'));
-  const text = params.variant === 'original' ? clean.svg : knockoutSvg(clean.svg, { ink: variantInk(params.variant, params.color) });
+  const text = recolourSvg(clean.svg, params);
   const made = { text, width: clean.width, height: clean.height };
   svgMemo.set(memoKey, made);
   if (svgMemo.size > 200) svgMemo.delete(svgMemo.keys().next().value!);
@@ -53,7 +79,7 @@ function svgFor(bytes: Buffer, params: RenditionParams): { text: string; width: 
  * A sharp pipeline that draws the source so that `drawWidth` px covers `box` (fractions of the canvas, or all of it):
  * SVGs at the density that gives that width directly, rasters from their pixels.
  */
-async function drawn(source: RenditionSource, params: RenditionParams, contentWidth: number | null, box: Box | null): Promise<{ img: Sharp; width: number; height: number }> {
+async function drawn(source: DrawnSource, params: RenditionSpec, contentWidth: number | null, box: Box | null): Promise<{ img: Sharp; width: number; height: number }> {
   const crop = box ?? { x: 0, y: 0, width: 1, height: 1 };
   if (source.format === 'svg') {
     const svg = svgFor(source.bytes, params);
@@ -65,7 +91,7 @@ async function drawn(source: RenditionSource, params: RenditionParams, contentWi
     const h = Math.max(1, Math.floor((svg.height * density) / 72));
     return cropTo(img, w, h, box);
   }
-  const bytes = params.variant === 'original' ? source.bytes : await knockoutRaster(source.bytes, variantInk(params.variant, params.color));
+  const bytes = await recolourRaster(source.bytes, params);
   const img = sharp(bytes, { limitInputPixels: MAX_IMAGE_PIXELS });
   const meta = await img.metadata();
   const w = meta.width ?? 1;
@@ -74,7 +100,7 @@ async function drawn(source: RenditionSource, params: RenditionParams, contentWi
 }
 
 /** A square of `size` px with the drawing centred inside `inner` px (or inside its clear space). */
-async function square(source: RenditionSource, params: RenditionParams, size: number): Promise<Sharp> {
+async function square(source: DrawnSource, params: RenditionSpec, size: number): Promise<Sharp> {
   const clearSpace = params.padding < 0;
   const box = clearSpace ? source.drawnBounds : null;
   // The aspect of what is drawn decides the content box: first a cheap look at the proportions.
@@ -118,9 +144,14 @@ function encodeAs(img: Sharp, params: RenditionParams): Sharp {
 }
 
 /** Draw one rendition (no cache), after the size guard. */
-async function drawRendition(source: RenditionSource, params: RenditionParams): Promise<Rendition> {
+async function drawRendition(source: DrawnSource, params: RenditionSpec): Promise<Rendition> {
   const type = renditionType(params.format, source.format);
-  if (params.format === 'original') return { body: source.bytes, ...type };
+  if (params.format === 'original') {
+    // The file as stored (cleaned at upload), recoloured when a variant is asked: an SVG stays SVG, a raster becomes a PNG.
+    if (params.variant === 'original') return { body: source.bytes, ...type };
+    if (source.format === 'svg') return { body: Buffer.from(recolourSvg(source.bytes.toString('utf8'), params)), ...renditionType('svg', 'svg') };
+    return { body: await recolourRaster(source.bytes, params), ...renditionType('png', 'png') };
+  }
   if (params.format === 'svg') {
     let text = svgFor(source.bytes, params).text;
     if (params.background) {
@@ -155,14 +186,14 @@ function boundedDensity(svg: { width: number; height: number }, canvasWidth: num
 }
 
 /** Refuses a rendition over the output caps before anything is drawn: an SVG's own size, or a raster's header only. */
-async function guardOutputSize(source: RenditionSource, params: RenditionParams): Promise<void> {
+async function guardOutputSize(source: DrawnSource, params: RenditionSpec): Promise<void> {
   if (params.format === 'original' || params.format === 'svg') return;
   const size = source.format === 'svg' ? svgFor(source.bytes, params) : await sharp(source.bytes, { limitInputPixels: MAX_IMAGE_PIXELS }).metadata();
   checkRenditionSize(params, { format: source.format, width: size.width ?? 1, height: size.height ?? 1 });
 }
 
-/** Draw one rendition (no cache); over the caps → RenditionError 422 (rendition_too_large or too_many_pixels). */
-export async function renderRendition(source: RenditionSource, params: RenditionParams): Promise<Rendition> {
+/** Make one rendition (no cache); over the caps → RenditionError 422 (rendition_too_large or too_many_pixels). */
+export async function renderRendition(source: DrawnSource, params: RenditionSpec): Promise<Rendition> {
   await guardOutputSize(source, params);
   try {
     return await drawRendition(source, params);

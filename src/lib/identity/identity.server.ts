@@ -2,7 +2,6 @@
 import { createHash } from 'node:crypto';
 import { readFile } from 'node:fs/promises';
 import { join } from 'node:path';
-import sharp from 'sharp';
 import { Asset, Brand, BrandColor, BrandLogo, BrandTypeface } from '@db/models';
 import { audit } from '@/lib/audit.server';
 import type { Caller } from '@/lib/auth/access.server';
@@ -10,12 +9,15 @@ import { colorValues, parseColor } from '@/lib/color';
 import { iccCmyk } from '@/lib/color/print.server';
 import { sequelize } from '@/lib/db.server';
 import { ApiError } from '@/lib/http/api';
-import { clearSpace, minimumSize, sanitizeSvg } from '@/lib/logo';
+import { clearSpace, minimumSize } from '@/lib/logo';
 import { oneColourLogo, type OneColourVariant } from '@/lib/logo/knockout.server';
-import { drawnBounds } from '@/lib/logo/bounds.server';
+import { drawnBounds, type DrawnBounds } from '@/lib/logo/bounds.server';
 import { thinnestStroke } from '@/lib/logo/stroke.server';
+import type { Box } from '@/lib/logo/geometry';
 import { newKey } from '@/lib/storage/storage';
 import { storage } from '@/lib/storage/index.server';
+import { inspectUpload } from '@/lib/uploads/inspect.server';
+import { FONT_FORMATS, UPLOAD_RULES } from '@/lib/uploads/rules';
 import type { IdentityForTokens } from '@/lib/tokens';
 import { fontMetrics, measure, modularScale, MEASURE_RANGE, pxToRem, pxToPt, SCALE_RATIOS, type FontMetrics } from '@/lib/type';
 import { shippedFont } from '@/lib/type/shipped-fonts';
@@ -142,32 +144,22 @@ export async function reorder(caller: Caller, brand: Brand, kind: 'color' | 'log
 
 // ---------------------------------------------------------------- logos
 
-export const MAX_LOGO_BYTES = 5 * 1024 * 1024;
-const PNG = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
-const LOGO_PIXEL_LIMIT = 40_000_000;
+export const MAX_LOGO_BYTES = UPLOAD_RULES.logo.maxBytes;
 
-/** Read an uploaded logo: PNG by its signature, SVG by parsing and sanitising; anything else is refused. */
-async function readLogoFile(bytes: Buffer): Promise<{ format: 'svg' | 'png'; stored: Buffer; canvas: { x: number; y: number; width: number; height: number } }> {
-  if (bytes.length === 0) throw new ApiError(400, 'empty_file', 'The file is empty.');
-  if (bytes.length > MAX_LOGO_BYTES) throw new ApiError(413, 'too_large', `A logo file can be at most ${MAX_LOGO_BYTES / 1024 / 1024} MB.`);
-  if (bytes.subarray(0, 8).equals(PNG)) {
-    try {
-      const meta = await sharp(bytes, { limitInputPixels: LOGO_PIXEL_LIMIT }).metadata();
-      if (!meta.width || !meta.height) throw new Error('no size');
-      return { format: 'png', stored: bytes, canvas: { x: 0, y: 0, width: meta.width, height: meta.height } };
-    } catch (err) {
-      const msg = String((err as Error).message);
-      if (/pixel limit/i.test(msg)) throw new ApiError(400, 'too_many_pixels', `The image has more than ${LOGO_PIXEL_LIMIT / 1e6} million pixels.`);
-      throw new ApiError(400, 'unreadable_image', 'The PNG could not be read: it may be damaged or truncated.');
-    }
+/** Read an uploaded logo through the one upload inspector: SVG (cleaned and measured) or PNG. */
+async function readLogoFile(bytes: Buffer, filename: string): Promise<{ format: 'svg' | 'png'; stored: Buffer; canvas: Box; drawn: DrawnBounds | null }> {
+  const logo = await inspectUpload(bytes, { as: 'logo', filename });
+  const canvas = logo.viewBox ?? { x: 0, y: 0, width: logo.width!, height: logo.height! };
+  return { format: logo.format as 'svg' | 'png', stored: logo.stored, canvas, drawn: logo.drawn };
+}
+
+/** What a logo draws, in its own units: the inspector measured an SVG already, a PNG is measured here. */
+async function logoBounds(logo: { stored: Buffer; drawn: DrawnBounds | null }): Promise<Box> {
+  try {
+    return (logo.drawn ?? (await drawnBounds(logo.stored))).box;
+  } catch (err) {
+    throw new ApiError(400, (err as { code?: string }).code ?? 'logo_unreadable', (err as Error).message);
   }
-  const text = bytes.toString('utf8');
-  if (!/<svg[\s>]/i.test(text.slice(0, 4096)) && !/^\s*(<\?xml|<!--|<svg)/i.test(text)) {
-    throw new ApiError(400, 'unsupported_file', 'A logo must be an SVG or a PNG file; this file is neither.');
-  }
-  const clean = sanitizeSvg(text);
-  if (!clean.ok) throw new ApiError(400, clean.error.code, clean.error.message);
-  return { format: 'svg', stored: Buffer.from(clean.svg), canvas: clean.viewBox };
 }
 
 /** The logo's default clear-space unit: a quarter of its drawn height (common practice starts from a letter height). */
@@ -179,18 +171,13 @@ export async function uploadLogo(
   file: File,
   fields: { name?: string; variant: LogoVariant },
 ): Promise<{ logo: IdentityLogo; duplicate: boolean }> {
-  const bytes = Buffer.from(await file.arrayBuffer());
-  const { format, stored, canvas } = await readLogoFile(bytes);
+  const read = await readLogoFile(Buffer.from(await file.arrayBuffer()), file.name);
+  const { format, stored, canvas } = read;
   const contentHash = createHash('sha256').update(stored).digest('hex');
   const existing = await BrandLogo.findOne({ where: { brandId: brand.id, contentHash } });
   if (existing) return { logo: logoView(existing), duplicate: true };
 
-  let bounds;
-  try {
-    bounds = (await drawnBounds(stored)).box;
-  } catch (err) {
-    throw new ApiError(400, (err as { code?: string }).code ?? 'logo_unreadable', (err as Error).message);
-  }
+  const bounds = await logoBounds(read);
   const stroke = await thinnestStroke(stored, canvas, format === 'svg');
   const key = newKey(brand.id, 'logo', format);
   await storage.put(key, stored, format === 'svg' ? 'image/svg+xml' : 'image/png');
@@ -307,7 +294,7 @@ export async function logoFile(brand: Brand, logoId: string, variant: LogoFileVa
 /** Store the designer's own file for one variant slot of a logo (SVG or PNG, checked like a logo upload). */
 export async function uploadLogoVariant(caller: Caller, brand: Brand, logoId: string, slot: LogoVariantSlot, file: File): Promise<IdentityLogo> {
   const logo = await logoOf(brand, logoId);
-  const { format, stored } = await readLogoFile(Buffer.from(await file.arrayBuffer()));
+  const { format, stored } = await readLogoFile(Buffer.from(await file.arrayBuffer()), file.name);
   const key = newKey(brand.id, 'logo', format);
   await storage.put(key, stored, format === 'svg' ? 'image/svg+xml' : 'image/png');
   const previous = logo.variantFiles?.[slot];
@@ -340,17 +327,7 @@ export async function deleteLogoVariant(caller: Caller, brand: Brand, logoId: st
 
 // ---------------------------------------------------------------- typefaces
 
-export const MAX_FONT_BYTES = 10 * 1024 * 1024;
-
-/** Font format from the file's first bytes (OpenType/WOFF signatures), or null. */
-export function fontFormat(bytes: Buffer): 'woff2' | 'woff' | 'ttf' | 'otf' | null {
-  const tag = bytes.subarray(0, 4).toString('latin1');
-  if (tag === 'wOF2') return 'woff2';
-  if (tag === 'wOFF') return 'woff';
-  if (tag === 'OTTO') return 'otf';
-  if (tag === '\x00\x01\x00\x00' || tag === 'true') return 'ttf';
-  return null;
-}
+export const MAX_FONT_BYTES = UPLOAD_RULES.typeface.maxBytes;
 
 /** Standard weights (100–900) inside a font's weight range. */
 const weightsIn = (m: FontMetrics) => {
@@ -397,16 +374,9 @@ export async function addShippedTypeface(caller: Caller, brand: Brand, key: stri
 
 export async function uploadTypeface(caller: Caller, brand: Brand, file: File, role: TypefaceRole, family?: string): Promise<IdentityTypeface> {
   const bytes = Buffer.from(await file.arrayBuffer());
-  if (bytes.length === 0) throw new ApiError(400, 'empty_file', 'The file is empty.');
-  if (bytes.length > MAX_FONT_BYTES) throw new ApiError(413, 'too_large', `A font file can be at most ${MAX_FONT_BYTES / 1024 / 1024} MB.`);
-  const format = fontFormat(bytes);
-  if (!format) throw new ApiError(400, 'unsupported_file', 'A typeface must be a WOFF2, WOFF, TTF or OTF file; this file is none of them.');
-  let metrics: FontMetrics;
-  try {
-    metrics = fontMetrics(bytes);
-  } catch (err) {
-    throw new ApiError(400, 'font_unreadable', (err as Error).message);
-  }
+  const font = await inspectUpload(bytes, { as: 'typeface', filename: file.name });
+  const format = font.format as (typeof FONT_FORMATS)[number];
+  const metrics = font.font!;
   const key = newKey(brand.id, 'font', format);
   await storage.put(key, bytes, `font/${format}`);
   try {

@@ -1,70 +1,9 @@
 // One-colour versions of logos, the one place every route, page, print edition, shelf and bundle asks for them.
-// SVG logos keep their vectors (knockout.ts); raster logos are sorted pixel by pixel with the same luminance rule.
-import sharp from 'sharp';
-import { parseColor } from '@/lib/color/parse';
-import { relativeLuminance } from '@/lib/color/contrast';
-import { LogoError } from './errors';
-import { GROUND_SPLIT_LUMINANCE, knockoutSvg, type DrawnGround } from './knockout';
+// They are drawn by the one rendition function (assets/render.server.ts), which decides the colour treatment once.
+import { renderRendition } from '@/lib/assets/render.server';
+import type { OneColourVariant } from './recolour.server';
 
-/** The one-colour versions: black ink, white ink, reversed (white ink for coloured grounds) and a chosen ink. */
-export type OneColourVariant = 'black' | 'white' | 'reversed' | 'one-colour';
-
-const MAX_PIXELS = 60_000_000;
-/** sRGB-encoded value (0–1) of the dividing luminance, where the ramp from ink to ground is centred. */
-const SPLIT_ENCODED = 1.055 * GROUND_SPLIT_LUMINANCE ** (1 / 2.4) - 0.055;
-
-/** The ink of a variant as '#rrggbb'. */
-export function variantInk(variant: OneColourVariant, ink?: string | null): string {
-  if (variant === 'black') return '#000000';
-  if (variant === 'white' || variant === 'reversed') return '#ffffff';
-  const parsed = parseColor(ink ?? '');
-  if (!parsed.ok) throw new LogoError('invalid_input', `A one-colour version needs its ink: ${parsed.error.message}`);
-  return parsed.color.hex.slice(0, 7);
-}
-
-/**
- * A raster logo in one ink on a transparent ground: each pixel's coverage is its alpha times how far its colour lies
- * from the ground the logo was drawn for toward its darkest (or lightest) ink, so anti-aliased edges stay smooth and
- * shapes painted in the ground's colour become holes.
- */
-export async function knockoutRaster(bytes: Buffer, ink: string, ground?: DrawnGround): Promise<Buffer> {
-  const { data, info } = await sharp(bytes, { limitInputPixels: MAX_PIXELS }).ensureAlpha().toColourspace('srgb').raw().toBuffer({ resolveWithObject: true });
-  const { width, height, channels } = info;
-  const count = width * height;
-  // Encoded luma (Rec. 709 weights on sRGB values) for the ramp; WCAG relative luminance to sort light from dark.
-  const luma = new Float32Array(count);
-  let lightOpaque = 0;
-  let opaque = 0;
-  for (let i = 0; i < count; i++) {
-    const at = i * channels;
-    luma[i] = (0.2126 * data[at] + 0.7152 * data[at + 1] + 0.0722 * data[at + 2]) / 255;
-    if (data[at + channels - 1] >= 128) {
-      opaque++;
-      if (relativeLuminance([data[at], data[at + 1], data[at + 2]]) > GROUND_SPLIT_LUMINANCE) lightOpaque++;
-    }
-  }
-  if (opaque === 0) throw new LogoError('logo_empty', 'The logo draws nothing visible: every pixel is transparent.');
-  // Drawn for a dark ground when nearly everything it draws is light (white lettering meant for dark).
-  const onDark = (ground ?? (lightOpaque / opaque > 0.98 ? 'dark' : 'light')) === 'dark';
-  // How far "ink" lies from the ground: the 5th percentile of opaque pixels, at least a little past the split.
-  const inkward = Float32Array.from({ length: opaque });
-  for (let i = 0, n = 0; i < count; i++) if (data[i * channels + channels - 1] >= 128) inkward[n++] = onDark ? luma[i] : 1 - luma[i];
-  inkward.sort();
-  const inkDepth = Math.max(inkward[Math.floor(opaque * 0.95)] ?? 1, 1 - SPLIT_ENCODED + 0.1);
-  const out = Buffer.alloc(count * 4);
-  const [r, g, b] = [1, 3, 5].map((i) => parseInt(ink.slice(i, i + 2), 16));
-  for (let i = 0; i < count; i++) {
-    const at = i * channels;
-    const depth = (onDark ? luma[i] : 1 - luma[i]) / inkDepth;
-    // Below 15 % of the way to the ink reads as ground, above 85 % as full ink, linear between (keeps anti-aliasing).
-    const coverage = Math.min(1, Math.max(0, (depth - 0.15) / 0.7));
-    out[i * 4] = r;
-    out[i * 4 + 1] = g;
-    out[i * 4 + 2] = b;
-    out[i * 4 + 3] = Math.round(data[at + channels - 1] * coverage);
-  }
-  return sharp(out, { raw: { width, height, channels: 4 } }).png().toBuffer();
-}
+export { knockoutRaster, variantInk, type OneColourVariant } from './recolour.server';
 
 /** A logo file the designer uploaded for one variant; it wins over anything computed. */
 export interface VariantOverride {
@@ -74,7 +13,7 @@ export interface VariantOverride {
 
 /**
  * The one function behind every one-colour logo: the designer's own file for the slot when there is one, otherwise
- * the knockout computed from the logo (SVG stays SVG, rasters become a PNG).
+ * the knockout computed from the logo as stored (SVG stays SVG, rasters become a PNG).
  */
 export async function oneColourLogo(
   logo: { bytes: Buffer; format: 'svg' | 'png' | 'webp' | 'jpeg' },
@@ -83,7 +22,9 @@ export async function oneColourLogo(
 ): Promise<{ body: Buffer; format: 'svg' | 'png'; contentType: string }> {
   const { override } = options;
   if (override) return { body: override.bytes, format: override.format, contentType: override.format === 'svg' ? 'image/svg+xml' : 'image/png' };
-  const ink = variantInk(variant, options.ink);
-  if (logo.format === 'svg') return { body: Buffer.from(knockoutSvg(logo.bytes.toString('utf8'), { ink, paintOn: options.paintOn ?? undefined })), format: 'svg', contentType: 'image/svg+xml' };
-  return { body: await knockoutRaster(logo.bytes, ink), format: 'png', contentType: 'image/png' };
+  const made = await renderRendition(
+    { bytes: logo.bytes, format: logo.format, drawnBounds: null },
+    { format: 'original', width: null, square: false, padding: 0, background: null, variant, color: options.ink ?? null, paintOn: options.paintOn ?? null, colorSpace: 'rgb', sizes: null },
+  );
+  return { body: made.body, format: made.ext === 'svg' ? 'svg' : 'png', contentType: made.mime };
 }

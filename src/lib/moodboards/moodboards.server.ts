@@ -1,5 +1,4 @@
 // Mood boards: images, swatches, type samples and notes sent to a client contact for a decision on direction.
-import sharp from 'sharp';
 import { Op } from 'sequelize';
 import { Brand, BrandColor } from '@db/models';
 import { MoodBoard, MoodBoardDecision, MoodBoardItem, type Verdict } from '@db/models/collaboration';
@@ -15,22 +14,17 @@ import { peopleById } from '@/lib/invitations/people.server';
 import { sendTemplate, siteLink, type MailOutcome } from '@/lib/mail/mail.server';
 import { storage } from '@/lib/storage/index.server';
 import { newKey } from '@/lib/storage/storage';
+import { inspectUpload } from '@/lib/uploads/inspect.server';
+import { UPLOAD_RULES } from '@/lib/uploads/rules';
 import type { BoardItemView, BoardView, DecisionView, PublicBoard } from './views';
 
 export type { BoardItemView, BoardView, DecisionView, PublicBoard } from './views';
 
 export const BOARD_DAYS = 30;
-export const MAX_BOARD_IMAGE_BYTES = 15 * 1024 * 1024;
+export const MAX_BOARD_IMAGE_BYTES = UPLOAD_RULES.boardImage.maxBytes;
 /** Largest image accepted, in pixels (about 50 megapixels), checked by sharp before any decoding. */
-export const MAX_BOARD_IMAGE_PIXELS = 50_000_000;
+export const MAX_BOARD_IMAGE_PIXELS = UPLOAD_RULES.boardImage.maxPixels;
 export const MAX_BOARD_ITEMS = 60;
-const IMAGE_TYPES: Record<string, { mime: string; ext: string }> = {
-  jpeg: { mime: 'image/jpeg', ext: 'jpg' },
-  png: { mime: 'image/png', ext: 'png' },
-  webp: { mime: 'image/webp', ext: 'webp' },
-  gif: { mime: 'image/gif', ext: 'gif' },
-  avif: { mime: 'image/avif', ext: 'avif' },
-};
 
 const itemView = (i: MoodBoardItem): BoardItemView => ({
   id: i.id,
@@ -171,29 +165,19 @@ export async function addItem(caller: Caller, brand: Brand, boardId: string, ite
   return itemView(row);
 }
 
-/** Add an uploaded image: sharp reads its header (pixel limit enforced) before anything is stored. */
+/** Add an uploaded image, read by the one upload inspector (type from its bytes, pixel cap before decoding) before anything is stored. */
 export async function addImage(caller: Caller, brand: Brand, boardId: string, file: File, caption: string): Promise<BoardItemView> {
   const board = await boardOf(brand, boardId);
   refuseApproved(board);
-  if (file.size > MAX_BOARD_IMAGE_BYTES) throw new ApiError(413, 'too_large', `Images may be up to ${MAX_BOARD_IMAGE_BYTES / 1024 / 1024} MB.`);
   const bytes = Buffer.from(await file.arrayBuffer());
-  let meta: sharp.Metadata;
-  try {
-    meta = await sharp(bytes, { limitInputPixels: MAX_BOARD_IMAGE_PIXELS }).metadata();
-  } catch (err) {
-    const tooBig = /pixel limit/i.test(String(err));
-    throw new ApiError(tooBig ? 413 : 400, tooBig ? 'too_large' : 'not_an_image', tooBig ? 'The image has more than 50 million pixels; scale it down first.' : 'The file is not an image Plumbline can read. Use JPEG, PNG, WebP, GIF or AVIF.');
-  }
-  const type = meta.format ? IMAGE_TYPES[meta.format === 'heif' ? 'avif' : meta.format] : undefined;
-  if (!type || !meta.width || !meta.height) throw new ApiError(400, 'not_an_image', 'Use a JPEG, PNG, WebP, GIF or AVIF image (vector files belong in the identity or the asset shelf).');
-  if (meta.width * meta.height > MAX_BOARD_IMAGE_PIXELS) throw new ApiError(413, 'too_large', 'The image has more than 50 million pixels; scale it down first.');
+  const image = await inspectUpload(bytes, { as: 'boardImage', filename: file.name });
   const position = await nextPosition(board.id);
-  const key = newKey(brand.id, 'board', type.ext);
-  await storage.put(key, bytes, type.mime);
+  const key = newKey(brand.id, 'board', image.ext);
+  await storage.put(key, bytes, image.mime);
   try {
     const row = await sequelize.transaction(async (t) => {
       const created = await MoodBoardItem.create(
-        { boardId: board.id, kind: 'image', position, caption, storageKey: key, contentType: type.mime, width: meta.width!, height: meta.height!, colorName: null, colorValue: null, colorHex: null, fontFamily: null, sampleText: null, verdict: null, verdictComment: null },
+        { boardId: board.id, kind: 'image', position, caption, storageKey: key, contentType: image.mime, width: image.width!, height: image.height!, colorName: null, colorValue: null, colorHex: null, fontFamily: null, sampleText: null, verdict: null, verdictComment: null },
         { transaction: t },
       );
       await audit(auditOf(caller, brand, 'moodboard.item.add', board.id, { itemId: created.id, kind: 'image', bytes: bytes.length }), t);
