@@ -12,9 +12,6 @@ import { hashToken, longDate, newToken } from '@/lib/invitations/tokens';
 import { peopleById } from '@/lib/invitations/people.server';
 import { sendTemplate, siteLink, type MailOutcome } from '@/lib/mail/mail.server';
 import { allQuestions, answersSchema, missingRequired, questionnaireSchema, type Questionnaire } from './questionnaire';
-import type { BriefStatus, BriefView } from './types';
-
-export type { BriefStatus, BriefView } from './types';
 
 export const BRIEF_DAYS = 30;
 
@@ -25,6 +22,24 @@ export function questionnaireTemplates(): Questionnaire[] {
     .filter((f) => f.endsWith('.json'))
     .sort()
     .map((f) => questionnaireSchema.parse(JSON.parse(readFileSync(join(dir, f), 'utf8'))));
+}
+
+export type BriefStatus = 'sent' | 'in_progress' | 'submitted' | 'expired' | 'withdrawn';
+
+export interface BriefView {
+  id: string;
+  title: string;
+  template: string;
+  contactName: string;
+  contactEmail: string;
+  status: BriefStatus;
+  sentAt: string;
+  sentBy: string | null;
+  expiresAt: string;
+  answeredAt: string | null;
+  submittedAt: string | null;
+  answered: number;
+  questions: number;
 }
 
 const countAnswered = (b: Brief) => allQuestions(b.questions).filter((q) => {
