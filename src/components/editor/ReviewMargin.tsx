@@ -3,7 +3,7 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { api } from '@/lib/client/api';
 import { blockLabel } from '@/lib/guideline/block-label';
-import type { CommentView } from '@/lib/reviews/reviews.server';
+import type { CommentView } from '@/lib/reviews/views';
 import { QueryRoot } from '@/components/app/QueryRoot';
 
 interface DraftBlock {

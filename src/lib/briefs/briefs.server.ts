@@ -12,6 +12,9 @@ import { hashToken, longDate, newToken } from '@/lib/invitations/tokens';
 import { peopleById } from '@/lib/invitations/people.server';
 import { sendTemplate, siteLink, type MailOutcome } from '@/lib/mail/mail.server';
 import { allQuestions, answersSchema, missingRequired, questionnaireSchema, type Questionnaire } from './questionnaire';
+import type { BriefStatus, BriefView, PublicBrief } from './views';
+
+export type { BriefStatus, BriefView, PublicBrief } from './views';
 
 export const BRIEF_DAYS = 30;
 
@@ -22,24 +25,6 @@ export function questionnaireTemplates(): Questionnaire[] {
     .filter((f) => f.endsWith('.json'))
     .sort()
     .map((f) => questionnaireSchema.parse(JSON.parse(readFileSync(join(dir, f), 'utf8'))));
-}
-
-export type BriefStatus = 'sent' | 'in_progress' | 'submitted' | 'expired' | 'withdrawn';
-
-export interface BriefView {
-  id: string;
-  title: string;
-  template: string;
-  contactName: string;
-  contactEmail: string;
-  status: BriefStatus;
-  sentAt: string;
-  sentBy: string | null;
-  expiresAt: string;
-  answeredAt: string | null;
-  submittedAt: string | null;
-  answered: number;
-  questions: number;
 }
 
 const countAnswered = (b: Brief) => allQuestions(b.questions).filter((q) => {
@@ -172,18 +157,6 @@ function refuseClosed(b: Brief) {
     const p = LINK_PROBLEMS[s];
     throw new ApiError(p.status, p.code, p.message);
   }
-}
-
-export interface PublicBrief {
-  brandName: string;
-  title: string;
-  contactName: string;
-  status: BriefStatus;
-  expiresAt: string;
-  submittedAt: string | null;
-  savedAt: string | null;
-  questionnaire: Questionnaire;
-  answers: BriefAnswers;
 }
 
 /** What the client sees at /brief/<token>. A closed link raises its own clear error. */

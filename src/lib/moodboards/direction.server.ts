@@ -1,12 +1,8 @@
 // Whether guideline work has an approved direction yet: a warning shown beside the work, never a lock.
 import { MoodBoard } from '@db/models/collaboration';
+import type { DirectionStatus } from './views';
 
-export interface DirectionStatus {
-  state: 'approved' | 'waiting';
-  /** The words to show, e.g. "Waiting for direction: no mood board approved yet." */
-  label: string;
-  board: { id: string; title: string; decidedAt: string } | null;
-}
+export type { DirectionStatus } from './views';
 
 /** The brand's direction: the latest approved mood board, or "waiting for direction". */
 export async function directionStatus(brandId: string): Promise<DirectionStatus> {

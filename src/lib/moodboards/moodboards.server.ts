@@ -2,7 +2,7 @@
 import sharp from 'sharp';
 import { Op } from 'sequelize';
 import { Brand, BrandColor } from '@db/models';
-import { MoodBoard, MoodBoardDecision, MoodBoardItem, type BoardItemKind, type BoardStatus, type Verdict } from '@db/models/collaboration';
+import { MoodBoard, MoodBoardDecision, MoodBoardItem, type Verdict } from '@db/models/collaboration';
 import { audit } from '@/lib/audit.server';
 import type { Caller } from '@/lib/auth/access.server';
 import { parseColor } from '@/lib/color';
@@ -15,6 +15,9 @@ import { peopleById } from '@/lib/invitations/people.server';
 import { sendTemplate, siteLink, type MailOutcome } from '@/lib/mail/mail.server';
 import { storage } from '@/lib/storage/index.server';
 import { newKey } from '@/lib/storage/storage';
+import type { BoardItemView, BoardView, DecisionView, PublicBoard } from './views';
+
+export type { BoardItemView, BoardView, DecisionView, PublicBoard } from './views';
 
 export const BOARD_DAYS = 30;
 export const MAX_BOARD_IMAGE_BYTES = 15 * 1024 * 1024;
@@ -28,42 +31,6 @@ const IMAGE_TYPES: Record<string, { mime: string; ext: string }> = {
   gif: { mime: 'image/gif', ext: 'gif' },
   avif: { mime: 'image/avif', ext: 'avif' },
 };
-
-export interface BoardItemView {
-  id: string;
-  kind: BoardItemKind;
-  position: number;
-  caption: string;
-  image?: { width: number; height: number };
-  swatch?: { name: string; value: string; hex: string };
-  type?: { family: string; sample: string };
-  verdict: Verdict | null;
-  verdictComment: string | null;
-}
-
-export interface DecisionView {
-  id: string;
-  outcome: 'approved' | 'changes_requested';
-  comment: string;
-  decidedBy: string;
-  decidedAt: string;
-  kept: number;
-  dropped: number;
-}
-
-export interface BoardView {
-  id: string;
-  title: string;
-  intro: string;
-  status: BoardStatus;
-  contactName: string | null;
-  contactEmail: string | null;
-  sentAt: string | null;
-  expiresAt: string | null;
-  createdBy: string | null;
-  items: BoardItemView[];
-  decisions: DecisionView[];
-}
 
 const itemView = (i: MoodBoardItem): BoardItemView => ({
   id: i.id,
@@ -292,16 +259,6 @@ async function boardByToken(token: string): Promise<{ board: MoodBoard; brand: B
     throw new ApiError(410, 'board_expired', `This mood-board link has expired (links work for ${BOARD_DAYS} days). Ask your designer to send it again.`);
   }
   return { board, brand: (await Brand.findByPk(board.brandId))! };
-}
-
-export interface PublicBoard {
-  brandName: string;
-  title: string;
-  intro: string;
-  status: BoardStatus;
-  contactName: string | null;
-  items: BoardItemView[];
-  decisions: DecisionView[];
 }
 
 export async function openBoard(token: string): Promise<PublicBoard> {

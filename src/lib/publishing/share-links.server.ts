@@ -9,6 +9,9 @@ import { hashToken } from '@/lib/brands/brands.server';
 import { sequelize } from '@/lib/db.server';
 import { ApiError } from '@/lib/http/api';
 import { shareGrants } from './grant-cache';
+import type { LinkState, ShareLinkView } from './views';
+
+export type { LinkState, ShareLinkView } from './views';
 
 const scrypt = promisify(scryptCb) as (password: string, salt: Buffer, keylen: number) => Promise<Buffer>;
 
@@ -16,23 +19,6 @@ export const SHARE_COOKIE = 'plumbline_share';
 /** Password attempts allowed per link and address in a quarter of an hour. */
 export const PASSWORD_ATTEMPTS = 5;
 export const PASSWORD_WINDOW_SECONDS = 15 * 60;
-
-export type LinkState = 'active' | 'expired' | 'revoked';
-
-export interface ShareLinkView {
-  id: string;
-  label: string | null;
-  url?: string;
-  version: number | null;
-  allowDownloads: boolean;
-  hasPassword: boolean;
-  expiresAt: string | null;
-  revokedAt: string | null;
-  lastUsedAt: string | null;
-  useCount: number;
-  state: LinkState;
-  createdAt: string;
-}
 
 export const linkState = (l: ShareLink, now = new Date()): LinkState =>
   l.revokedAt ? 'revoked' : l.expiresAt && l.expiresAt <= now ? 'expired' : 'active';

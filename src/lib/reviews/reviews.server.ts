@@ -1,48 +1,16 @@
 // Reviews of the working draft: requests to reviewers, comments anchored to a block id, replies, decisions.
 import { Brand, GuidelineDraft } from '@db/models';
 import { blockLabels } from '@/lib/guideline/block-label';
-import { ReviewComment, ReviewRequest, type ReviewStatus } from '@db/models/collaboration';
+import { ReviewComment, ReviewRequest } from '@db/models/collaboration';
 import { audit } from '@/lib/audit.server';
 import type { Caller } from '@/lib/auth/access.server';
 import { sequelize } from '@/lib/db.server';
 import { ApiError } from '@/lib/http/api';
 import { membersWithRoles, peopleById } from '@/lib/invitations/people.server';
 import { sendTemplate, siteLink } from '@/lib/mail/mail.server';
+import type { CommentView, ReviewSummary, ReviewView } from './views';
 
-export interface ReviewView {
-  id: string;
-  revision: number;
-  message: string;
-  status: ReviewStatus;
-  requestedBy: string | null;
-  requestedAt: string;
-  decidedBy: string | null;
-  decidedAt: string | null;
-  decisionNote: string | null;
-}
-
-export interface CommentView {
-  id: string;
-  blockId: string;
-  parentId: string | null;
-  reviewId: string | null;
-  revision: number;
-  body: string;
-  author: { id: string | null; name: string };
-  createdAt: string;
-  resolvedAt: string | null;
-  resolvedBy: string | null;
-  /** Whether the block is still in the current draft (false: its block was removed since). */
-  blockPresent: boolean;
-  /** A reader's name for the block ("Colour palette in “Colour”"), or null when the block was removed. */
-  blockLabel: string | null;
-}
-
-export interface ReviewSummary {
-  latest: ReviewView | null;
-  openComments: number;
-  draftRevision: number;
-}
+export type { CommentView, ReviewSummary, ReviewView } from './views';
 
 const brandAudit = (caller: Caller, brand: Brand, action: string, targetType: string, targetId: string, details: Record<string, unknown> = {}) =>
   ({ actorId: caller.id, action, targetType, targetId, brandId: brand.id, studioId: brand.studioId, details });

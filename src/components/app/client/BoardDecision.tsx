@@ -1,7 +1,7 @@
 // The client's decision on a mood board: keep or drop each piece, then approve the direction or ask for changes.
 import { useState } from 'react';
 import { api, type ApiClientError } from '@/lib/client/api';
-import type { PublicBoard } from '@/lib/moodboards/moodboards.server';
+import type { PublicBoard } from '@/lib/moodboards/views';
 import { BoardPiece } from './BoardPiece';
 import { When } from '@/components/ui/When';
 

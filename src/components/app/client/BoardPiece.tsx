@@ -1,5 +1,5 @@
 // One piece of a mood board as everyone sees it: an image, a swatch, a type sample or a note.
-import type { BoardItemView } from '@/lib/moodboards/moodboards.server';
+import type { BoardItemView } from '@/lib/moodboards/views';
 import { cssFontFamilyList } from '@/lib/safe/escape';
 import { cleanTypefaceFamily } from '@/lib/safe/values';
 

@@ -2,7 +2,7 @@
 import { useEffect, useRef, useState } from 'react';
 import { ApiClientError, api } from '@/lib/client/api';
 import { ANSWER_LIMITS, type Question } from '@/lib/briefs/questionnaire';
-import type { PublicBrief } from '@/lib/briefs/briefs.server';
+import type { PublicBrief } from '@/lib/briefs/views';
 import { When } from '@/components/ui/When';
 import { formatDateTime, formatTime, SITE_LOCALE } from '@/lib/format';
 

@@ -1,7 +1,7 @@
 // Shown before publishing: the latest review decision on the draft and how many comment threads are still open.
 import { useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/client/api';
-import type { ReviewSummary, ReviewView } from '@/lib/reviews/reviews.server';
+import type { ReviewSummary, ReviewView } from '@/lib/reviews/views';
 import { QueryRoot } from '@/components/app/QueryRoot';
 import { formatDate } from '@/lib/format';
 

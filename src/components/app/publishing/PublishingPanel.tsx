@@ -2,7 +2,7 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState, type ReactNode } from 'react';
 import { api } from '@/lib/client/api';
-import type { ShareLinkView } from '@/lib/publishing/share-links.server';
+import type { ShareLinkView } from '@/lib/publishing/views';
 import type { Finding, FindingCode } from '@/lib/publishing/preflight';
 import { QueryRoot } from '@/components/app/QueryRoot';
 import { When } from '@/components/ui/When';
