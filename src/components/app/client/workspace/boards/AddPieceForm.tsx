@@ -4,7 +4,7 @@ import { useForm, type Resolver } from 'react-hook-form';
 import { ApiClientError } from '@/lib/client/api';
 import { firstError, maxLengthOf } from '@/lib/client/form';
 import { newItemSchema } from '@/lib/moodboards/schemas';
-import type { BoardView } from '@/lib/moodboards/types';
+import type { BoardView } from '@/lib/moodboards/views';
 import { failed, type SetNote } from '../chrome';
 import { useAddImage, useAddPiece, type NewPiece } from './boards.queries';
 

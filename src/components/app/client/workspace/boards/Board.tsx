@@ -1,5 +1,5 @@
 // One mood board: its state, the client's last decision, its pieces, and (while not approved) adding and sending.
-import type { BoardView } from '@/lib/moodboards/types';
+import type { BoardView } from '@/lib/moodboards/views';
 import { BoardPiece } from '@/components/app/client/BoardPiece';
 import { date, failed, type ClientCaps, type SetNote } from '../chrome';
 import { AddPieceForm } from './AddPieceForm';

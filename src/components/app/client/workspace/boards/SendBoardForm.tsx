@@ -3,7 +3,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { firstError, maxLengthOf } from '@/lib/client/form';
 import { sendBoardBody } from '@/lib/moodboards/schemas';
-import type { BoardView } from '@/lib/moodboards/types';
+import type { BoardView } from '@/lib/moodboards/views';
 import { failed, mailed, type SetNote } from '../chrome';
 import { useSendBoard, type SendBoard } from './boards.queries';
 

@@ -4,7 +4,7 @@ import type { z } from 'zod';
 import { api } from '@/lib/client/api';
 import { useChange, type Reactions } from '@/lib/client/mutation';
 import type { createBoardBody, newItemSchema, sendBoardBody } from '@/lib/moodboards/schemas';
-import type { BoardView, DirectionStatus } from '@/lib/moodboards/types';
+import type { BoardView, DirectionStatus } from '@/lib/moodboards/views';
 import type { Mailed } from '../chrome';
 
 export type NewPiece = z.input<typeof newItemSchema>;

@@ -1,6 +1,6 @@
 // Briefs: the questionnaires sent to the client, their state and answers, and the form to send one.
 import { useState } from 'react';
-import type { BriefView } from '@/lib/briefs/types';
+import type { BriefView } from '@/lib/briefs/views';
 import { date, ListState, Notice, Panel, type ClientCaps, type Note } from '../chrome';
 import { BriefAnswers } from './BriefAnswers';
 import { useBriefs } from './briefs.queries';

@@ -4,7 +4,7 @@ import type { z } from 'zod';
 import { api } from '@/lib/client/api';
 import { useChange, type Reactions } from '@/lib/client/mutation';
 import type { sendBriefBody } from '@/lib/briefs/schemas';
-import type { BriefView } from '@/lib/briefs/types';
+import type { BriefView } from '@/lib/briefs/views';
 import type { Mailed } from '../chrome';
 
 export interface BriefTemplate { id: string; title: string; intro: string; questions: number }

@@ -3,7 +3,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { firstError, maxLengthOf } from '@/lib/client/form';
 import { addCommentBody } from '@/lib/reviews/schemas';
-import type { CommentView } from '@/lib/reviews/types';
+import type { CommentView } from '@/lib/reviews/views';
 import { date, failed, type SetNote } from '../chrome';
 import { useReply, useResolveThread } from './reviews.queries';
 

@@ -1,6 +1,6 @@
 // Reviews: requests to review the draft with their decisions, asking for one, and the comment threads on the draft.
 import { useState } from 'react';
-import type { ReviewView } from '@/lib/reviews/types';
+import type { ReviewView } from '@/lib/reviews/views';
 import { date, Notice, Panel, type ClientCaps, type Note } from '../chrome';
 import { CommentThread } from './CommentThread';
 import { RequestReviewForm } from './RequestReviewForm';

@@ -4,7 +4,7 @@ import type { z } from 'zod';
 import { api } from '@/lib/client/api';
 import { useChange, type Reactions } from '@/lib/client/mutation';
 import type { addCommentBody, decideReviewBody, requestReviewBody } from '@/lib/reviews/schemas';
-import type { CommentView, ReviewSummary, ReviewView } from '@/lib/reviews/types';
+import type { CommentView, ReviewSummary, ReviewView } from '@/lib/reviews/views';
 
 export type RequestReview = z.input<typeof requestReviewBody>;
 export type Decision = z.input<typeof decideReviewBody> & { id: string };
