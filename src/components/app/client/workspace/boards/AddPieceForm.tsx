@@ -18,12 +18,12 @@ const pieceBody = (p: PieceFields): NewPiece =>
 // The route's union schema judges the body; its error paths (name, value, family, sample, caption) are the form's fields.
 const checkPiece = zodResolver(newItemSchema, undefined, { raw: true });
 const pieceResolver: Resolver<PieceFields> = async (values, context, options) => {
+  // The options name the form's fields; the check only reads them to place errors, which share the fields' names.
   const result = await checkPiece(pieceBody(values), context, options as never);
   return Object.keys(result.errors).length ? { values: {}, errors: result.errors as never } : { values, errors: {} };
 };
 
-const [swatch, type] = newItemSchema.options;
-const note = newItemSchema.options[2];
+const [swatch, type, note] = newItemSchema.options;
 const limit = { name: maxLengthOf(swatch.shape.name), value: maxLengthOf(swatch.shape.value), family: maxLengthOf(type.shape.family), sample: maxLengthOf(type.shape.sample), caption: maxLengthOf(note.shape.caption) };
 
 export function AddPieceForm({ brandId, board, onNote }: { brandId: string; board: BoardView; onNote: SetNote }) {
