@@ -37,16 +37,20 @@ export const logoFields = z.strictObject({
   variant: z.enum(LOGO_VARIANTS, { error: `Choose a variant: ${LOGO_VARIANTS.join(', ')}.` }).default('primary'),
 });
 
+const SCREEN_MINIMUM = 'The screen minimum is a whole number of px from 4 to 4000, or empty for the suggestion.';
+const PRINT_MINIMUM = 'The print minimum is a number of mm from 1 to 2000, or empty for the suggestion.';
+
+// The logo settings form checks with this same schema, so its words are written for the person at the form.
 export const updateLogoBody = z
   .strictObject({
     name: displayName('logo', 120).optional(),
     variant: z.enum(LOGO_VARIANTS).optional(),
-    clearSpaceUnit: z.number().positive('The clear-space unit must be larger than 0.').max(1e5).optional(),
-    clearSpaceLabel: singleLine('clear-space label', 120).min(1, 'Name the clear-space unit.').optional(),
-    clearSpaceMultiple: z.number().min(0.25).max(10).optional(),
-    thinnestStroke: z.number().positive().max(1e5).optional(),
-    minScreenPx: z.number().int().min(4).max(4000).nullable().optional(),
-    minPrintMm: z.number().min(1).max(2000).nullable().optional(),
+    clearSpaceUnit: z.number({ error: 'Type the unit as a number.' }).positive('The clear-space unit must be larger than 0.').max(1e5).optional(),
+    clearSpaceLabel: singleLine('clear-space label', 120).min(1, 'Say what the unit is, e.g. “the height of the letter o”.').optional(),
+    clearSpaceMultiple: z.number({ error: 'Type the multiple as a number.' }).min(0.25, 'Use a multiple of at least 0.25.').max(10, 'Use a multiple of at most 10.').optional(),
+    thinnestStroke: z.number({ error: 'Type the stroke as a number.' }).positive('The thinnest stroke must be larger than 0.').max(1e5).optional(),
+    minScreenPx: z.number({ error: SCREEN_MINIMUM }).int(SCREEN_MINIMUM).min(4, SCREEN_MINIMUM).max(4000, SCREEN_MINIMUM).nullable().optional(),
+    minPrintMm: z.number({ error: PRINT_MINIMUM }).min(1, PRINT_MINIMUM).max(2000, PRINT_MINIMUM).nullable().optional(),
   })
   .refine((b) => Object.keys(b).length > 0, 'Send at least one field to change.');
 

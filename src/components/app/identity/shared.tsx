@@ -55,28 +55,6 @@ export function useRefreshIdentity(brandId: string) {
 /** The server's words for a failed request. */
 export const messageOf = (err: unknown, fallback: string) => (err instanceof Error && err.message ? err.message : fallback);
 
-/** Multipart upload with progress (fetch cannot report upload progress); resolves to the JSON body or throws our error. */
-export function uploadWithProgress<T>(path: string, form: FormData, onProgress: (fraction: number) => void): Promise<T> {
-  return new Promise((resolve, reject) => {
-    const xhr = new XMLHttpRequest();
-    xhr.open('POST', path);
-    xhr.withCredentials = true;
-    xhr.upload.onprogress = (e) => e.lengthComputable && onProgress(e.loaded / e.total);
-    xhr.onerror = () => reject(new ApiClientError(0, 'offline', 'Plumbline could not be reached. Check your connection and try again.'));
-    xhr.onload = () => {
-      let body: unknown;
-      try {
-        body = xhr.responseText ? JSON.parse(xhr.responseText) : undefined;
-      } catch {
-        body = undefined;
-      }
-      if (xhr.status >= 200 && xhr.status < 300) resolve(body as T);
-      else reject(ApiClientError.from(xhr.status, body));
-    };
-    xhr.send(form);
-  });
-}
-
 /** A button that copies one value and says so for a moment. */
 export function CopyButton({ value, label }: { value: string; label: string }) {
   const [state, setState] = useState<'idle' | 'copied' | 'failed'>('idle');
@@ -114,7 +92,10 @@ export function Caution({ title, children }: { title: string; children: ReactNod
   );
 }
 
-export function Notice({ notice }: { notice: { kind: 'ok' | 'error'; text: string } | null }) {
+/** A notice above a section: what just happened, or why it could not. */
+export type NoticeState = { kind: 'ok' | 'error'; text: string } | null;
+
+export function Notice({ notice }: { notice: NoticeState }) {
   if (!notice) return null;
   return (
     <p role={notice.kind === 'error' ? 'alert' : 'status'} className={`rounded-md px-3 py-2 text-sm ${notice.kind === 'error' ? 'bg-danger-wash text-danger' : 'bg-plumb-wash text-plumb-deep'}`}>
