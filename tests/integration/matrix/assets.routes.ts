@@ -21,6 +21,7 @@ export default [
   { method: 'PATCH', file: 'brands/[id]/assets/[assetId].ts', path: (f) => `${b(f)}/assets/${f.assetId}`, body: () => ({ state: 'retired', tags: ['matrix'] }), expect: makers(200) },
   { method: 'DELETE', file: 'brands/[id]/assets/[assetId].ts', path: (f) => `${b(f)}/assets/${f.assetId}`, expect: makers(204) },
   { method: 'GET', file: 'assets/[assetId]/file.ts', path: (f) => `/api/assets/${f.assetId}/file?format=png&width=64`, expect: downloaders(200) },
-  { method: 'POST', file: 'brands/[id]/bundles.ts', path: (f) => `${b(f)}/bundles`, body: (f) => ({ assetIds: [f.assetId] }), expect: downloaders(200) },
+  // Packs a zip of what the brand has; it writes the download log only.
+  { method: 'POST', file: 'brands/[id]/bundles.ts', path: (f) => `${b(f)}/bundles`, body: (f) => ({ assetIds: [f.assetId] }), expect: downloaders(200), mutates: false },
   { method: 'GET', file: 'brands/[id]/downloads/index.ts', path: (f) => `${b(f)}/downloads`, expect: only(200, ['owner']) },
 ] satisfies Route[];
