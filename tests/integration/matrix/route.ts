@@ -16,7 +16,12 @@ export interface Route {
    * shared brand, and the matrix checks that it left the brand as it found it.
    */
   mutates?: boolean;
+  /** `false`: a brand of its own for this row may leave the client work out (makeBrand's `clientWork`). */
+  clientWork?: boolean;
 }
+
+/** Rows that never refer to client work: their own brands are built without it. */
+export const withoutClientWork = (routes: Route[]): Route[] => routes.map((r) => ({ ...r, clientWork: false }));
 
 /** True when an answered request of this row needs a brand of its own. */
 export const changesFixture = (route: Route, status: number): boolean => status < 300 && (route.mutates ?? route.method !== 'GET');
