@@ -24,8 +24,8 @@ let sharedState: Record<string, string>;
 let pool: BrandPool;
 beforeAll(async () => {
   cast = await makeCast();
-  // Built while the shared cases run; two at a time keeps the server (and a two-core machine) from thrashing.
-  pool = brandPool(cast, OWN_BRANDS, 2);
+  // Built while the shared cases run, three at a time, so one build's requests are computed while another's wait.
+  pool = brandPool(cast, OWN_BRANDS, 3);
   shared = await makeBrand(cast);
   sharedState = await brandState(shared.brandId);
 });
