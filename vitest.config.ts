@@ -15,7 +15,9 @@ export default defineConfig({
   resolve: { alias },
   test: {
     projects: [
-      { extends: true, test: { name: 'unit', include: ['tests/unit/**/*.test.ts', 'src/**/*.test.ts'], environment: 'node' } },
+      // Test files share one worker and its module cache (none mocks modules or changes globals), rather than
+      // each paying for a fresh process and fresh imports.
+      { extends: true, test: { name: 'unit', include: ['tests/unit/**/*.test.ts', 'src/**/*.test.ts'], environment: 'node', isolate: false } },
       {
         extends: true,
         test: {
@@ -24,7 +26,11 @@ export default defineConfig({
           globalSetup: ['tests/support/global-setup.ts'],
           testTimeout: 60_000,
           hookTimeout: 120_000,
+          // One file at a time against the one server, all in one worker with one module cache (as for unit).
           fileParallelism: false,
+          isolate: false,
+          // After the unit files, whatever number of workers they get on a bigger machine.
+          sequence: { groupOrder: 1 },
         },
       },
     ],

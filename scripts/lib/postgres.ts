@@ -96,10 +96,11 @@ export function hbaTrusts(hba: string): boolean {
 }
 
 /**
- * Create (first time) and start a cluster in `dir` listening on 127.0.0.1:`port`; idempotent.
+ * Create (first time) and start a cluster in `dir` listening on 127.0.0.1:`port`; idempotent. `throwaway`: a cluster
+ * created now skips flushing to disk (for the tests, whose cluster is deleted afterwards).
  * A cluster made earlier with `trust` is moved to passwords: roles get passwords, pg_hba.conf is rewritten, reloaded.
  */
-export function startCluster(dirInput: string, port: number): Cluster {
+export function startCluster(dirInput: string, port: number, opts: { throwaway?: boolean } = {}): Cluster {
   const bin = ensureServerBinaries();
   const dir = resolve(dirInput);
   const pgdata = join(dir, 'pgdata');
@@ -133,7 +134,9 @@ export function startCluster(dirInput: string, port: number): Cluster {
     // Loopback only: no other interface, socket in our own folder.
     writeFileSync(
       join(pgdata, 'postgresql.auto.conf'),
-      `listen_addresses = '127.0.0.1'\nunix_socket_directories = '${socket}'\npassword_encryption = 'scram-sha-256'\nfsync = on\n`,
+      `listen_addresses = '127.0.0.1'\nunix_socket_directories = '${socket}'\npassword_encryption = 'scram-sha-256'\n` +
+        // A throwaway cluster (the tests') need not survive a crash: PostgreSQL's manual, "Non-Durable Settings".
+        (opts.throwaway ? 'fsync = off\nsynchronous_commit = off\nfull_page_writes = off\n' : 'fsync = on\n'),
     );
     ownByPostgres(join(pgdata, 'postgresql.auto.conf'));
   }

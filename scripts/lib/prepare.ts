@@ -22,14 +22,26 @@ export async function prepareDatabase(settings: AuthSettings, opts: { filesDir: 
   }
 }
 
+const buildArgs = ['node_modules/astro/astro.js', 'build', '--silent'];
+const buildOptions = () => ({
+  cwd: projectRoot,
+  stdio: 'inherit' as const,
+  env: { ...process.env, NODE_ENV: 'production', ASTRO_TELEMETRY_DISABLED: '1' },
+});
+
 /** Build the Astro server bundle into outDir(). */
 export function buildApp(): void {
-  const result = spawnSync(process.execPath, ['node_modules/astro/astro.js', 'build', '--silent'], {
-    cwd: projectRoot,
-    stdio: 'inherit',
-    env: { ...process.env, NODE_ENV: 'production', ASTRO_TELEMETRY_DISABLED: '1' },
-  });
+  const result = spawnSync(process.execPath, buildArgs, buildOptions());
   if (result.status !== 0) throw new Error('astro build failed; see the output above.');
+}
+
+/** buildApp() in a child process of its own, so the caller can prepare the database meanwhile. */
+export function buildAppInBackground(): Promise<void> {
+  const child = spawn(process.execPath, buildArgs, buildOptions());
+  return new Promise((done, fail) => {
+    child.once('error', fail);
+    child.once('exit', (code) => (code === 0 ? done() : fail(new Error('astro build failed; see the output above.'))));
+  });
 }
 
 export interface ServerEnv {

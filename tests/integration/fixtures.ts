@@ -57,8 +57,26 @@ export interface Fixture {
   commentId: string;
 }
 
-/** A brand owned by the cast's owner with every other role filled, one colour, one logo and one typeface. */
-export async function makeBrand(cast: Cast, name = 'Fixture Brand'): Promise<Fixture> {
+/** Client work left out: empty ids, so a row that wrongly refers to it fails on an address that names nothing. */
+const NO_CLIENT_WORK: Awaited<ReturnType<typeof makeClientWork>> = {
+  invitationId: '',
+  invitationToken: '',
+  briefId: '',
+  briefToken: '',
+  boardId: '',
+  boardItemId: '',
+  boardImageId: '',
+  boardToken: '',
+  reviewId: '',
+  commentId: '',
+};
+
+/**
+ * A brand owned by the cast's owner with every other role filled, one colour, one logo and one typeface, an approved
+ * asset, a published version and a share link, and client work. `clientWork: false` leaves the client work out
+ * (about half the cost) and its fields empty, for matrix rows that never refer to it.
+ */
+export async function makeBrand(cast: Cast, name = 'Fixture Brand', opts: { clientWork?: boolean } = {}): Promise<Fixture> {
   const owner = cast.clients.owner;
   const created = await owner.post('/api/brands', { name });
   if (created.status !== 201) throw new Error(`brand create answered ${created.status}`);
@@ -82,19 +100,30 @@ export async function makeBrand(cast: Cast, name = 'Fixture Brand'): Promise<Fix
   if (rows.length !== members.length) throw new Error(`fixture members: ${rows.length} of ${members.length} written`);
   const [targetUser] = await sql('SELECT id FROM "user" WHERE email = $1', [cast.target.email]);
   const targetMemberId: string = rows.find((r) => r.user_id === targetUser.id).id;
-  const color = await owner.post(`/api/brands/${brandId}/colors`, { name: 'Ink', value: '#1d2a44' });
-  const typeface = await owner.post(`/api/brands/${brandId}/typefaces`, { shipped: 'dm-sans', role: 'body' });
-  const logo = await owner.upload(`/api/brands/${brandId}/logos`, 'mark.svg', FIXTURE_SVG, 'image/svg+xml');
-  const asset = await owner.upload(`/api/brands/${brandId}/assets`, 'shelf-mark.svg', FIXTURE_SVG, 'image/svg+xml');
-  for (const r of [color, typeface, logo, asset]) if (r.status !== 201) throw new Error(`fixture answered ${r.status}: ${JSON.stringify(r.body)}`);
-  const assetId: string = asset.body.assets[0].id;
-  const approved = await owner.patch(`/api/brands/${brandId}/assets/${assetId}`, { state: 'approved' });
-  if (approved.status !== 200) throw new Error(`asset approval answered ${approved.status}: ${JSON.stringify(approved.body)}`);
+  // The identity, the shelf and the draft are independent of each other, and so are the share link and the client
+  // work once a version is out: each group is asked for at once.
+  const approvedAsset = async () => {
+    const asset = await owner.upload(`/api/brands/${brandId}/assets`, 'shelf-mark.svg', FIXTURE_SVG, 'image/svg+xml');
+    if (asset.status !== 201) return asset;
+    return owner.patch(`/api/brands/${brandId}/assets/${asset.body.assets[0].id}`, { state: 'approved' });
+  };
   const draft = { type: 'doc', content: [{ type: 'sectionHeading', attrs: { id: 'intro', title: 'Introduction', eyebrow: '', intro: '' } }] };
-  await owner.request('PUT', `/api/brands/${brandId}/guideline`, { baseRevision: 0, doc: draft });
-  const published = await owner.post(`/api/brands/${brandId}/versions`, { note: 'First version' });
-  const link = await owner.post(`/api/brands/${brandId}/share-links`, {});
-  for (const r of [published, link]) if (r.status !== 201) throw new Error(`fixture answered ${r.status}: ${JSON.stringify(r.body)}`);
-  const client = await makeClientWork(owner, brandId, 'intro');
+  const [color, typeface, logo, approved, saved] = await Promise.all([
+    owner.post(`/api/brands/${brandId}/colors`, { name: 'Ink', value: '#1d2a44' }),
+    owner.post(`/api/brands/${brandId}/typefaces`, { shipped: 'dm-sans', role: 'body' }),
+    owner.upload(`/api/brands/${brandId}/logos`, 'mark.svg', FIXTURE_SVG, 'image/svg+xml'),
+    approvedAsset(),
+    owner.request('PUT', `/api/brands/${brandId}/guideline`, { baseRevision: 0, doc: draft }),
+  ]);
+  for (const r of [color, typeface, logo]) if (r.status !== 201) throw new Error(`fixture answered ${r.status}: ${JSON.stringify(r.body)}`);
+  for (const r of [approved, saved]) if (r.status !== 200) throw new Error(`fixture answered ${r.status}: ${JSON.stringify(r.body)}`);
+  const assetId: string = approved.body.asset.id;
+  const publishAndShare = async () => {
+    const published = await owner.post(`/api/brands/${brandId}/versions`, { note: 'First version' });
+    if (published.status !== 201) return published;
+    return owner.post(`/api/brands/${brandId}/share-links`, {});
+  };
+  const [link, client] = await Promise.all([publishAndShare(), opts.clientWork === false ? NO_CLIENT_WORK : makeClientWork(owner, brandId, 'intro')]);
+  if (link.status !== 201) throw new Error(`fixture answered ${link.status}: ${JSON.stringify(link.body)}`);
   return { brandId, targetMemberId, colorId: color.body.color.id, logoId: logo.body.logo.id, typefaceId: typeface.body.typeface.id, assetId, shareLinkId: link.body.shareLink.id, ...client };
 }

@@ -5,7 +5,7 @@ import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { TestProject } from 'vitest/node';
-import { buildApp, prepareDatabase, startServer } from '../../scripts/lib/prepare';
+import { buildAppInBackground, prepareDatabase, startServer } from '../../scripts/lib/prepare';
 import { ensureDebianPackages, MACHINE_PACKAGES, POSTGRESQL } from '../../scripts/lib/debian';
 import { dropCluster, freePort, startCluster } from '../../scripts/lib/postgres';
 import { startFakeSmtp, type FakeSmtp } from '@/lib/mail/fake-smtp';
@@ -26,8 +26,12 @@ export async function setup(project: TestProject): Promise<void> {
   }
   // The suite builds into its own folder, so it never disturbs a running `npm start`.
   process.env.PLUMBLINE_OUT_DIR ??= join(process.cwd(), 'dist-test');
+  // The build runs beside the cluster, the schema and the demo; the server waits for both.
+  const built = process.env.PLUMBLINE_TEST_SKIP_BUILD === '1' ? Promise.resolve() : buildAppInBackground();
+  // Until it is awaited below, a failed build must not count as an unhandled rejection.
+  built.catch(() => undefined);
   clusterDir = mkdtempSync(join(tmpdir(), 'plumbline-test-'));
-  const cluster = startCluster(clusterDir, await freePort());
+  const cluster = startCluster(clusterDir, await freePort(), { throwaway: true });
   const port = await freePort();
   const siteUrl = `http://127.0.0.1:${port}`;
   const secret = 'test-secret-that-is-long-enough-for-better-auth';
@@ -35,12 +39,12 @@ export async function setup(project: TestProject): Promise<void> {
   const signInLimit = 10_000;
   const filesDir = join(clusterDir, 'files');
   await prepareDatabase({ databaseUrl: cluster.url, siteUrl, secret, signInLimit }, { filesDir });
-  if (process.env.PLUMBLINE_TEST_SKIP_BUILD !== '1') buildApp();
   // The local fake SMTP server keeps every message the app sends as JSON in mailDir (src/lib/mail/fake-smtp.ts).
   smtp = await startFakeSmtp({ dir: join(clusterDir, 'mail') });
   const mail = { smtpHost: smtp.host, smtpPort: smtp.port, captureDir: smtp.dir };
   // Likewise for mail: one owner sends hundreds of invitations across the role matrix; the limit has its own test.
   const mailSendLimit = 1_000_000;
+  await built;
   server = await startServer({ host: '127.0.0.1', port, databaseUrl: cluster.url, siteUrl, secret, signInLimit, mailSendLimit, filesDir, mail }, { quiet: true });
   project.provide('baseUrl', siteUrl);
   project.provide('databaseUrl', cluster.url);

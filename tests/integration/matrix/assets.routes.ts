@@ -1,6 +1,6 @@
 // The asset shelf: uploads, states, renditions, bundles and the download log.
 import { FIXTURE_SVG } from '../fixtures';
-import { only, type Route } from './route';
+import { only, withoutClientWork, type Route } from './route';
 
 const b = (f: { brandId: string }) => `/api/brands/${f.brandId}`;
 const makers = (ok: number) => only(ok, ['owner', 'editor']);
@@ -8,7 +8,8 @@ const makers = (ok: number) => only(ok, ['owner', 'editor']);
 const downloaders = (ok: number) => only(ok, ['owner', 'editor', 'reviewer', 'partner']);
 const randomInk = () => `#${Math.floor(Math.random() * 0xffffff).toString(16).padStart(6, '0')}`;
 
-export default [
+// No row here refers to client work, so their own brands are built without it.
+export default withoutClientWork([
   { method: 'GET', file: 'brands/[id]/assets/index.ts', path: (f) => `${b(f)}/assets`, expect: downloaders(200) },
   {
     method: 'POST',
@@ -21,6 +22,7 @@ export default [
   { method: 'PATCH', file: 'brands/[id]/assets/[assetId].ts', path: (f) => `${b(f)}/assets/${f.assetId}`, body: () => ({ state: 'retired', tags: ['matrix'] }), expect: makers(200) },
   { method: 'DELETE', file: 'brands/[id]/assets/[assetId].ts', path: (f) => `${b(f)}/assets/${f.assetId}`, expect: makers(204) },
   { method: 'GET', file: 'assets/[assetId]/file.ts', path: (f) => `/api/assets/${f.assetId}/file?format=png&width=64`, expect: downloaders(200) },
-  { method: 'POST', file: 'brands/[id]/bundles.ts', path: (f) => `${b(f)}/bundles`, body: (f) => ({ assetIds: [f.assetId] }), expect: downloaders(200) },
+  // Packs a zip of what the brand has; it writes the download log only.
+  { method: 'POST', file: 'brands/[id]/bundles.ts', path: (f) => `${b(f)}/bundles`, body: (f) => ({ assetIds: [f.assetId] }), expect: downloaders(200), mutates: false },
   { method: 'GET', file: 'brands/[id]/downloads/index.ts', path: (f) => `${b(f)}/downloads`, expect: only(200, ['owner']) },
-] satisfies Route[];
+] satisfies Route[]);

@@ -3,7 +3,8 @@ import { all, only, unique, type Route } from './route';
 
 export default [
   { method: 'GET', file: 'brands/index.ts', path: () => '/api/brands', expect: all(200) },
-  { method: 'POST', file: 'brands/index.ts', path: () => '/api/brands', body: () => ({ name: 'Matrix Made' }), expect: all(201) },
+  // A new brand of the caller's own: the fixture brand is not touched.
+  { method: 'POST', file: 'brands/index.ts', path: () => '/api/brands', body: () => ({ name: 'Matrix Made' }), expect: all(201), mutates: false },
   { method: 'GET', file: 'brands/[id]/index.ts', path: (f) => `/api/brands/${f.brandId}`, expect: all(200, { outsider: 404 }) },
   { method: 'PATCH', file: 'brands/[id]/index.ts', path: (f) => `/api/brands/${f.brandId}`, body: () => ({ name: 'Renamed' }), expect: only(200, ['owner', 'editor']) },
   { method: 'DELETE', file: 'brands/[id]/index.ts', path: (f) => `/api/brands/${f.brandId}`, expect: only(204, ['owner']) },

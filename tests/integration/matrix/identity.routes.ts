@@ -1,12 +1,13 @@
 // The identity: colours, logos, typefaces, type scale, palette report and tokens.
 import { FIXTURE_SVG } from '../fixtures';
-import { only, type Route } from './route';
+import { only, withoutClientWork, type Route } from './route';
 
 const readers = only(200, ['owner', 'editor', 'reviewer']);
 const makers = (ok: number) => only(ok, ['owner', 'editor']);
 const b = (f: { brandId: string }) => `/api/brands/${f.brandId}`;
 
-export default [
+// No row here refers to client work, so their own brands are built without it.
+export default withoutClientWork([
   { method: 'GET', file: 'brands/[id]/identity.ts', path: (f) => `${b(f)}/identity`, expect: readers },
   { method: 'GET', file: 'brands/[id]/palette-report.ts', path: (f) => `${b(f)}/palette-report`, expect: readers },
   { method: 'GET', file: 'brands/[id]/tokens.ts', path: (f) => `${b(f)}/tokens?format=css`, expect: readers },
@@ -43,5 +44,4 @@ export default [
   { method: 'PATCH', file: 'brands/[id]/typefaces/[typefaceId]/index.ts', path: (f) => `${b(f)}/typefaces/${f.typefaceId}`, body: () => ({ fallback: ['Arial', 'sans-serif'] }), expect: makers(200) },
   { method: 'DELETE', file: 'brands/[id]/typefaces/[typefaceId]/index.ts', path: (f) => `${b(f)}/typefaces/${f.typefaceId}`, expect: makers(204) },
   { method: 'GET', file: 'brands/[id]/typefaces/[typefaceId]/file.ts', path: (f) => `${b(f)}/typefaces/${f.typefaceId}/file`, expect: readers },
-] satisfies Route[];
-
+] satisfies Route[]);

@@ -1,10 +1,11 @@
 // Versions and share links.
-import { only, type Route } from './route';
+import { only, withoutClientWork, type Route } from './route';
 
 const b = (f: { brandId: string }) => `/api/brands/${f.brandId}`;
 const everyone = only(200, ['owner', 'editor', 'reviewer', 'partner', 'viewer']);
 
-export default [
+// No row here refers to client work, so their own brands are built without it.
+export default withoutClientWork([
   { method: 'GET', file: 'brands/[id]/versions/index.ts', path: (f) => `${b(f)}/versions`, expect: everyone },
   { method: 'POST', file: 'brands/[id]/versions/index.ts', path: (f) => `${b(f)}/versions`, body: () => ({ note: 'Matrix publish' }), expect: only(201, ['owner', 'editor']) },
   { method: 'GET', file: 'brands/[id]/versions/check.ts', path: (f) => `${b(f)}/versions/check`, expect: only(200, ['owner', 'editor']) },
@@ -12,4 +13,4 @@ export default [
   { method: 'GET', file: 'brands/[id]/share-links/index.ts', path: (f) => `${b(f)}/share-links`, expect: only(200, ['owner']) },
   { method: 'POST', file: 'brands/[id]/share-links/index.ts', path: (f) => `${b(f)}/share-links`, body: () => ({ allowDownloads: true }), expect: only(201, ['owner']) },
   { method: 'DELETE', file: 'brands/[id]/share-links/[linkId].ts', path: (f) => `${b(f)}/share-links/${f.shareLinkId}`, expect: only(204, ['owner']) },
-] satisfies Route[];
+] satisfies Route[]);
