@@ -3,6 +3,7 @@ import { useId, useState } from 'react';
 import { LOGO_VARIANT_SLOT_LABELS, LOGO_VARIANT_SLOTS, type IdentityLogo, type LogoVariantSlot } from '@/lib/identity/types';
 import { messageOf, type NoticeState } from '../shared';
 import { useDropOwnVersion, useUploadOwnVersion } from './logos.queries';
+import { acceptAttribute } from '@/lib/uploads/rules';
 
 export function OwnVersions({ brandId, logo, canEdit, onNotice }: { brandId: string; logo: IdentityLogo; canEdit: boolean; onNotice: (n: NoticeState) => void }) {
   const id = useId();
@@ -34,7 +35,7 @@ export function OwnVersions({ brandId, logo, canEdit, onNotice }: { brandId: str
                   {busy === slot ? 'Uploading…' : own.has(slot) ? 'Replace' : 'Upload SVG or PNG'}
                   <input
                     type="file"
-                    accept=".svg,.png,image/svg+xml,image/png"
+                    accept={acceptAttribute('logo')}
                     className="sr-only"
                     aria-label={`Upload your own file for ${LOGO_VARIANT_SLOT_LABELS[slot]}`}
                     onChange={(e) => {

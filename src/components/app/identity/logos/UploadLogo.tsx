@@ -8,6 +8,7 @@ import { LOGO_VARIANTS } from '@/lib/identity/types';
 import { messageOf, type NoticeState } from '../shared';
 import { VARIANT_LABEL } from './labels';
 import { useUploadLogo } from './logos.queries';
+import { acceptAttribute } from '@/lib/uploads/rules';
 
 // The route's own field schema, and the file the form must hold before it sends anything.
 const uploadForm = logoFields.pick({ variant: true }).extend({
@@ -48,7 +49,7 @@ export function UploadLogo({ brandId, onNotice }: { brandId: string; onNotice: (
             key={inputKey}
             id={`${id}-file`}
             type="file"
-            accept=".svg,.png,image/svg+xml,image/png"
+            accept={acceptAttribute('logo')}
             className="field py-1.5 text-sm file:mr-3 file:rounded file:border-0 file:bg-paper file:px-2 file:py-1 file:text-sm file:font-semibold"
             onChange={(e) => { setValue('file', e.target.files?.[0] ?? null); clearErrors(); }}
           />

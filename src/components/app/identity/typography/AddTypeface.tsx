@@ -8,6 +8,7 @@ import { SHIPPED_FONTS } from '@/lib/type/shipped-fonts';
 import { messageOf, type NoticeState } from '../shared';
 import { ROLE_LABEL } from './labels';
 import { useAddShippedTypeface, useUploadTypeface, type ShippedTypeface } from './typography.queries';
+import { acceptAttribute } from '@/lib/uploads/rules';
 
 const choice = shippedTypefaceBody.pick({ shipped: true, role: true });
 
@@ -64,7 +65,7 @@ export function AddTypeface({ brandId, onNotice }: { brandId: string; onNotice: 
             <input
               id={`${id}-file`}
               type="file"
-              accept=".woff2,.woff,.ttf,.otf,font/woff2,font/woff,font/ttf,font/otf"
+              accept={acceptAttribute('typeface')}
               className="field py-1.5 text-sm file:mr-3 file:rounded file:border-0 file:bg-paper file:px-2 file:py-1 file:text-sm file:font-semibold"
               onChange={(e) => setFile(e.target.files?.[0] ?? null)}
             />

@@ -8,6 +8,7 @@ import type { Identity } from '@/lib/identity/types';
 import { SCALE_RATIOS } from '@/lib/type/scale';
 import { messageOf, type NoticeState } from '../shared';
 import { useSaveTypeScale, type TypeScaleSettings } from './typography.queries';
+import { formatNumber, SITE_LOCALE } from '@/lib/format';
 
 const ratioEntries = Object.entries(SCALE_RATIOS) as [keyof typeof SCALE_RATIOS, (typeof SCALE_RATIOS)[keyof typeof SCALE_RATIOS]][];
 type ScaleValues = TypeScaleSettings;
@@ -49,7 +50,7 @@ export function ScaleSettings({ brandId, scale, canEdit, onNotice }: { brandId: 
       <div>
         <label htmlFor={`${id}-ratio`} className="label">Ratio</label>
         <select id={`${id}-ratio`} className="field" disabled={!canEdit} {...register('ratioName')}>
-          {ratioEntries.map(([key, r]) => <option key={key} value={key}>{r.label} — {r.interval} ({r.ratio.toFixed(3)})</option>)}
+          {ratioEntries.map(([key, r]) => <option key={key} value={key}>{r.label} — {r.interval} ({formatNumber(r.ratio, SITE_LOCALE, 3)})</option>)}
         </select>
         <p className="hint">Each step is the one below times this ratio, named after the musical interval.</p>
       </div>

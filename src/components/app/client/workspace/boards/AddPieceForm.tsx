@@ -7,6 +7,7 @@ import { newItemSchema } from '@/lib/moodboards/schemas';
 import type { BoardView } from '@/lib/moodboards/views';
 import { failed, type SetNote } from '../chrome';
 import { useAddImage, useAddPiece, type NewPiece } from './boards.queries';
+import { acceptAttribute } from '@/lib/uploads/rules';
 
 interface PieceFields { kind: 'swatch' | 'type' | 'note'; name: string; value: string; family: string; sample: string; caption: string }
 const EMPTY = { name: '', value: '', family: '', sample: '', caption: '' };
@@ -60,7 +61,7 @@ export function AddPieceForm({ brandId, board, onNote }: { brandId: string; boar
       </>}
       {kind === 'note' && <div className="flex-1"><label className="label" htmlFor={id('nt')}>Note</label><input id={id('nt')} className="field" maxLength={limit.caption} aria-invalid={invalid('caption')} {...register('caption')} /></div>}
       <button className="btn-quiet" disabled={add.isPending}>Add</button>
-      <label className="btn-quiet cursor-pointer">Upload an image<input type="file" accept="image/jpeg,image/png,image/webp,image/gif,image/avif" className="sr-only" onChange={(e) => { const f = e.target.files?.[0]; if (f) image.mutate(f); e.target.value = ''; }} /></label>
+      <label className="btn-quiet cursor-pointer">Upload an image<input type="file" accept={acceptAttribute('boardImage')} className="sr-only" onChange={(e) => { const f = e.target.files?.[0]; if (f) image.mutate(f); e.target.value = ''; }} /></label>
     </form>
   );
 }
