@@ -46,7 +46,7 @@ test('the demo editor inserts a palette block and a paragraph; both survive a re
 
   await page.reload();
   await page.getByRole('textbox', { name: 'Guideline document' }).waitFor();
-  expect(await page.getByText('Library blue leads every poster.').isVisible()).toBe(true);
+  expect(await page.getByText('Library blue leads every poster.', { exact: true }).isVisible()).toBe(true);
   expect(await page.getByText('#1f3a5f').first().isVisible()).toBe(true); // the demo's Library blue
 
   // Change the colour in the identity (as the identity screen does); the block renders the new value.
