@@ -1,5 +1,5 @@
 // `npm start`: Debian packages (installed if missing), PostgreSQL, migrations, demo, build, serve, a readiness list.
-import { join } from 'node:path';
+import { join, relative } from 'node:path';
 import pg from 'pg';
 import { DEMO_PASSWORD, DEMO_PEOPLE } from '@db/seeders/demo';
 import { CHROMIUM, CHROMIUM_PATH, ensureDebianPackages, GHOSTSCRIPT, MACHINE_PACKAGES, POSTGRESQL } from './lib/debian';
@@ -62,7 +62,8 @@ if (process.env.SMTP_HOST) {
 }
 
 step('Starting the server');
-const server = await startServer({ host, port, databaseUrl, siteUrl, secret, signInLimit, filesDir, mail });
+const serverLog = join(dataDir, 'logs', 'server.log');
+const server = await startServer({ host, port, databaseUrl, siteUrl, secret, signInLimit, filesDir, mail }, { logFile: serverLog });
 let shareUrl: string | null = null;
 if (demo) {
   try {
@@ -111,6 +112,7 @@ Plumbline is running at ${siteUrl}   (ready in ${((Date.now() - started) / 1000)
 }
 
 ${people}
+The server's log (JSON lines, one per request, with its request id): \`tail -f ${relative(process.cwd(), serverLog)}\`
 Ctrl-C stops the server; \`npm run db:stop\` stops PostgreSQL.
 `);
 

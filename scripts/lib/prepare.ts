@@ -1,10 +1,11 @@
 // One path from nothing to a ready database: cluster, schema, demo. Used by `npm start` and the tests.
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
+import { mkdirSync, openSync } from 'node:fs';
 import { connect } from '@db/models';
 import { migrateAll } from '@db/migrate';
 import { seedDemo } from '@db/seeders/demo';
 import type { AuthSettings } from '@/lib/auth/auth-options';
-import { join } from 'node:path';
+import { dirname, join } from 'node:path';
 import { projectRoot } from './settings';
 
 /** Where the build goes (PLUMBLINE_OUT_DIR, default dist/). */
@@ -63,11 +64,13 @@ export interface ServerEnv {
 }
 
 /** Start the built server (scripts/serve.mjs over outDir()) and resolve once it answers HTTP. */
-export async function startServer(env: ServerEnv, opts: { quiet?: boolean; pipeLog?: boolean } = {}): Promise<ChildProcess> {
+export async function startServer(env: ServerEnv, opts: { quiet?: boolean; pipeLog?: boolean; logFile?: string } = {}): Promise<ChildProcess> {
+  // logFile: the JSON log lines (stdout) are appended to a file, so a person's terminal keeps only what is for them.
+  const logFd = opts.logFile ? (mkdirSync(dirname(opts.logFile), { recursive: true }), openSync(opts.logFile, 'a')) : null;
   const child = spawn(process.execPath, [join(projectRoot, 'scripts', 'serve.mjs'), outDir()], {
     cwd: projectRoot,
     // pipeLog: the log lines (stdout) are kept on child.stdout for a test to read.
-    stdio: opts.pipeLog ? ['ignore', 'pipe', 'inherit'] : opts.quiet ? ['ignore', 'ignore', 'inherit'] : 'inherit',
+    stdio: logFd !== null ? ['ignore', logFd, 'inherit'] : opts.pipeLog ? ['ignore', 'pipe', 'inherit'] : opts.quiet ? ['ignore', 'ignore', 'inherit'] : 'inherit',
     env: {
       ...process.env,
       // The built server runs as production whatever the caller's environment (vitest sets NODE_ENV=test).
