@@ -1,7 +1,7 @@
 // Settings of the pattern: the mark, its layout, size, gap, turn, seed, colours and strength; the tile's export and the shelf.
 import { useState } from 'react';
 import type { ReactNodeViewProps } from '@tiptap/react';
-import { blockPatternSettings, type PatternAttrs } from './definition';
+import { attrsFromPatternSettings, blockPatternSettings, type PatternAttrs } from './definition';
 import { BlockFrame } from '@/components/editor/blocks/BlockFrame';
 import { ColorSelect, LogoSelect, NumberInput, Select } from '@/components/editor/blocks/controls';
 import { useIdentity } from '@/components/editor/IdentityContext';
@@ -34,6 +34,47 @@ function TileExport({ brandId, settings }: { brandId: string; settings: PatternS
   );
 }
 
+interface ShelfPattern {
+  id: string;
+  name: string;
+  patternSettings: Record<string, unknown> | null;
+}
+
+/** Start from a pattern kept on the shelf: its settings are copied into the block, which draws them again. */
+function FromShelf({ brandId, onPick }: { brandId: string; onPick: (attrs: Partial<PatternAttrs>) => void }) {
+  const [list, setList] = useState<{ loading: boolean; patterns: ShelfPattern[] | null; problem: string | null }>({ loading: false, patterns: null, problem: null });
+  const load = async () => {
+    setList({ loading: true, patterns: null, problem: null });
+    try {
+      const answer = await api<{ assets: ShelfPattern[] }>(`/api/brands/${encodeURIComponent(brandId)}/assets?kind=pattern`);
+      setList({ loading: false, patterns: answer.assets, problem: null });
+    } catch (err) {
+      setList({ loading: false, patterns: null, problem: (err as Error).message });
+    }
+  };
+  if (!list.patterns) {
+    return (
+      <div className="sm:col-span-2 text-sm">
+        <button type="button" className="btn-quiet" disabled={list.loading} onClick={load}>{list.loading ? 'Loading…' : 'Start from a shelf pattern'}</button>
+        {list.problem ? <p role="alert" className="error-text">{list.problem}</p> : null}
+      </div>
+    );
+  }
+  if (!list.patterns.length) return <p className="sm:col-span-2 hint">No patterns on the shelf yet: set this one up, then “Add to shelf”.</p>;
+  return (
+    <Select<string>
+      label="Shelf pattern"
+      value=""
+      options={[{ value: '', label: 'Choose a saved pattern…' }, ...list.patterns.map((p) => ({ value: p.id, label: p.name }))]}
+      onChange={(id) => {
+        const attrs = attrsFromPatternSettings(list.patterns?.find((p) => p.id === id)?.patternSettings);
+        if (attrs) onPick(attrs);
+      }}
+      hint="Copies its settings into this block."
+    />
+  );
+}
+
 export function Settings(props: ReactNodeViewProps) {
   const identity = useIdentity();
   const a = props.node.attrs as PatternAttrs;
@@ -55,6 +96,7 @@ export function Settings(props: ReactNodeViewProps) {
           {a.layout === 'scatter' ? <NumberInput label="Scatter seed" value={a.seed} min={0} max={2 ** 31 - 1} step={1} onChange={(seed) => set({ seed: Math.round(seed) })} /> : null}
           <NumberInput label="Strength" unit="opacity" value={a.opacity} min={0.05} max={1} step={0.01} onChange={(opacity) => set({ opacity })} />
           <NumberInput label="Height" unit="px" value={a.height} min={80} max={600} step={10} onChange={(height) => set({ height })} />
+          <FromShelf brandId={identity.brand.id} onPick={set} />
           {settings ? <TileExport brandId={identity.brand.id} settings={settings} /> : null}
         </div>
       }

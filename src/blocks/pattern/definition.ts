@@ -61,4 +61,24 @@ export function blockPatternSettings(attrs: PatternAttrs): PatternSettings | nul
   return parsed.success ? parsed.data : null;
 }
 
+const clamp = (v: number, min: number, max: number) => Math.min(max, Math.max(min, v));
+
+/** Block attributes from the settings of a shelf pattern (its size and gap held to what the block allows), or null when they do not read. */
+export function attrsFromPatternSettings(stored: unknown): Partial<PatternAttrs> | null {
+  const parsed = patternSettingsSchema.safeParse(stored);
+  if (!parsed.success) return null;
+  const s = parsed.data;
+  return {
+    logoId: s.logoId,
+    layout: s.layout,
+    scale: clamp(s.scale, 8, 160),
+    spacing: clamp(s.spacing, 0.25, 8),
+    rotation: s.rotation,
+    seed: s.seed,
+    backgroundColorId: s.groundColorId,
+    markColorId: s.inkColorId,
+    opacity: s.opacity,
+  };
+}
+
 export default patternBlock;

@@ -7,7 +7,7 @@ import type { GuidelineDoc } from '@/lib/guideline/document';
 import type { Identity } from '@/lib/identity/types';
 import { patternLayout } from '@/lib/pattern/layout';
 import { GuidelineDocument } from '@/components/guideline/GuidelineDocument';
-import { blockPatternSettings, patternBlock } from './definition';
+import { attrsFromPatternSettings, blockPatternSettings, patternBlock } from './definition';
 
 const identity = JSON.parse(readFileSync('tests/fixtures/identity-larchmere.json', 'utf8')) as Identity;
 const mark = identity.logos[0];
@@ -25,6 +25,14 @@ describe('the pattern block', () => {
     const attrs = patternBlock.schema.parse({ id: 'p', logoId: mark.id, layout: 'half-drop', backgroundColorId: 'c-filter-paper', markColorId: 'c-espresso' });
     expect(blockPatternSettings(attrs)).toMatchObject({ logoId: mark.id, layout: 'half-drop', groundColorId: 'c-filter-paper', inkColorId: 'c-espresso' });
     expect(blockPatternSettings(patternBlock.schema.parse({ id: 'p' }))).toBeNull();
+  });
+
+  test('a shelf pattern’s settings round-trip into the block, held to the block’s limits', () => {
+    const stored = { logoId: mark.id, layout: 'scatter', scale: 200, spacing: 0, rotation: -30, seed: 99, groundColorId: 'c-filter-paper', inkColorId: 'c-espresso', opacity: 0.5 };
+    const attrs = attrsFromPatternSettings(stored)!;
+    expect(attrs).toMatchObject({ layout: 'scatter', scale: 160, spacing: 0.25, rotation: -30, seed: 99, backgroundColorId: 'c-filter-paper', markColorId: 'c-espresso' });
+    expect(patternBlock.schema.safeParse({ id: 'p', ...attrs }).success).toBe(true);
+    expect(attrsFromPatternSettings({ logoId: 'x', layout: 'zigzag' })).toBeNull();
   });
 
   test('the page draws every placement of the tile, the copies across its edges included', () => {
