@@ -2,14 +2,12 @@
 // placed by the layout into one seamless tile, exported as SVG and, through sharp, PNG. Mock-ups and the shelf call
 // `patternTile()`; nothing else draws a pattern.
 import sharp from 'sharp';
-import { BrandLogo } from '@db/models';
 import { MAX_IMAGE_PIXELS, MAX_RENDITION_PIXELS, MAX_RENDITION_SIDE } from '@/lib/assets/kinds';
 import { AppError } from '@/lib/errors';
 import { findLogo } from '@/lib/guideline/identity';
 import { parseWith } from '@/lib/http/api';
 import type { Identity, IdentityLogo } from '@/lib/identity/types';
 import { oneColourLogo } from '@/lib/logo/knockout.server';
-import { storage } from '@/lib/storage/index.server';
 import { patternColours } from './colours';
 import { patternLayout, patternSettingsSchema, type PatternSettings, type PatternSettingsInput, type TileLayout } from './layout';
 import { tileSvg, type TileMark } from './tile';
@@ -23,12 +21,8 @@ export interface MarkFile {
 /** Where the mark's bytes come from: the working identity by default; a published version passes its own copies. */
 export type MarkReader = (brandId: string, logo: IdentityLogo) => Promise<MarkFile | null>;
 
-/** The logo as the brand keeps it now (the working identity). */
-export const draftMark: MarkReader = async (brandId, logo) => {
-  const row = await BrandLogo.findOne({ where: { id: logo.id, brandId }, attributes: ['storageKey', 'format'] });
-  const bytes = row ? await storage.get(row.storageKey) : null;
-  return row && bytes ? { bytes, format: row.format } : null;
-};
+/** The logo as the brand keeps it now (the working identity); loaded on first use, so the maths runs without a database. */
+const draftMark: MarkReader = async (brandId, logo) => (await import('./mark.server')).draftMark(brandId, logo);
 
 export interface PatternTile {
   /** One tile, no <pattern> element: repeat it edge to edge. */

@@ -52,7 +52,8 @@ export function tileSvg(layout: TileLayout, mark: TileMark, colours: { ground: s
   const uses = layout.placements
     .map((p) => {
       const turn = p.rotation ? ` rotate(${svgNumber(p.rotation)})` : '';
-      return `<use href="#${MARK_ID}" x="${svgNumber(-w / 2)}" y="${svgNumber(-h / 2)}" width="${svgNumber(w)}" height="${svgNumber(h)}" transform="translate(${svgNumber(p.x)} ${svgNumber(p.y)})${turn}"/>`;
+      // Both spellings of the reference: SVG 2 readers take href, older desktop tools only xlink:href.
+      return `<use href="#${MARK_ID}" xlink:href="#${MARK_ID}" x="${svgNumber(-w / 2)}" y="${svgNumber(-h / 2)}" width="${svgNumber(w)}" height="${svgNumber(h)}" transform="translate(${svgNumber(p.x)} ${svgNumber(p.y)})${turn}"/>`;
     })
     .join('');
   const fade = opacity < 1 ? ` opacity="${svgNumber(opacity)}"` : '';
