@@ -93,7 +93,14 @@ export function Settings(props: ReactNodeViewProps) {
           <NumberInput label="Mark size" unit="px" value={a.scale} min={8} max={160} step={1} onChange={(scale) => set({ scale })} />
           <NumberInput label="Gap" unit="× mark size" value={a.spacing} min={0.25} max={8} step={0.25} onChange={(spacing) => set({ spacing })} />
           <NumberInput label="Turn of each mark" unit="°" value={a.rotation} min={-180} max={180} step={1} onChange={(rotation) => set({ rotation })} />
-          {a.layout === 'scatter' ? <NumberInput label="Scatter seed" value={a.seed} min={0} max={2 ** 31 - 1} step={1} onChange={(seed) => set({ seed: Math.round(seed) })} /> : null}
+          {a.layout === 'scatter' ? (
+            <div className="text-sm">
+              <p className="label">Scatter</p>
+              {/* A new seed draws a new arrangement; the same seed always draws the same one. */}
+              <button type="button" className="btn-quiet" onClick={() => set({ seed: Math.floor(Math.random() * 2 ** 31) })}>Scatter again</button>
+              <p className="hint">Arrangement no. {a.seed}</p>
+            </div>
+          ) : null}
           <NumberInput label="Strength" unit="opacity" value={a.opacity} min={0.05} max={1} step={0.01} onChange={(opacity) => set({ opacity })} />
           <NumberInput label="Height" unit="px" value={a.height} min={80} max={600} step={10} onChange={(height) => set({ height })} />
           <FromShelf brandId={identity.brand.id} onPick={set} />
