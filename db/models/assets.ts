@@ -18,6 +18,8 @@ export class Asset extends Model<InferAttributes<Asset>, InferCreationAttributes
   declare height: number | null;
   /** What a logo draws, as fractions of its canvas (for clear-space avatars). */
   declare drawnBounds: Box | null;
+  /** The settings a generated pattern tile was drawn from (null for uploaded files). */
+  declare patternSettings: CreationOptional<Record<string, unknown> | null>;
   declare originalFilename: string;
   declare tags: CreationOptional<string[]>;
   declare description: string | null;
@@ -72,6 +74,7 @@ export function initAssetModels(sequelize: Sequelize): void {
       width: { type: DataTypes.DOUBLE, allowNull: true },
       height: { type: DataTypes.DOUBLE, allowNull: true },
       drawnBounds: { type: DataTypes.JSONB, allowNull: true },
+      patternSettings: { type: DataTypes.JSONB, allowNull: true },
       originalFilename: { type: DataTypes.STRING(255), allowNull: false },
       tags: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
       description: { type: DataTypes.TEXT, allowNull: true },

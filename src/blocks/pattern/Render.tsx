@@ -1,49 +1,59 @@
-// A repeat of the brand mark: size, gap, angle, row shift and colours from the block, its one-colour knockout tinted with an SVG filter.
-import type { PatternAttrs } from './definition';
-import { colorForRole, findColor, findLogo } from '@/lib/guideline/identity';
+// A repeat of the brand mark drawn from the pattern generator's layout (the same tile the export and the shelf draw):
+// the one-colour knockout of the mark, tinted with the palette ink, so inner shapes stay open to the ground.
+import { blockPatternSettings, type PatternAttrs } from './definition';
+import { findLogo } from '@/lib/guideline/identity';
 import { safeAssetUrl } from '@/lib/guideline/links';
+import { patternColours } from '@/lib/pattern/colours';
+import { patternLayout, PATTERN_LAYOUT_LABELS } from '@/lib/pattern/layout';
+import { svgNumber } from '@/lib/pattern/tile';
 import { EmptyHint, Missing, safeHex, type BlockRenderProps } from '@/components/guideline/parts';
 
 export function Render({ attrs, identity, editing, uid }: BlockRenderProps<PatternAttrs> & { uid: string }) {
-  if (!attrs.logoId) return editing ? <EmptyHint>Choose the mark the pattern repeats.</EmptyHint> : null;
-  const logo = findLogo(identity, attrs.logoId);
+  const settings = blockPatternSettings(attrs);
+  if (!settings) return editing ? <EmptyHint>Choose the mark the pattern repeats.</EmptyHint> : null;
+  const logo = findLogo(identity, settings.logoId);
   if (!logo) return <Missing what="logo" />;
-  // The one-colour knockout, so the tint fills only the ink and inner shapes stay open (not a filled silhouette).
+  // The one-colour knockout: its alpha is the ink with the inner shapes cut out, so the tint never fills a silhouette.
   const src = safeAssetUrl(logo.files.black);
   if (!src) return <Missing what="logo" detail="Its file address could not be used." />;
-  const bg = findColor(identity, attrs.backgroundColorId) ?? colorForRole(identity, 'background');
-  const ink = findColor(identity, attrs.markColorId) ?? colorForRole(identity, 'primary');
-  const removed = (attrs.backgroundColorId && !findColor(identity, attrs.backgroundColorId)) || (attrs.markColorId && !findColor(identity, attrs.markColorId));
-  const h = attrs.scale;
-  const w = (logo.canvas.width / logo.canvas.height) * h;
-  const gap = attrs.spacing * h;
-  const tileW = w + gap;
-  const tileH = h + gap;
-  const shift = attrs.offset * tileW;
+  // A chosen colour since removed from the palette: the brand's own roles stand in, and the page says so.
+  const chosen = patternColours(identity, settings);
+  const picked = chosen.ok ? chosen : patternColours(identity, { groundColorId: null, inkColorId: null });
+  if (!picked.ok) return <Missing what="colour" detail={picked.message} />;
+  const ground = safeHex(picked.colours.ground.hex.slice(0, 7), '#ffffff');
+  const ink = safeHex(picked.colours.ink.hex.slice(0, 7), '#333333');
+  const tile = patternLayout(settings, logo.canvas.width / logo.canvas.height);
+  const { width: w, height: h } = tile.mark;
   const id = `${uid}-pattern`;
-  const marks = [
-    [gap / 2, gap / 2],
-    [gap / 2 + shift, tileH + gap / 2],
-    [gap / 2 + shift - tileW, tileH + gap / 2],
-  ];
   return (
     <figure>
-      <svg width="100%" height={attrs.height} role="img" aria-label={`Pattern of ${logo.name}`} className="block rounded-xl border border-black/10">
+      <svg width="100%" height={attrs.height} role="img" aria-label={`Pattern of ${logo.name}, ${PATTERN_LAYOUT_LABELS[settings.layout].toLowerCase()}`} className="block rounded-xl border border-black/10">
         <defs>
           <filter id={`${id}-ink`}>
-            <feFlood floodColor={safeHex(ink?.hex, '#333333')} floodOpacity={attrs.opacity} />
+            <feFlood floodColor={ink} floodOpacity={settings.opacity} />
             <feComposite in2="SourceAlpha" operator="in" />
           </filter>
-          <pattern id={id} width={tileW} height={tileH * 2} patternUnits="userSpaceOnUse" patternTransform={`rotate(${attrs.rotation})`}>
+          <pattern id={id} width={tile.width} height={tile.height} patternUnits="userSpaceOnUse">
             <g filter={`url(#${id}-ink)`}>
-              {marks.map(([x, y], i) => <image key={i} href={src} x={x} y={y} width={w} height={h} />)}
+              {tile.placements.map((p, i) => (
+                <image
+                  key={i}
+                  href={src}
+                  x={svgNumber(-w / 2)}
+                  y={svgNumber(-h / 2)}
+                  width={svgNumber(w)}
+                  height={svgNumber(h)}
+                  preserveAspectRatio="xMidYMid meet"
+                  transform={`translate(${svgNumber(p.x)} ${svgNumber(p.y)})${p.rotation ? ` rotate(${svgNumber(p.rotation)})` : ''}`}
+                />
+              ))}
             </g>
           </pattern>
         </defs>
-        <rect width="100%" height="100%" fill={safeHex(bg?.hex, '#ffffff')} />
+        <rect width="100%" height="100%" fill={ground} />
         <rect width="100%" height="100%" fill={`url(#${id})`} />
       </svg>
-      {removed ? <div className="mt-2"><Missing what="colour" detail="The pattern falls back to the brand's own colours." /></div> : null}
+      {chosen.ok ? null : <div className="mt-2"><Missing what="colour" detail="The pattern falls back to the brand's own colours." /></div>}
     </figure>
   );
 }

@@ -48,6 +48,8 @@ export interface AssetView {
   /** Whether renditions (width, format, variants) can be asked for. */
   renderable: boolean;
   files: { original: string; preview: string | null };
+  /** For a pattern tile Plumbline drew: the settings it was drawn from (null for uploads). */
+  patternSettings: Record<string, unknown> | null;
 }
 
 const RENDERABLE = new Set(['svg', 'png', 'jpeg', 'webp']);
@@ -75,6 +77,7 @@ export function assetView(row: Asset): AssetView {
     stateChangedAt: row.stateChangedAt?.toISOString() ?? null,
     renderable,
     files: { original: file, preview: renderable ? `${file}?format=png&width=${PREVIEW_MAX_WIDTH}&preview=1` : null },
+    patternSettings: row.patternSettings ?? null,
   };
 }
 

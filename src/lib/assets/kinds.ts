@@ -6,8 +6,11 @@ import { acceptAttribute, FORMAT_TYPES, UPLOAD_RULES } from '@/lib/uploads/rules
 export const ASSET_FORMATS = UPLOAD_RULES.shelf.accept;
 export type AssetFormat = (typeof ASSET_FORMATS)[number];
 
-/** What an asset is for: logos get every rendition, images get web sizes, the rest are served as uploaded. */
-export const ASSET_KINDS = ['logo', 'image', 'document', 'font', 'archive'] as const;
+/**
+ * What an asset is for: logos get every rendition, images get web sizes, the rest are served as uploaded. Patterns are
+ * tiles Plumbline drew from the mark (never uploaded), kept with their settings.
+ */
+export const ASSET_KINDS = ['logo', 'image', 'document', 'font', 'archive', 'pattern'] as const;
 export type AssetKind = (typeof ASSET_KINDS)[number];
 
 const DEFAULT_KIND: Record<AssetFormat, AssetKind> = { svg: 'logo', png: 'image', jpeg: 'image', webp: 'image', pdf: 'document', woff2: 'font', woff: 'font', ttf: 'font', otf: 'font', zip: 'archive' };

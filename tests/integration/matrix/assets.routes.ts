@@ -24,5 +24,14 @@ export default withoutClientWork([
   { method: 'GET', file: 'assets/[assetId]/file.ts', path: (f) => `/api/assets/${f.assetId}/file?format=png&width=64`, expect: downloaders(200) },
   // Packs a zip of what the brand has; it writes the download log only.
   { method: 'POST', file: 'brands/[id]/bundles.ts', path: (f) => `${b(f)}/bundles`, body: (f) => ({ assetIds: [f.assetId] }), expect: downloaders(200), mutates: false },
+  // A pattern tile of the mark: members who read the draft preview it; makers put it on the shelf (a new seed each time).
+  { method: 'GET', file: 'brands/[id]/patterns/index.ts', path: (f) => `${b(f)}/patterns?logoId=${f.logoId}&layout=grid&format=svg`, expect: only(200, ['owner', 'editor', 'reviewer']) },
+  {
+    method: 'POST',
+    file: 'brands/[id]/patterns/index.ts',
+    path: (f) => `${b(f)}/patterns`,
+    body: (f) => ({ settings: { logoId: f.logoId, layout: 'scatter', seed: Math.floor(Math.random() * 2 ** 31) } }),
+    expect: makers(201),
+  },
   { method: 'GET', file: 'brands/[id]/downloads/index.ts', path: (f) => `${b(f)}/downloads`, expect: only(200, ['owner']) },
 ] satisfies Route[]);

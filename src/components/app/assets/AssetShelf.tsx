@@ -43,7 +43,7 @@ const STATE_BADGE: Record<AssetState, string> = {
   approved: 'bg-plumb-wash text-plumb-deep',
   retired: 'bg-paper text-ink-faint line-through',
 };
-const KIND_LABEL: Record<AssetKind, string> = { logo: 'Logo', image: 'Image', document: 'Document', font: 'Font', archive: 'Archive' };
+const KIND_LABEL: Record<AssetKind, string> = { logo: 'Logo', image: 'Image', document: 'Document', font: 'Font', archive: 'Archive', pattern: 'Pattern' };
 // The site's locale, so the server's render and the browser's agree.
 const size = (bytes: number) => formatFileSize(bytes, SITE_LOCALE);
 
