@@ -6,6 +6,7 @@ import { composeMockup, type Composed, type MockupSources } from '@/lib/mockups/
 import { mockupTemplate, type MockupTemplate } from '@/lib/mockups/templates';
 import { pageSvg } from '@/lib/mockups/svg';
 import { photoAddresses } from '@/lib/mockups/photos';
+import { mockupDownloadHref } from '@/lib/mockups/links';
 import { EmptyHint, Note, type BlockRenderProps } from '@/components/guideline/parts';
 
 function composeSafely(template: MockupTemplate, attrs: ApplicationsAttrs, identity: BlockRenderProps<ApplicationsAttrs>['identity'], sources: MockupSources): Composed | { ok: false; broken: string } {
@@ -16,15 +17,20 @@ function composeSafely(template: MockupTemplate, attrs: ApplicationsAttrs, ident
   }
 }
 
-/** Where members download a piece (the editor only; the published site does not offer these files yet). */
-function downloadHref(brandId: string, template: MockupTemplate, attrs: ApplicationsAttrs, format: 'png' | 'pdf'): string {
-  const q = new URLSearchParams({ format });
-  if (attrs.logoId) q.set('logoId', attrs.logoId);
-  if (attrs.photoIds.length) q.set('photos', attrs.photoIds.join(','));
-  return `/api/brands/${encodeURIComponent(brandId)}/mockups/${encodeURIComponent(template.key)}?${q}`;
+/** PNG for every piece and PDF for print pieces, where the page offers downloads (the editor, a published version). */
+function Downloads({ identity, template, attrs, editing }: { identity: BlockRenderProps<ApplicationsAttrs>['identity']; template: MockupTemplate; attrs: ApplicationsAttrs; editing: boolean }) {
+  const png = mockupDownloadHref(identity, template.key, 'png', attrs, editing);
+  const pdf = template.medium === 'print' ? mockupDownloadHref(identity, template.key, 'pdf', attrs, editing) : null;
+  if (!png) return null;
+  return (
+    <span className="ml-2 inline-flex gap-3">
+      <a href={png} download className="underline">PNG</a>
+      {pdf ? <a href={pdf} download className="underline">PDF with bleed and crop marks</a> : null}
+    </span>
+  );
 }
 
-export function Render({ attrs, identity, editing }: BlockRenderProps<ApplicationsAttrs>) {
+export function Render({ attrs, identity, mode, editing }: BlockRenderProps<ApplicationsAttrs>) {
   const templates = attrs.templates.flatMap((key) => mockupTemplate(key) ?? []);
   if (!templates.length) return editing ? <EmptyHint>Choose the mock-ups to show.</EmptyHint> : null;
   if (!identity.logos.length) return editing ? <EmptyHint>Add a logo on the identity screen; the mock-ups are built around it.</EmptyHint> : null;
@@ -54,12 +60,7 @@ export function Render({ attrs, identity, editing }: BlockRenderProps<Applicatio
             )}
             <figcaption className="text-sm">
               <span className="font-semibold">{template.name}</span> · {template.size.named}
-              {editing && composed.ok ? (
-                <span className="ml-2 inline-flex gap-3">
-                  <a href={downloadHref(identity.brand.id, template, attrs, 'png')} download className="underline">PNG</a>
-                  {template.medium === 'print' ? <a href={downloadHref(identity.brand.id, template, attrs, 'pdf')} download className="underline">PDF with bleed and crop marks</a> : null}
-                </span>
-              ) : null}
+              {composed.ok && mode !== 'print' ? <Downloads identity={identity} template={template} attrs={attrs} editing={!!editing} /> : null}
             </figcaption>
           </figure>
         );

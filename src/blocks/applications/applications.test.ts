@@ -6,6 +6,7 @@ import { describe, expect, test } from 'vitest';
 import { blockRefs } from '@/blocks';
 import { validateGuideline } from '@/lib/guideline/document';
 import type { Identity } from '@/lib/identity/types';
+import { withVersionUrls } from '@/lib/publishing/snapshot-urls';
 import { applicationsSchema, STARTER_MOCKUPS } from './definition';
 import { Render } from './Render';
 
@@ -43,12 +44,16 @@ describe('what it draws', () => {
     expect(out).toContain('1080 × 1080 px');
   });
 
-  test('downloads are offered in the editor (PNG, and PDF for print pieces), not on the published page', () => {
+  test('downloads: the draft route in the editor, the version's own address on the site, none in the print edition', () => {
     const editing = html(attrs({ templates: ['business-card', 'social-post'] }), identity, true);
     expect(editing).toContain(`/api/brands/${identity.brand.id}/mockups/business-card?format=pdf`);
     expect(editing).toContain(`/api/brands/${identity.brand.id}/mockups/social-post?format=png`);
     expect(editing).not.toContain('social-post?format=pdf');
-    expect(html(attrs())).not.toContain('/api/brands/');
+    const published = withVersionUrls(identity, 'larchmere', 3);
+    const site = html(attrs({ templates: ['business-card'] }), published);
+    expect(site).toContain('/b/larchmere/v/3/mockups/business-card?format=pdf');
+    const print = renderToStaticMarkup(createElement(Render, { attrs: attrs(), identity: published, mode: 'print' }));
+    expect(print).not.toContain('/mockups/');
   });
 
   test('a piece the logo cannot fit says so, with the sizes, instead of drawing', () => {

@@ -1,6 +1,7 @@
 // Mock-ups drawn by Chromium: a PNG for screen (the trimmed pieces side by side) and, for print pieces, a PDF with one
 // page per piece at trim + 3 mm bleed on every side, crop marks in the bleed, and TrimBox/BleedBox set (ISO 32000-1 §14.11.2).
 import { PDFDocument } from 'pdf-lib';
+import type { Page } from 'puppeteer-core';
 import { printBrowser, releaseBrowser } from '@/lib/logo/print-files.server';
 import { mmToPt } from '@/lib/type/units';
 import { AppError } from '@/lib/errors';
@@ -16,7 +17,7 @@ const shell = (fontCss: string, pageCss: string, body: string) =>
   `<!doctype html><html><head><meta charset="utf-8"><style>${fontCss}\n${pageCss}</style></head><body>${body}</body></html>`;
 
 /** Loads our own HTML into a fresh page; only data: addresses load (the sources are embedded), fonts settle before drawing. */
-async function withPage<T>(html: string, viewport: { width: number; height: number; deviceScaleFactor: number } | null, work: (page: import('puppeteer-core').Page) => Promise<T>): Promise<T> {
+async function withPage<T>(html: string, viewport: { width: number; height: number; deviceScaleFactor: number } | null, work: (page: Page) => Promise<T>): Promise<T> {
   let browser;
   try {
     browser = await printBrowser();
