@@ -26,12 +26,19 @@ export function roleHex(identity: Identity, role: ColorRole): string {
 /** WCAG 2.2 SC 1.4.3: body text needs 4.5:1 against its ground. */
 export const TEXT_CONTRAST = 4.5;
 
-/** The wanted text colour when it reads on the ground (4.5:1), else whichever of the text and background roles reads best. */
+/** The wanted text colour when it reads on the ground (4.5:1), else the brand's text or background colour that does, else black or white. */
 export function readableOn(identity: Identity, wanted: string, ground: string): string {
   if (contrastRatio(wanted, ground) >= TEXT_CONTRAST) return wanted;
-  const candidates = [roleHex(identity, 'text'), roleHex(identity, 'background'), '#ffffff', '#111111'];
-  return candidates.reduce((best, c) => (contrastRatio(c, ground) > contrastRatio(best, ground) ? c : best), wanted);
+  const brand = [roleHex(identity, 'text'), roleHex(identity, 'background')].find((c) => contrastRatio(c, ground) >= TEXT_CONTRAST);
+  if (brand) return brand;
+  return contrastRatio('#ffffff', ground) >= contrastRatio('#000000', ground) ? '#ffffff' : '#000000';
 }
 
 /** A ground is dark when white stands on it at 3:1 or more (WCAG 2.2 SC 1.4.11, graphics). */
 export const isDarkGround = (ground: string): boolean => contrastRatio('#ffffff', ground) >= 3;
+
+/** A colour laid over a ground at some strength (plain sRGB mixing, common practice for a flat tint). */
+export function tint(hex: string, ground: string, strength: number): string {
+  const ch = (h: string, i: number) => parseInt(h.slice(1 + 2 * i, 3 + 2 * i), 16);
+  return `#${[0, 1, 2].map((i) => Math.round(ch(hex, i) * strength + ch(ground, i) * (1 - strength)).toString(16).padStart(2, '0')).join('')}`;
+}

@@ -5,7 +5,7 @@ import { fontStack, markLogo, primaryLogo, typefaceForRole, findLogo } from '@/l
 import { ptToMm, pxToPt } from '@/lib/type/units';
 import { AppError } from '@/lib/errors';
 import { boxUnit, trimSize, type LogoElement, type MockupElement, type MockupTemplate, type TextElement } from './templates';
-import { isDarkGround, readableOn, roleHex } from './colour';
+import { isDarkGround, readableOn, roleHex, tint } from './colour';
 import { mockupPattern } from './pattern';
 
 export type LogoFile = 'original' | 'white' | 'onDark';
@@ -184,8 +184,8 @@ export function composeMockup(template: MockupTemplate, identity: Identity, sour
       else if (element.type === 'pattern') items.push({ kind: 'fill', role: 'pattern', box, hex: pattern.hex });
       else if (element.type === 'photo') {
         const href = sources.photos.length ? sources.photos[element.index % sources.photos.length] : null;
-        // No photographs on the shelf yet: a panel tinted with the brand's secondary colour holds the place.
-        items.push(href ? { kind: 'photo', box, href } : { kind: 'fill', role: 'photo-stand-in', box, hex: roleHex(identity, 'secondary') });
+        // No photographs chosen yet: a panel tinted with the brand's secondary colour holds the place.
+        items.push(href ? { kind: 'photo', box, href } : { kind: 'fill', role: 'photo-stand-in', box, hex: tint(roleHex(identity, 'secondary'), roleHex(identity, 'background'), 0.45) });
       } else if (element.type === 'text') {
         const face = typefaceForRole(identity, element.face) ?? typefaceForRole(identity, element.face === 'heading' ? 'body' : 'heading');
         const { fontSize, lineHeight } = typeSize(identity, template, element);
