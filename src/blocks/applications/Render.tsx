@@ -7,7 +7,8 @@ import { mockupTemplate, type MockupTemplate } from '@/lib/mockups/templates';
 import { pageSvg } from '@/lib/mockups/svg';
 import { photoAddresses } from '@/lib/mockups/photos';
 import { mockupDownloadHref } from '@/lib/mockups/links';
-import { EmptyHint, Note, type BlockRenderProps } from '@/components/guideline/parts';
+import { MOCKUP_PRINT_NOTE } from '@/lib/cautions';
+import { Caution, EmptyHint, Note, type BlockRenderProps } from '@/components/guideline/parts';
 
 function composeSafely(template: MockupTemplate, attrs: ApplicationsAttrs, identity: BlockRenderProps<ApplicationsAttrs>['identity'], sources: MockupSources): Composed | { ok: false; broken: string } {
   try {
@@ -66,7 +67,7 @@ export function Render({ attrs, identity, mode, editing }: BlockRenderProps<Appl
         );
       })}
       {templates.some((t) => t.medium === 'print') ? (
-        <p className="text-sm opacity-80">Print pieces are mock-ups: proof colours on the press and stock before a run, and send the printer their own spec for bleed and marks.</p>
+        <Caution>{MOCKUP_PRINT_NOTE}</Caution>
       ) : null}
       <Note text={attrs.note} />
     </div>
