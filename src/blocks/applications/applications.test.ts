@@ -44,7 +44,7 @@ describe('what it draws', () => {
     expect(out).toContain('1080 × 1080 px');
   });
 
-  test('downloads: the draft route in the editor, the version's own address on the site, none in the print edition', () => {
+  test('downloads: the draft route in the editor, the version’s own address on the site, none in the print edition', () => {
     const editing = html(attrs({ templates: ['business-card', 'social-post'] }), identity, true);
     expect(editing).toContain(`/api/brands/${identity.brand.id}/mockups/business-card?format=pdf`);
     expect(editing).toContain(`/api/brands/${identity.brand.id}/mockups/social-post?format=png`);

@@ -143,7 +143,7 @@ function placeLogo(
       message:
         `${where} cannot show “${logo.name}” as the guidelines ask: its logo area is ${sizeText(available, unit)}, ` +
         `but the logo at its minimum width of ${minimum} with its clear space (${logo.clearSpace.multiple} × ${logo.clearSpace.unitLabel || 'the clear-space unit'} on every side) ` +
-        `needs ${sizeText(needed, unit)}. Choose a logo with a smaller minimum size (such as the mark) or leave this template out.`,
+        `needs ${sizeText(needed, unit)}. ${logo.variant === 'mark' ? 'Leave this template out, or set a smaller minimum size if the mark still reads there.' : 'Choose a logo with a smaller minimum size (such as the mark) or leave this template out.'}`,
     };
   }
   const w = cs.width * scale;
