@@ -11,7 +11,7 @@ export const STARTER_MOCKUPS = ['business-card', 'letterhead-a4', 'envelope-dl',
 
 export const applicationsBlock = defineBlock({
   type: 'applications',
-  order: 130,
+  order: 115,
   label: 'Applications',
   description: 'Mock-ups of stationery, social posts, an editorial and a sign, filled from the identity.',
   group: 'imagery',
