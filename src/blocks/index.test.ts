@@ -17,6 +17,7 @@ describe('block registry', () => {
       'typography',
       'imagery',
       'pattern',
+      'applications',
       'downloads',
     ]);
     expect(new Set(BLOCKS.map((b) => b.order)).size).toBe(BLOCKS.length);

@@ -35,3 +35,8 @@ export const FONT_LICENCE_CAUTION =
 export const TRADEMARK_CAUTION =
   'Plumbline does not check trademarks. Before launch, have a trademark attorney search and clear the name and mark ' +
   'in every market where the brand will be used.';
+
+/** Shown under print mock-ups: a picture of the identity in use, not artwork for the press. */
+export const MOCKUP_PRINT_NOTE =
+  'Mock-ups show the identity in use; they are not print-ready artwork. Their PDFs are RGB with 3 mm bleed and crop marks ' +
+  'inside the bleed: confirm bleed, marks, colours and stock with your printer and approve a physical proof before a print run.';

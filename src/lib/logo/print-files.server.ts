@@ -30,8 +30,8 @@ const ghostscriptPath = () => process.env.GHOSTSCRIPT_PATH || '/usr/bin/gs';
 let browser: Promise<Browser> | null = null;
 let idle: NodeJS.Timeout | null = null;
 
-/** A Chromium for print files, started on first use and closed after half a minute without work. */
-function printBrowser(): Promise<Browser> {
+/** A Chromium for print files and mock-ups, started on first use and closed after half a minute without work. */
+export function printBrowser(): Promise<Browser> {
   if (!existsSync(chromiumPath())) throw new LogoError('logo_unreadable', `Print files need Chromium at ${chromiumPath()} (Debian's "chromium" package).`);
   if (idle) clearTimeout(idle);
   browser ??= puppeteer
@@ -43,7 +43,7 @@ function printBrowser(): Promise<Browser> {
   return browser;
 }
 
-function releaseBrowser() {
+export function releaseBrowser() {
   if (idle) clearTimeout(idle);
   idle = setTimeout(() => {
     const closing = browser;

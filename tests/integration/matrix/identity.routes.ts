@@ -10,6 +10,7 @@ const b = (f: { brandId: string }) => `/api/brands/${f.brandId}`;
 export default withoutClientWork([
   { method: 'GET', file: 'brands/[id]/identity.ts', path: (f) => `${b(f)}/identity`, expect: readers },
   { method: 'GET', file: 'brands/[id]/palette-report.ts', path: (f) => `${b(f)}/palette-report`, expect: readers },
+  { method: 'GET', file: 'brands/[id]/mockups/[template].ts', path: (f) => `${b(f)}/mockups/social-post?format=png`, expect: readers },
   { method: 'GET', file: 'brands/[id]/tokens.ts', path: (f) => `${b(f)}/tokens?format=css`, expect: readers },
   { method: 'POST', file: 'brands/[id]/colors/index.ts', path: (f) => `${b(f)}/colors`, body: () => ({ name: 'Crema', value: '#e9d8b8' }), expect: makers(201) },
   { method: 'PATCH', file: 'brands/[id]/colors/[colorId].ts', path: (f) => `${b(f)}/colors/${f.colorId}`, body: () => ({ name: 'Deep ink' }), expect: makers(200) },
