@@ -12,6 +12,7 @@ import { hashToken, longDate, newToken } from '@/lib/invitations/tokens';
 import { sendTemplate, siteLink, type MailOutcome } from '@/lib/mail/mail.server';
 import { storedHex } from '@/lib/safe/values';
 import { routeContrast } from './contrast';
+import { matchRows } from './replace';
 import type { createRouteSetBody, routeDecisionBody, routeSchema, sendRoutesBody, updateRouteSetBody } from './schemas';
 import type { PublicRouteSet, RouteSetView, RouteView } from './views';
 
@@ -214,20 +215,6 @@ export async function decideRouteSet(token: string, input: z.output<typeof route
 
 /** A stored colour as the audit keeps it, so the palette before a replacement can be typed back in. */
 const snapshot = (c: BrandColor) => ({ id: c.id, name: c.name, value: c.value, hex: c.hex, role: c.role, cmykOverride: c.cmykOverride, spot: c.spot, position: c.position });
-
-/**
- * Which existing colour row each of the route's colours takes over: first a row with the same role, then the rest in
- * palette order. Rows keep their ids, so guideline blocks that point at "the primary colour" show the new primary.
- */
-export function matchRows<T extends { role: string | null }>(existing: readonly T[], incoming: readonly { role: string | null }[]): (T | null)[] {
-  const free = [...existing];
-  const take = (pick: (row: T) => boolean) => {
-    const i = free.findIndex(pick);
-    return i < 0 ? null : free.splice(i, 1)[0];
-  };
-  const byRole = incoming.map((c) => (c.role ? take((row) => row.role === c.role) : null));
-  return byRole.map((found) => found ?? take(() => true));
-}
 
 /**
  * Replace the brand's colours with the chosen route's, in one transaction: nothing changes unless everything does.
