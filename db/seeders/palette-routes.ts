@@ -65,7 +65,7 @@ export async function seedPaletteRoutes(sequelize: Sequelize, people: { designer
     const palette = await BrandColor.findAll({ where: { brandId: brand.id }, order: [['position', 'ASC']], transaction });
     await log('paletteRoutes.create', set.id, people.designer, { title: set.title, routes: [roastery.name, valley.name] });
     await log('paletteRoutes.send', set.id, people.designer, { contactEmail: 'priya@larchmere.example' });
-    await log('paletteRoutes.decide', set.id, null, { chosenRouteId: roastery.id, chosenRoute: roastery.name, by: 'Priya Raman', email: 'priya@larchmere.example', comments: 1 });
+    await log('paletteRoutes.decide', set.id, null, { chosenRouteId: roastery.id, chosenRoute: roastery.name, by: 'Priya Raman', email: 'priya@larchmere.example', comment: set.decisionComment, routeComments: [{ route: roastery.name, comment: roastery.clientComment }] });
     await log('palette.replace', set.id, people.designer, { routeId: roastery.id, route: roastery.name, before: palette.map((c) => ({ id: c.id, name: c.name, value: c.value, hex: c.hex, role: c.role })), after: ROASTERY });
     await sequelize.query(`UPDATE palette_route_sets SET created_at = now() - interval '7 days' WHERE id = :id`, { replacements: { id: set.id }, transaction });
   });

@@ -102,8 +102,14 @@ export async function updateRouteSet(caller: Caller, brand: Brand, setId: string
   await sequelize.transaction(async (t) => {
     await set.update({ ...(body.title !== undefined ? { title: body.title } : {}), ...(body.intro !== undefined ? { intro: body.intro } : {}) }, { transaction: t });
     if (body.routes) {
-      await PaletteRoute.destroy({ where: { setId: set.id }, transaction: t });
-      await PaletteRoute.bulkCreate(body.routes.map((r, i) => ({ setId: set.id, position: i, name: r.name, rationale: r.rationale ?? '', colors: colors![i], clientComment: null })), { transaction: t });
+      // Routes are changed in place by position, so a client's note on a route stays with it.
+      const existing = await PaletteRoute.findAll({ where: { setId: set.id }, order: [['position', 'ASC']], transaction: t });
+      for (const [i, r] of body.routes.entries()) {
+        const fields = { position: i, name: r.name, rationale: r.rationale ?? '', colors: colors![i] };
+        if (existing[i]) await existing[i].update(fields, { transaction: t });
+        else await PaletteRoute.create({ ...fields, setId: set.id, clientComment: null }, { transaction: t });
+      }
+      for (const extra of existing.slice(body.routes.length)) await extra.destroy({ transaction: t });
     }
     await audit(auditOf(caller, brand, 'paletteRoutes.update', set.id, { title: body.title, routes: body.routes?.map((r) => r.name) }), t);
   });
@@ -118,7 +124,10 @@ export async function deleteRouteSet(caller: Caller, brand: Brand, setId: string
   });
 }
 
-/** E-mail the routes to a client contact; a new link replaces any earlier one and reopens a set sent back with comments. */
+/**
+ * E-mail the routes to a client contact; a new link replaces any earlier one and reopens a set sent back with comments
+ * (the earlier answer stays in the audit trail and the designer's mail; notes on routes stay on the routes).
+ */
 export async function sendRouteSet(caller: Caller, brand: Brand, setId: string, body: z.output<typeof sendRoutesBody>): Promise<{ set: RouteSetView; mail: MailOutcome }> {
   const set = await setOf(brand, setId);
   refuseChosen(set);
@@ -127,7 +136,6 @@ export async function sendRouteSet(caller: Caller, brand: Brand, setId: string, 
   const expiresAt = new Date(Date.now() + ROUTE_LINK_DAYS * 86_400_000);
   await sequelize.transaction(async (t) => {
     await set.update({ status: 'sent', contactName: body.contactName, contactEmail: body.contactEmail, tokenHash: hash, expiresAt, sentAt: new Date(), decidedAt: null, decidedByName: null, decisionComment: '', chosenRouteId: null }, { transaction: t });
-    await PaletteRoute.update({ clientComment: null }, { where: { setId: set.id }, transaction: t });
     await audit(auditOf(caller, brand, 'paletteRoutes.send', set.id, { contactEmail: body.contactEmail }), t);
   });
   const mail = await sendTemplate(
@@ -187,7 +195,7 @@ export async function decideRouteSet(token: string, input: z.output<typeof route
     );
     if (!changed) return false;
     for (const c of comments) await PaletteRoute.update({ clientComment: c.comment }, { where: { id: c.id }, transaction: t });
-    await audit(auditOf(null, brand, 'paletteRoutes.decide', set.id, { chosenRouteId: chosen?.id ?? null, chosenRoute: chosen?.name ?? null, by: input.name, email: set.contactEmail, comments: comments.length }), t);
+    await audit(auditOf(null, brand, 'paletteRoutes.decide', set.id, { chosenRouteId: chosen?.id ?? null, chosenRoute: chosen?.name ?? null, by: input.name, email: set.contactEmail, comment: input.comment?.trim() ?? '', routeComments: comments.map((c) => ({ route: known.get(c.id)!.name, comment: c.comment })) }), t);
     return true;
   });
   if (!decided) throw new ApiError(409, 'already_decided', 'An answer was already recorded on this link. Your designer will be in touch; they can send a new link if more is needed.');

@@ -86,10 +86,10 @@ function Choice({ token, initial }: { token: string; initial: PublicRouteSet }) 
             <textarea id="answer-comment" className="field min-h-24" maxLength={maxLengthOf(limits.comment)} {...register('comment')} />
             {problem && <p className="error-text" role="alert">{problem}</p>}
             <div className="mt-5 flex flex-wrap gap-3">
-              <button type="button" className="btn-primary" disabled={answer.isPending || !choice} onClick={send(true)}>
+              <button type="button" className="btn-primary" disabled={answer.isPending || !choice} onClick={() => void send(true)()}>
                 {choice ? `Go with “${set.routes.find((r) => r.id === choice)?.name ?? ''}”` : 'Pick a route above'}
               </button>
-              <button type="button" className="btn-quiet" disabled={answer.isPending} onClick={send(false)}>Send comments, choose later</button>
+              <button type="button" className="btn-quiet" disabled={answer.isPending} onClick={() => void send(false)()}>Send comments, choose later</button>
             </div>
             <p className="mt-3 text-xs text-ink-soft">You can answer once on this link. Your designer can send a new link if you change your mind.</p>
           </section>

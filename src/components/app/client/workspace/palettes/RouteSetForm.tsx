@@ -61,7 +61,7 @@ export function RouteSetForm({ brandId, set, onNote, onDone }: { brandId: string
               <div><label className="label" htmlFor={`r-name-${key}-${n}`}>Route name</label><input id={`r-name-${key}-${n}`} className="field" maxLength={maxLengthOf(routeSchema.shape.name)} {...register(`routes.${n}.name` as const)} /></div>
               <div><label className="label" htmlFor={`r-why-${key}-${n}`}>Why this route</label><textarea id={`r-why-${key}-${n}`} className="field min-h-16" maxLength={maxLengthOf(routeSchema.shape.rationale)} {...register(`routes.${n}.rationale` as const)} /></div>
             </div>
-            <RouteColors control={control} register={register} route={n} idPrefix={`${key}-${n}`} />
+            <RouteColors control={control} register={register} route={n} />
             {routes.fields.length > MIN_ROUTES && <button type="button" className="mt-2 text-sm text-danger" onClick={() => routes.remove(n)}>Remove route {n + 1}</button>}
           </fieldset>
         ))}
@@ -74,7 +74,7 @@ export function RouteSetForm({ brandId, set, onNote, onDone }: { brandId: string
   );
 }
 
-function RouteColors({ control, register, route, idPrefix }: { control: Control<NewSet>; register: UseFormRegister<NewSet>; route: number; idPrefix: string }) {
+function RouteColors({ control, register, route }: { control: Control<NewSet>; register: UseFormRegister<NewSet>; route: number }) {
   const colors = useFieldArray({ control, name: `routes.${route}.colors` as const });
   return (
     <div className="mt-3">
@@ -88,7 +88,7 @@ function RouteColors({ control, register, route, idPrefix }: { control: Control<
               <option value="">no role</option>
               {COLOR_ROLES.map((r) => <option key={r} value={r}>{r}</option>)}
             </select>
-            <button type="button" className="px-1 text-sm text-ink-faint hover:text-danger disabled:opacity-40" disabled={colors.fields.length <= MIN_ROUTE_COLORS} aria-label={`Remove colour ${i + 1} of route ${route + 1}`} onClick={() => colors.remove(i)} id={`${idPrefix}-rm-${i}`}>×</button>
+            <button type="button" className="px-1 text-sm text-ink-faint hover:text-danger disabled:opacity-40" disabled={colors.fields.length <= MIN_ROUTE_COLORS} aria-label={`Remove colour ${i + 1} of route ${route + 1}`} onClick={() => colors.remove(i)}>×</button>
           </li>
         ))}
       </ul>
