@@ -39,7 +39,7 @@ export function PaletteRouteCard({ route, label, chosen = false, children }: { r
             const ground = byId.get(p.ground)!;
             return (
               <tr key={`${p.text}/${p.ground}`}>
-                <td className="py-1.5 pr-2"><span className="inline-block rounded px-2 py-0.5 font-bold" style={{ color: text.hex, background: ground.hex }} aria-hidden="true">Aa</span></td>
+                <td className="py-1.5 pr-2"><span className="inline-block rounded px-2 py-0.5 font-bold" style={{ color: text.hex, background: ground.hex }} aria-hidden="true" data-sample="contrast">Aa</span></td>
                 <td className="py-1.5 pr-2">{text.name} <span className="text-ink-soft">on</span> {ground.name}</td>
                 <td className="py-1.5 pr-2 font-mono tabular-nums">{p.shown}:1</td>
                 <td className="py-1.5"><span className={`rounded-full px-2 py-0.5 text-xs font-semibold ${VERDICT_STYLE[p.verdict]}`}>{VERDICT_WORDS[p.verdict]}</span></td>
