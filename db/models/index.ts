@@ -22,6 +22,7 @@ export interface LogoVariantFile {
 import type { FontMetrics } from '@/lib/type/metrics';
 import { initAssetModels } from './assets';
 import { initCollaborationModels } from './collaboration';
+import { initPaletteRouteModels } from './palette-routes';
 import { initPublishingModels } from './publishing';
 import { initAddressModels } from './addresses';
 
@@ -301,6 +302,7 @@ export function initModels(sequelize: Sequelize): void {
   initCollaborationModels(sequelize);
   initPublishingModels(sequelize);
   initAddressModels(sequelize);
+  initPaletteRouteModels(sequelize);
 }
 
 /** A Sequelize instance on PostgreSQL through pg, with the models bound. */
@@ -317,3 +319,4 @@ export function connect(databaseUrl: string, opts: { logging?: boolean } = {}): 
 export * from './publishing';
 export * from './assets';
 export * from './addresses';
+export * from './palette-routes';

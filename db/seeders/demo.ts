@@ -6,6 +6,7 @@ import type { BrandRole } from '@/lib/auth/roles';
 import { Brand, BrandMember, Studio, StudioMember } from '@db/models';
 import { seedIdentity } from './identity';
 import { seedCollaboration } from './collaboration';
+import { seedPaletteRoutes } from './palette-routes';
 
 export const DEMO_PASSWORD = 'plumbline-demo';
 
@@ -84,5 +85,6 @@ export async function seedDemo(sequelize: Sequelize, settings: AuthSettings, fil
     }
   });
   await seedCollaboration(sequelize, { designer: ids.designer, editor: ids.editor, reviewer: ids.reviewer });
+  await seedPaletteRoutes(sequelize, { designer: ids.designer });
   return { created };
 }

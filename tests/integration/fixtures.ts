@@ -53,6 +53,10 @@ export interface Fixture {
   boardItemId: string;
   boardImageId: string;
   boardToken: string;
+  /** A set of two palette routes, sent (tests/integration/client-fixture.ts). */
+  routeSetId: string;
+  routeId: string;
+  routeSetToken: string;
   reviewId: string;
   commentId: string;
 }
@@ -67,6 +71,9 @@ const NO_CLIENT_WORK: Awaited<ReturnType<typeof makeClientWork>> = {
   boardItemId: '',
   boardImageId: '',
   boardToken: '',
+  routeSetId: '',
+  routeId: '',
+  routeSetToken: '',
   reviewId: '',
   commentId: '',
 };

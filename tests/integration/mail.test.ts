@@ -21,6 +21,7 @@ const everyValue = {
   contactName: 'Cam', senderName: 'Sen', studioName: 'Studio', briefTitle: 'Brief', message: 'Hi', boardTitle: 'Board', itemCount: 3,
   outcomeWords: 'approved', kept: 2, dropped: 1, comment: 'Fine', reviewerName: 'Rev', requesterName: 'Req', revision: 4, deciderName: 'Dec',
   note: 'Note', versionNumber: 2, publisherName: 'Pub', summary: ['one'], followLink: 'http://127.0.0.1/f', name: 'Nia', hours: 24,
+  setTitle: 'Routes', routeCount: 2, routeNames: ['Ash', 'Oak'], chosenName: 'Oak', routeComments: ['Ash: too cold'],
 };
 
 describe('templates', () => {
@@ -32,7 +33,7 @@ describe('templates', () => {
     expect(renderTemplate('{{#xs}}Changes:{{/xs}}{{#xs}} [{{.}}]{{/xs}}{{^ys}} none{{/ys}}', { xs: ['a', 'b'], ys: [] }, 'text')).toBe('Changes: [a] [b] none');
   });
   test('every template renders a subject, a text part and an HTML part holding the link', () => {
-    for (const name of ['invitation', 'brief-request', 'brief-submitted', 'board-request', 'board-decision', 'review-request', 'review-decision', 'published', 'verify-email']) {
+    for (const name of ['invitation', 'brief-request', 'brief-submitted', 'board-request', 'board-decision', 'palette-routes-request', 'palette-routes-decision', 'review-request', 'review-decision', 'published', 'verify-email']) {
       const m = renderMail(name, { ...everyValue, link: 'http://127.0.0.1/x/abc' });
       expect(m.subject, name).not.toMatch(/\{\{|\s{2}|^\s|:\s*$/);
       expect(m.text, name).toContain('http://127.0.0.1/x/abc');

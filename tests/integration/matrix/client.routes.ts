@@ -1,4 +1,5 @@
-// Client work: invitations, briefs, mood boards, reviews, comments, follows and the sent-mail list.
+// Client work: invitations, briefs, mood boards, palette routes, reviews, comments, follows and the sent-mail list.
+import { FIXTURE_ROUTES } from '../client-fixture';
 import { all, only, type Route } from './route';
 
 const readers = only(200, ['owner', 'editor', 'reviewer']);
@@ -45,6 +46,17 @@ export default [
     expect: linkHolders(200),
   },
   { method: 'GET', file: 'moodboards/[token]/items/[itemId].ts', path: (f) => `/api/moodboards/${f.boardToken}/items/${f.boardImageId}`, expect: linkHolders(200) },
+
+  { method: 'GET', file: 'brands/[id]/palette-routes/index.ts', path: (f) => `${b(f)}/palette-routes`, expect: readers },
+  { method: 'POST', file: 'brands/[id]/palette-routes/index.ts', path: (f) => `${b(f)}/palette-routes`, body: () => ({ title: 'Matrix routes', routes: FIXTURE_ROUTES }), expect: makers(201) },
+  { method: 'GET', file: 'brands/[id]/palette-routes/[setId]/index.ts', path: (f) => `${b(f)}/palette-routes/${f.routeSetId}`, expect: readers },
+  { method: 'PATCH', file: 'brands/[id]/palette-routes/[setId]/index.ts', path: (f) => `${b(f)}/palette-routes/${f.routeSetId}`, body: () => ({ title: 'Renamed routes' }), expect: makers(200) },
+  { method: 'DELETE', file: 'brands/[id]/palette-routes/[setId]/index.ts', path: (f) => `${b(f)}/palette-routes/${f.routeSetId}`, expect: makers(204) },
+  { method: 'POST', file: 'brands/[id]/palette-routes/[setId]/send.ts', path: (f) => `${b(f)}/palette-routes/${f.routeSetId}/send`, body: () => ({ contactName: 'Matrix Contact', contactEmail: 'matrix-contact@test.example' }), expect: makers(200) },
+  // The fixture set is with the client, nothing chosen yet: makers are told so (409).
+  { method: 'POST', file: 'brands/[id]/palette-routes/[setId]/adopt.ts', path: (f) => `${b(f)}/palette-routes/${f.routeSetId}/adopt`, body: () => ({}), expect: makers(409) },
+  { method: 'GET', file: 'palette-routes/[token]/index.ts', path: (f) => `/api/palette-routes/${f.routeSetToken}`, expect: linkHolders(200) },
+  { method: 'POST', file: 'palette-routes/[token]/decision.ts', path: (f) => `/api/palette-routes/${f.routeSetToken}/decision`, body: (f) => ({ name: 'Matrix Client', choice: f.routeId }), expect: linkHolders(200) },
 
   { method: 'GET', file: 'brands/[id]/reviews/index.ts', path: (f) => `${b(f)}/reviews`, expect: readers },
   { method: 'POST', file: 'brands/[id]/reviews/index.ts', path: (f) => `${b(f)}/reviews`, body: () => ({ message: 'Matrix review' }), expect: makers(201) },
