@@ -2,8 +2,7 @@
 // knockout (inner shapes stay visible), and greyscale by WCAG 2.2 relative luminance, with the tone analysis beside.
 // Every drawing goes through the one rendition function; the grey is computed here on its pixels (tones.ts).
 import sharp from 'sharp';
-import { renderRendition } from '@/lib/assets/render.server';
-import type { RenditionSpec } from '@/lib/assets/render.server';
+import { renderRendition, type RenditionSpec } from '@/lib/assets/render.server';
 import { escapeXml } from '@/lib/safe/escape';
 import { oneColourLogo, type VariantOverride } from './knockout.server';
 import { greyscalePixels, toneReport, type ToneReport } from './tones';

@@ -113,6 +113,31 @@ interface Cluster {
   count: number;
 }
 
+/** Distance (sRGB levels) within which a colour counts as lying on the mix of two others. */
+const BLEND_TOLERANCE = 6;
+
+/**
+ * True when a colour is only the anti-aliased mix of two larger ones (it lies on the line between them in sRGB, where
+ * renderers blend edges), so a seam of mixed pixels is not taken for a part of its own.
+ */
+function isSeamBlend(clusters: Cluster[], i: number): boolean {
+  const c = clusters[i].rgb;
+  for (let a = 0; a < clusters.length; a++) {
+    for (let b = a + 1; b < clusters.length; b++) {
+      if (a === i || b === i || clusters[a].count <= clusters[i].count || clusters[b].count <= clusters[i].count) continue;
+      const p = clusters[a].rgb;
+      const d = clusters[b].rgb.map((v, k) => v - p[k]);
+      const length2 = d[0] ** 2 + d[1] ** 2 + d[2] ** 2;
+      if (length2 === 0) continue;
+      const t = ((c[0] - p[0]) * d[0] + (c[1] - p[1]) * d[1] + (c[2] - p[2]) * d[2]) / length2;
+      if (t <= 0.02 || t >= 0.98) continue;
+      const off = Math.hypot(c[0] - p[0] - t * d[0], c[1] - p[1] - t * d[1], c[2] - p[2] - t * d[2]);
+      if (off <= BLEND_TOLERANCE) return true;
+    }
+  }
+  return false;
+}
+
 /**
  * The parts of a drawn logo (its distinct colours, anti-aliased seams left out) and the touching pairs whose greys are
  * under 3:1 apart. Touching: within SEAM_PX pixels of each other along a row or a column, with no transparent pixel
@@ -154,7 +179,7 @@ export function toneReport(raster: Raster): ToneReport {
       clusterOf.set(key, clusters.length - 1);
     }
   }
-  const isPart = clusters.map((c) => c.count / opaque >= PART_MIN_SHARE);
+  const isPart = clusters.map((c, i) => c.count / opaque >= PART_MIN_SHARE && !isSeamBlend(clusters, i));
   const label = new Int16Array(count).fill(-1);
   for (let i = 0; i < count; i++) {
     if (alpha(i) < OPAQUE) continue;
