@@ -74,6 +74,13 @@ describe('touching colours that run together in grey (WCAG 2.2 SC 1.4.11: 3:1 be
     expect(report.collapses[0].contrast).toBeLessThan(1.02);
     expect(report.threshold.contrast).toBe(3);
   });
+  test('the same mark as a small PNG is flagged too (rasters are analysed at their own size, never enlarged)', async () => {
+    const png = await sharp(Buffer.from(`<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 200 100"><rect width="100" height="100" fill="#ff0000"/><rect x="100" width="100" height="100" fill="${green}"/></svg>`), { density: 18 }).png().toBuffer();
+    const { width, height } = await sharp(png).metadata();
+    const report = await logoTones({ bytes: png, format: 'png', canvas: { width: width!, height: height! } });
+    expect(width).toBe(50);
+    expect(report.dependsOnColour).toBe(true);
+  });
   test('the same two colours apart from each other are not: they never need telling apart', async () => {
     const report = await logoTones(svg(`<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 240 100"><rect width="100" height="100" fill="#ff0000"/><rect x="140" width="100" height="100" fill="${green}"/></svg>`, 240, 100));
     expect(report.parts).toHaveLength(2);

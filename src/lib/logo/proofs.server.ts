@@ -27,9 +27,13 @@ function drawWidth(canvas: LogoSource['canvas']): number {
   return Math.max(1, Math.round(aspect >= 1 ? PROOF_SIZE : PROOF_SIZE * aspect));
 }
 
-/** The logo drawn as it is (transparent ground), as raw RGBA pixels. */
-async function drawnPixels(logo: LogoSource) {
-  const drawn = await renderRendition({ bytes: logo.bytes, format: logo.format, drawnBounds: null }, plainSpec(drawWidth(logo.canvas), null));
+/**
+ * The logo drawn as it is (transparent ground), as raw RGBA pixels. For the analysis (`native`) a raster is never
+ * enlarged: resampling would widen its edges into seams of mixed colour wider than the touching test allows.
+ */
+async function drawnPixels(logo: LogoSource, native = false) {
+  const width = native && logo.format !== 'svg' ? Math.min(drawWidth(logo.canvas), Math.round(logo.canvas.width)) : drawWidth(logo.canvas);
+  const drawn = await renderRendition({ bytes: logo.bytes, format: logo.format, drawnBounds: null }, plainSpec(width, null));
   const { data, info } = await sharp(drawn.body).ensureAlpha().raw().toBuffer({ resolveWithObject: true });
   return { data, width: info.width, height: info.height, channels: info.channels };
 }
@@ -57,7 +61,7 @@ export async function greyscaleProof(logo: LogoSource): Promise<Buffer> {
 
 /** Which colours the logo is drawn in, and which touching ones turn into greys too close to tell apart. */
 export async function logoTones(logo: LogoSource): Promise<ToneReport> {
-  return toneReport(await drawnPixels(logo));
+  return toneReport(await drawnPixels(logo, true));
 }
 
 const SHEET_TILE = 360;
