@@ -84,7 +84,7 @@ export async function proofSheet(logo: LogoSource, overrides: { black?: VariantO
   const width = SHEET_GAP + tiles.length * (SHEET_TILE + SHEET_GAP);
   const height = SHEET_GAP + SHEET_TILE + SHEET_LABEL + 56;
   const verdict = tones.dependsOnColour
-    ? `Depends on colour: ${tones.collapses.map((c) => `${c.a.hex} and ${c.b.hex} touch at ${c.contrast.toFixed(2)}:1`).slice(0, 3).join('; ')} (under 3:1, WCAG 2.2 SC 1.4.11).`
+    ? `Depends on colour: ${tones.collapses.map((c) => `${c.a.hex} and ${c.b.hex} touch at ${(Math.floor(c.contrast * 100) / 100).toFixed(2)}:1`).slice(0, 3).join('; ')} (under 3:1, WCAG 2.2 SC 1.4.11).`
     : 'Reads without colour: touching parts keep at least 3:1 in grey (WCAG 2.2 SC 1.4.11).';
   const text = (x: number, y: number, s: string, size: number, weight = 400) =>
     `<text x="${x}" y="${y}" font-family="DejaVu Sans, sans-serif" font-size="${size}" font-weight="${weight}" fill="#1c1a17">${escapeXml(s)}</text>`;

@@ -37,8 +37,7 @@ function Collapse({ pair, colors }: { pair: ToneCollapse; colors: IdentityColor[
   return (
     <li>
       <Swatch hex={pair.a.hex} /> <span className="font-semibold">{colourName(pair.a, colors)}</span> and <Swatch hex={pair.b.hex} />{' '}
-      <span className="font-semibold">{colourName(pair.b, colors)}</span> touch, and in grey they are only {ratio(pair.contrast)} apart (
-      <Swatch hex={pair.a.grey} /> {pair.a.grey} and <Swatch hex={pair.b.grey} /> {pair.b.grey}).
+      <span className="font-semibold">{colourName(pair.b, colors)}</span> touch, and in grey they are only {ratio(pair.contrast)} apart (<Swatch hex={pair.a.grey} /> {pair.a.grey} and <Swatch hex={pair.b.grey} /> {pair.b.grey}).
     </li>
   );
 }
@@ -73,7 +72,7 @@ export function OneColourProofs({ brandId, logo, colors }: { brandId: string; lo
                 {proofs.data.tones.collapses.map((pair) => <Collapse key={`${pair.a.hex}-${pair.b.hex}`} pair={pair} colors={colors} />)}
               </ul>
               <p className="mt-2 leading-relaxed text-ink-soft">
-                Touching parts of a graphic need {ratio(proofs.data.tones.threshold.contrast)} to be told apart (WCAG 2.2 SC 1.4.11); below it only the hue
+                Touching parts of a graphic need {proofs.data.tones.threshold.contrast}:1 to be told apart (WCAG 2.2 SC 1.4.11); below it only the hue
                 separates them, which a grey print, a fax, a one-colour stamp or a reader with a colour-vision deficiency loses. Make one of them lighter or
                 darker, or part them with a gap or a line.
               </p>
@@ -82,7 +81,7 @@ export function OneColourProofs({ brandId, logo, colors }: { brandId: string; lo
             <p role="status" className="rounded-lg bg-plumb-wash px-4 py-3 text-sm text-plumb-deep">
               {proofs.data.tones.parts.length <= 1
                 ? 'Drawn in one colour: there are no colours to run together in grey.'
-                : `Holds up in grey: every pair of touching colours stays at least ${ratio(proofs.data.tones.threshold.contrast)} apart (WCAG 2.2 SC 1.4.11).`}
+                : `Holds up in grey: every pair of touching colours stays at least ${proofs.data.tones.threshold.contrast}:1 apart (WCAG 2.2 SC 1.4.11).`}
             </p>
           )}
           {proofs.data.tones.parts.length > 0 && (
