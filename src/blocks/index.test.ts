@@ -12,6 +12,7 @@ describe('block registry', () => {
       'clearSpace',
       'minimumSize',
       'misuse',
+      'oneColourProofs',
       'colorPalette',
       'contrastPairs',
       'typography',

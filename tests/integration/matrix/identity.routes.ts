@@ -41,6 +41,8 @@ export default withoutClientWork([
   },
   { method: 'DELETE', file: 'brands/[id]/logos/[logoId]/variants/[slot].ts', path: (f) => `${b(f)}/logos/${f.logoId}/variants/reversed`, expect: only(404, ['owner', 'editor']) },
   { method: 'GET', file: 'brands/[id]/logos/[logoId]/file.ts', path: (f) => `${b(f)}/logos/${f.logoId}/file?variant=white`, expect: readers },
+  { method: 'GET', file: 'brands/[id]/logos/[logoId]/proofs/index.ts', path: (f) => `${b(f)}/logos/${f.logoId}/proofs`, expect: readers },
+  { method: 'GET', file: 'brands/[id]/logos/[logoId]/proofs/[proof].ts', path: (f) => `${b(f)}/logos/${f.logoId}/proofs/greyscale`, expect: readers },
   { method: 'POST', file: 'brands/[id]/typefaces/index.ts', path: (f) => `${b(f)}/typefaces`, body: () => ({ shipped: 'fraunces', role: 'heading' }), expect: makers(201) },
   { method: 'PATCH', file: 'brands/[id]/typefaces/[typefaceId]/index.ts', path: (f) => `${b(f)}/typefaces/${f.typefaceId}`, body: () => ({ fallback: ['Arial', 'sans-serif'] }), expect: makers(200) },
   { method: 'DELETE', file: 'brands/[id]/typefaces/[typefaceId]/index.ts', path: (f) => `${b(f)}/typefaces/${f.typefaceId}`, expect: makers(204) },

@@ -1,4 +1,4 @@
-// One logo: its previews and own versions, its minimum sizes, and (for editors) its settings and removal.
+// One logo: its previews and own versions, its minimum sizes, its one-colour proofs, and (for editors) its settings and removal.
 import { useId } from 'react';
 import type { IdentityColor, IdentityLogo } from '@/lib/identity/types';
 import { messageOf, type NoticeState } from '../shared';
@@ -7,9 +7,10 @@ import { LogoPreview } from './LogoPreview';
 import { LogoSettings } from './LogoSettings';
 import { useRemoveLogo } from './logos.queries';
 import { MinimumSize } from './MinimumSize';
+import { OneColourProofs } from './OneColourProofs';
 import { OwnVersions } from './OwnVersions';
 
-export function LogoCard({ brandId, logo, brandColor, canEdit, onNotice }: { brandId: string; logo: IdentityLogo; brandColor: IdentityColor | undefined; canEdit: boolean; onNotice: (n: NoticeState) => void }) {
+export function LogoCard({ brandId, logo, brandColor, colors, canEdit, onNotice }: { brandId: string; logo: IdentityLogo; brandColor: IdentityColor | undefined; colors: IdentityColor[]; canEdit: boolean; onNotice: (n: NoticeState) => void }) {
   const id = useId();
   const remove = useRemoveLogo(brandId, logo.id, {
     onSuccess: () => onNotice({ kind: 'ok', text: `${logo.name} removed.` }),
@@ -47,6 +48,7 @@ export function LogoCard({ brandId, logo, brandColor, canEdit, onNotice }: { bra
           )}
         </div>
       </div>
+      <OneColourProofs brandId={brandId} logo={logo} colors={colors} />
     </li>
   );
 }

@@ -27,7 +27,7 @@ function Logos({ brandId, canEdit }: { brandId: string; canEdit: boolean }) {
         </div>
       ) : (
         <ul className="space-y-6" aria-label="Logos">
-          {logos.map((l) => <LogoCard key={l.id} brandId={brandId} logo={l} brandColor={brandColor} canEdit={canEdit} onNotice={setNotice} />)}
+          {logos.map((l) => <LogoCard key={l.id} brandId={brandId} logo={l} brandColor={brandColor} colors={colors} canEdit={canEdit} onNotice={setNotice} />)}
         </ul>
       )}
       {canEdit && <UploadLogo brandId={brandId} onNotice={setNotice} />}

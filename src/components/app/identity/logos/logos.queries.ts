@@ -1,9 +1,12 @@
 // Changes to the brand's logos: upload, settings, removal and the designer's own versions; each refreshes the identity.
+// Beside them the one read of its own, the one-colour proofs.
+import { useQuery } from '@tanstack/react-query';
 import type { z } from 'zod';
 import { api, apiUpload } from '@/lib/client/api';
 import { useChange, type Reactions } from '@/lib/client/mutation';
 import type { updateLogoBody } from '@/lib/identity/schemas';
 import type { IdentityLogo, LogoVariant, LogoVariantSlot } from '@/lib/identity/types';
+import type { LogoProofs } from '@/lib/logo/tones';
 import { useRefreshIdentity } from '../shared';
 
 export type LogoChanges = z.output<typeof updateLogoBody>;
@@ -39,3 +42,11 @@ export function useUploadOwnVersion(brandId: string, logoId: string, on: Reactio
 
 export const useDropOwnVersion = (brandId: string, logoId: string, on: Reactions<unknown, LogoVariantSlot>) =>
   useChange((slot: LogoVariantSlot) => api(`${logos(brandId)}/${logoId}/variants/${slot}`, { method: 'DELETE' }), useRefreshIdentity(brandId), on);
+
+/** The one-colour proofs of a logo; asked again when the designer's own one-colour files change. */
+export function useLogoProofs(brandId: string, logo: IdentityLogo) {
+  return useQuery({
+    queryKey: ['logo-proofs', brandId, logo.id, [...(logo.ownVariants ?? [])].sort().join(',')],
+    queryFn: () => api<{ proofs: LogoProofs }>(`${logos(brandId)}/${logo.id}/proofs`).then((r) => r.proofs),
+  });
+}

@@ -1,0 +1,78 @@
+// One-colour proofs in Debian's chromium: the logo screen shows the three proofs and says in words which colours run
+// together in grey; the guideline block's greyscale filter gives the WCAG 2.2 relative-luminance grey (checked against
+// colorjs.io) in the browser that prints the PDFs.
+import Color from 'colorjs.io';
+import { chromium, type Browser } from 'playwright-core';
+import { createElement } from 'react';
+import { renderToStaticMarkup } from 'react-dom/server';
+import sharp from 'sharp';
+import { afterAll, beforeAll, expect, test } from 'vitest';
+import { Render } from '@/blocks/oneColourProofs/Render';
+import type { Identity } from '@/lib/identity/types';
+import { baseUrl, signUpFresh } from '../support/client';
+import { launchOptions, seriousViolations } from '../support/browser';
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await chromium.launch(launchOptions());
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+// Red and a green of the same relative luminance (colorjs.io puts #009400 within 0.002 of red's 0.2126).
+const RED_GREEN = '<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 200 100"><rect width="100" height="100" fill="#ff0000"/><rect x="100" width="100" height="100" fill="#009400"/></svg>';
+
+/** The grey level of a colour by relative luminance, from colorjs.io. */
+const greyLevel = (hex: string) => {
+  const y = new Color(hex).luminance;
+  return Math.round(new Color('srgb-linear', [y, y, y]).to('srgb').coords[0]! * 255);
+};
+
+test('the logo screen shows the proofs and names the colours that run together in grey', async () => {
+  const { client, email } = await signUpFresh('proofs-browser');
+  const brandId: string = (await client.post('/api/brands', { name: `Proof Walk ${Date.now()}` })).body.brand.id;
+  expect((await client.upload(`/api/brands/${brandId}/logos`, 'red-green.svg', RED_GREEN, 'image/svg+xml', { variant: 'mark' })).status).toBe(201);
+
+  const page = await (await browser.newContext()).newPage();
+  const errors: string[] = [];
+  page.on('pageerror', (e) => errors.push(String(e)));
+  await page.goto(`${baseUrl()}/sign-in`);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill('correct-horse-battery');
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.waitForURL(/\/app$/);
+  await page.goto(`${baseUrl()}/app/brands/${brandId}/identity#logos`);
+
+  const proofs = page.getByRole('heading', { name: 'One-colour proofs' }).locator('xpath=ancestor::section[1]');
+  await expect.poll(() => proofs.getByText('This logo leans on colour').count(), { timeout: 20_000 }).toBe(1);
+  await expect.poll(() => proofs.getByText(/#ff0000.*#009400|#009400.*#ff0000/).count()).toBeGreaterThan(0);
+  for (const alt of ['in black on white', 'in white on black', 'in greyscale']) {
+    const img = proofs.getByRole('img', { name: new RegExp(alt) });
+    await expect.poll(() => img.evaluate((el) => (el as HTMLImageElement).naturalWidth), { timeout: 20_000 }).toBeGreaterThan(0);
+  }
+  expect(await seriousViolations(page)).toEqual([]);
+  expect(errors).toEqual([]);
+});
+
+test('the block’s greyscale is relative luminance in chromium (colorjs.io)', async () => {
+  const logo = { id: 'l-mark', name: 'Mark', canvas: { width: 200, height: 100 }, format: 'svg', files: { original: '/files/mark.svg', black: '/files/mark.svg', white: '/files/mark.svg' } };
+  const identity = { logos: [logo], colors: [], typefaces: [] } as unknown as Identity;
+  const block = renderToStaticMarkup(createElement(Render, { attrs: { id: 'b', logoIds: ['l-mark'], caption: '' } as never, identity, mode: 'site', uid: 'pl-b' }));
+  const page = await (await browser.newContext({ viewport: { width: 400, height: 1200 } })).newPage();
+  // Our own origin on the page's side only: every request is answered here, nothing leaves the machine.
+  await page.route('http://proofs.test/**', (route) =>
+    route.request().url().endsWith('/files/mark.svg')
+      ? route.fulfill({ body: RED_GREEN, contentType: 'image/svg+xml' })
+      : route.fulfill({ body: `<!doctype html><body style="margin:0;background:#fff"><div id="grey" style="width:400px">${block}</div></body>`, contentType: 'text/html' }),
+  );
+  await page.goto('http://proofs.test/');
+  const grey = page.locator('[data-proof="grey"] svg');
+  await grey.evaluate((svg) => new Promise((done) => { const img = svg.querySelector('image'); return img ? setTimeout(done, 300) : done(null); }));
+  const box = (await grey.boundingBox())!;
+  const png = await page.screenshot({ clip: box, fullPage: true });
+  const { data, info } = await sharp(png).raw().toBuffer({ resolveWithObject: true });
+  const at = (fx: number) => data[(Math.round(info.height / 2) * info.width + Math.round(fx * info.width)) * info.channels];
+  expect(Math.abs(at(0.25) - greyLevel('#ff0000'))).toBeLessThanOrEqual(1);
+  expect(Math.abs(at(0.75) - greyLevel('#009400'))).toBeLessThanOrEqual(1);
+});
