@@ -27,18 +27,20 @@ function seeded(seed: number) {
   };
 }
 
-const frame = (body: string, defs = '') => `<svg xmlns="http://www.w3.org/2000/svg" width="${PHOTO_WIDTH}" height="${PHOTO_HEIGHT}" viewBox="0 0 1500 1000">
+/** Scenes are drawn at half size (1500 × 1000) and scaled up: soft light hides it, and librsvg's blurs cost a quarter. */
+const DRAWN_WIDTH = 1500;
+const DRAWN_HEIGHT = 1000;
+
+const frame = (body: string, defs = '') => `<svg xmlns="http://www.w3.org/2000/svg" width="${DRAWN_WIDTH}" height="${DRAWN_HEIGHT}" viewBox="0 0 1500 1000">
 <defs>
   <filter id="soft" x="-20%" y="-20%" width="140%" height="140%"><feGaussianBlur stdDeviation="10"/></filter>
   <filter id="softer" x="-50%" y="-50%" width="200%" height="200%"><feGaussianBlur stdDeviation="28"/></filter>
   <filter id="haze" x="-10%" y="-10%" width="120%" height="120%"><feGaussianBlur stdDeviation="3"/></filter>
-  <filter id="grain" x="0" y="0" width="100%" height="100%"><feTurbulence type="fractalNoise" baseFrequency="0.9" numOctaves="2" seed="7"/><feColorMatrix type="saturate" values="0"/></filter>
   <radialGradient id="vignette" cx="50%" cy="50%" r="75%"><stop offset="55%" stop-color="#000" stop-opacity="0"/><stop offset="100%" stop-color="#000" stop-opacity="0.45"/></radialGradient>
   ${defs}
 </defs>
 ${body}
 <rect width="1500" height="1000" fill="url(#vignette)"/>
-<rect width="1500" height="1000" filter="url(#grain)" opacity="0.07"/>
 </svg>`;
 
 /** A cup of coffee on its saucer at (cx, cy), `s` times its drawn size, with steam. */
@@ -96,18 +98,18 @@ function morningPour(): string {
 
 function roastedBeans(): string {
   const random = seeded(23);
+  // A heap where the light falls (lower right), thinning out towards the edges: the sum of three draws is bell-shaped.
+  const spread = () => (random() + random() + random()) / 3 - 0.5;
   let beans = '';
-  for (let i = 0; i < 190; i++) {
-    // Denser towards the lower right, where the light falls.
-    const x = 80 + random() * 1340;
-    const y = 60 + random() * 900;
-    if (random() > 0.35 + (x / 1500) * 0.5) continue;
-    const r = 26 + random() * 10;
+  for (let i = 0; i < 420; i++) {
+    const x = 1080 + spread() * 1500;
+    const y = 620 + spread() * 1000;
+    const r = 24 + random() * 9;
     const angle = random() * 180;
     const tone = ['#4a2a17', '#5a331c', '#3d2213', '#6a3d21'][Math.floor(random() * 4)];
     beans += `<g transform="translate(${x.toFixed(1)} ${y.toFixed(1)}) rotate(${angle.toFixed(1)})">
       <ellipse rx="${r}" ry="${(r * 0.68).toFixed(1)}" fill="${tone}"/>
-      <ellipse rx="${(r * 0.8).toFixed(1)}" ry="${(r * 0.45).toFixed(1)}" cx="${(-r * 0.15).toFixed(1)}" cy="${(-r * 0.18).toFixed(1)}" fill="#c48a57" opacity="0.22" filter="url(#haze)"/>
+      <ellipse rx="${(r * 0.8).toFixed(1)}" ry="${(r * 0.45).toFixed(1)}" cx="${(-r * 0.15).toFixed(1)}" cy="${(-r * 0.18).toFixed(1)}" fill="url(#sheen)"/>
       <path d="M${-r * 0.85} 0 C ${-r * 0.3} ${-r * 0.22}, ${r * 0.3} ${r * 0.22}, ${r * 0.85} 0" stroke="#1e0f07" stroke-width="${(r * 0.12).toFixed(1)}" fill="none" stroke-linecap="round"/>
     </g>`;
   }
@@ -115,7 +117,8 @@ function roastedBeans(): string {
     `<rect width="1500" height="1000" fill="url(#surface)"/>
   ${beans}
   <rect width="1500" height="1000" fill="url(#light)"/>`,
-    `<radialGradient id="surface" cx="70%" cy="65%" r="80%"><stop offset="0" stop-color="#5a4030"/><stop offset="1" stop-color="#1d140e"/></radialGradient>
+    `<radialGradient id="sheen"><stop offset="0" stop-color="#c48a57" stop-opacity="0.35"/><stop offset="1" stop-color="#c48a57" stop-opacity="0"/></radialGradient>
+  <radialGradient id="surface" cx="70%" cy="65%" r="80%"><stop offset="0" stop-color="#5a4030"/><stop offset="1" stop-color="#1d140e"/></radialGradient>
   <radialGradient id="light" cx="72%" cy="62%" r="55%"><stop offset="0" stop-color="#ffdcae" stop-opacity="0.28"/><stop offset="1" stop-color="#ffdcae" stop-opacity="0"/></radialGradient>`,
   );
 }
@@ -226,9 +229,21 @@ export const DEMO_PHOTOS: DemoPhoto[] = [
   },
 ];
 
-/** One demo photograph as JPEG bytes. */
-export async function drawDemoPhoto(photo: DemoPhoto): Promise<Buffer> {
-  let img = sharp(Buffer.from(photo.svg()), { limitInputPixels: PHOTO_WIDTH * PHOTO_HEIGHT * 2 });
-  if (photo.treatment === 'cold-filter') img = img.modulate({ saturation: 1.7, hue: 150 }).linear(1.35, -40);
-  return img.jpeg({ quality: 84, mozjpeg: true }).toBuffer();
+/** Film-like grain: mid-grey noise from the seeded generator, laid over the picture with soft light. */
+function grain(seed: number): Buffer {
+  const random = seeded(seed);
+  const noise = Buffer.alloc(PHOTO_WIDTH * PHOTO_HEIGHT * 3);
+  for (let i = 0; i < noise.length; i += 3) noise[i] = noise[i + 1] = noise[i + 2] = 128 + Math.round((random() - 0.5) * 56);
+  return noise;
+}
+
+/** One demo photograph as JPEG bytes: the scene drawn, scaled to camera size, grained, and treated if it says so. */
+export async function drawDemoPhoto(photo: DemoPhoto, seed = 7): Promise<Buffer> {
+  let img = sharp(Buffer.from(photo.svg())).resize(PHOTO_WIDTH, PHOTO_HEIGHT);
+  if (photo.treatment === 'cold-filter') img = img.modulate({ saturation: 1.6, hue: 170 }).linear(1.3, -35);
+  return img
+    .composite([{ input: grain(seed), raw: { width: PHOTO_WIDTH, height: PHOTO_HEIGHT, channels: 3 }, blend: 'soft-light' }])
+    .removeAlpha()
+    .jpeg({ quality: 84 })
+    .toBuffer();
 }
