@@ -81,7 +81,8 @@ describe('the imagery block on the published page', () => {
 
     const page = await owner.get(`/b/${slug}/v/1`);
     expect(page.status).toBe(200);
-    const img = /<img[^>]*srcset="([^"]+)"[^>]*>/.exec(page.body)![0];
+    // Attribute names are case-insensitive in HTML (React writes srcSet): match them as a browser would.
+    const img = /<img[^>]*srcset="([^"]+)"[^>]*>/i.exec(page.body)![0];
     // The shelf's alt text and caption reach the page (WCAG 2.2 SC 1.1.1).
     expect(img).toContain('alt="A bright square on a brown counter."');
     expect(page.body).toContain('The counter at eight.');
@@ -89,7 +90,7 @@ describe('the imagery block on the published page', () => {
     expect(img).toMatch(/sizes="[^"]*100vw"/);
     // 3000 × 2000 cut square is 2000 px wide: 480, 960 and 1600 fit, 2400 would be upscaled (HTML srcset width descriptors).
     expect(img).toContain('width="1600" height="1600"');
-    const candidates = /srcset="([^"]+)"/.exec(img)![1].replace(/&amp;/g, '&').split(', ').map((c) => c.split(' '));
+    const candidates = /srcset="([^"]+)"/i.exec(img)![1].replace(/&amp;/g, '&').split(', ').map((c) => c.split(' '));
     expect(candidates.map(([, w]) => w)).toEqual(['480w', '960w', '1600w']);
     for (const [url, descriptor] of candidates) {
       expect(url.startsWith(`/b/${slug}/v/1/files/${photoId}?`)).toBe(true);
