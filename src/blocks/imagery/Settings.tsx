@@ -20,22 +20,26 @@ const thumbnail = (asset: IdentityAsset) => `/api/assets/${asset.id}/file?format
 function PhotoPicker({ n, value, photos, onChange }: { n: number; value: string; photos: IdentityAsset[]; onChange: (src: string) => void }) {
   const name = useId();
   const chosen = photos.some((p) => p.id === value);
-  const tile = 'block cursor-pointer overflow-hidden rounded-md border-2 bg-card has-[:checked]:border-plumb has-[:focus-visible]:outline has-[:focus-visible]:outline-2 has-[:focus-visible]:outline-offset-2 has-[:focus-visible]:outline-plumb';
+  const tile =
+    'group relative block cursor-pointer overflow-hidden rounded-md border-2 border-transparent bg-card has-[:checked]:border-plumb has-[:checked]:bg-plumb-wash has-[:focus-visible]:outline has-[:focus-visible]:outline-2 has-[:focus-visible]:outline-offset-2 has-[:focus-visible]:outline-plumb';
+  const chosenMark = <span aria-hidden="true" className="absolute right-1 top-1 hidden rounded bg-plumb-deep px-1.5 py-0.5 text-[11px] font-semibold text-white group-has-[:checked]:block">Chosen</span>;
   return (
     <fieldset className="sm:col-span-2" data-photo-picker="">
       <legend className="label">Photograph {n}</legend>
-      <div className="grid grid-cols-3 gap-2 sm:grid-cols-4">
+      <div className="grid grid-cols-3 gap-2 sm:grid-cols-6">
         {photos.map((photo) => (
-          <label key={photo.id} className={`${tile} border-transparent`} title={photo.alt ?? undefined}>
+          <label key={photo.id} className={tile} title={photo.alt ?? undefined}>
             <input type="radio" name={name} value={photo.id} checked={value === photo.id} onChange={() => onChange(photo.id)} className="sr-only" />
             <img src={thumbnail(photo)} alt="" className="aspect-[4/3] w-full object-cover" style={{ objectPosition: objectPosition(photo.focus) }} loading="lazy" decoding="async" />
             <span className="block truncate px-1.5 py-1 text-xs">{photo.name}</span>
+            {chosenMark}
           </label>
         ))}
-        <label className={`${tile} border-transparent`}>
+        <label className={tile}>
           <input type="radio" name={name} value={TO_COME} checked={!chosen} onChange={() => onChange(TO_COME)} className="sr-only" />
           <span className="flex aspect-[4/3] items-center justify-center bg-paper p-2 text-center text-xs text-ink-soft">A frame for now</span>
           <span className="block truncate px-1.5 py-1 text-xs">Photo to come</span>
+          {chosenMark}
         </label>
       </div>
     </fieldset>
