@@ -24,6 +24,12 @@ export class Asset extends Model<InferAttributes<Asset>, InferCreationAttributes
   declare tags: CreationOptional<string[]>;
   declare description: string | null;
   declare usageNotes: string | null;
+  /** A photograph's description for people who cannot see it (needed before it is approved). */
+  declare altText: CreationOptional<string | null>;
+  declare caption: CreationOptional<string | null>;
+  /** A photograph's focal point as fractions of its width and height; null is the centre. */
+  declare focusX: CreationOptional<number | null>;
+  declare focusY: CreationOptional<number | null>;
   declare uploadedById: string | null;
   declare stateChangedAt: Date | null;
   declare stateChangedById: string | null;
@@ -79,6 +85,10 @@ export function initAssetModels(sequelize: Sequelize): void {
       tags: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
       description: { type: DataTypes.TEXT, allowNull: true },
       usageNotes: { type: DataTypes.TEXT, allowNull: true },
+      altText: { type: DataTypes.TEXT, allowNull: true },
+      caption: { type: DataTypes.TEXT, allowNull: true },
+      focusX: { type: DataTypes.DOUBLE, allowNull: true },
+      focusY: { type: DataTypes.DOUBLE, allowNull: true },
       uploadedById: { type: DataTypes.TEXT, allowNull: true },
       stateChangedAt: { type: DataTypes.DATE, allowNull: true },
       stateChangedById: { type: DataTypes.TEXT, allowNull: true },

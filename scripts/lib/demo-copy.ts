@@ -20,11 +20,17 @@ const VALUES = [
   'Quiet craft: we would rather explain a cup than shout about it, so no slogans on the sleeves.',
 ];
 const MOTTO = 'Slow roasted, plainly told.';
-const IMAGERY = 'Photographs show the roastery in morning light, hands at work and the lake beyond the window. Keep them warm, unhurried and uncropped around people’s faces; avoid staged café scenes and heavy filters. Approved photographs arrive on the shelf before the next edition.';
+const IMAGERY = 'Photographs show the roastery in morning light, the coffee up close and the lake beyond the window. Keep them warm, unhurried and uncropped around people’s faces; avoid staged café scenes and heavy filters.';
 const SPECIMEN = 'Roasted slowly, poured with care: quiet mornings start here.';
 
-/** The brand-book starter, filled with Larchmere's own copy; blocks waiting for photographs are left out for now. */
-export function withDemoCopy(doc: { type: 'doc'; content: Node[] }): { type: 'doc'; content: Node[] } {
+/** A photograph on the demo shelf, as the imagery block shows it (alt text and caption come from the shelf). */
+export interface DemoShelfPhoto {
+  id: string;
+  verdict: 'do' | 'dont';
+}
+
+/** The brand-book starter, filled with Larchmere's own copy and photographs; without photographs the imagery block is left out. */
+export function withDemoCopy(doc: { type: 'doc'; content: Node[] }, photos: DemoShelfPhoto[] = []): { type: 'doc'; content: Node[] } {
   const content: Node[] = [];
   for (const node of doc.content) {
     const text = firstText(node);
@@ -32,7 +38,11 @@ export function withDemoCopy(doc: { type: 'doc'; content: Node[] }): { type: 'do
     else if (node.type === 'bulletList' && text.startsWith('A value in a few words')) content.push({ ...node, content: VALUES.map(item) });
     else if (node.type === 'blockquote' && text.startsWith('A single line the brand lives by')) content.push({ ...node, content: [para(MOTTO, false)] });
     else if (node.type === 'paragraph' && text.startsWith('Replace these frames')) content.push(para(IMAGERY));
-    else if (node.type === 'imagery') continue;
+    else if (node.type === 'imagery') {
+      if (photos.length === 0) continue;
+      const items = photos.map((p) => ({ src: p.id, alt: '', verdict: p.verdict, caption: '' }));
+      content.push({ ...node, attrs: { ...node.attrs, items, columns: 3, aspect: '4:3' } });
+    }
     else if (node.type === 'typography') content.push({ ...node, attrs: { ...node.attrs, specimenText: SPECIMEN } });
     else content.push(node);
   }

@@ -3,7 +3,8 @@
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { DEMO_BRANDS, DEMO_PASSWORD, DEMO_PEOPLE } from '@db/seeders/demo';
-import { withDemoCopy } from './demo-copy';
+import { withDemoCopy, type DemoShelfPhoto } from './demo-copy';
+import { DEMO_PHOTOS, drawDemoPhoto } from './demo-photos';
 
 async function call(siteUrl: string, cookie: string, method: string, path: string, body?: unknown) {
   const res = await fetch(siteUrl + path, {
@@ -54,11 +55,36 @@ async function stockShelf(siteUrl: string, cookie: string, brandId: string): Pro
     const note = notes[asset.originalFilename];
     if (note) await call(siteUrl, cookie, 'PATCH', `${base}/assets/${asset.id}`, { state: 'approved', ...note });
   }
+  await stockPhotos(siteUrl, cookie, brandId);
   // The print partner's first visit, so the owner's download log has something to show.
   const partner = await signIn(siteUrl, DEMO_PEOPLE[3].email);
   const lockup = (assets as { id: string; originalFilename: string }[]).find((a) => a.originalFilename === 'larchmere-lockup.svg')!;
   for (const query of ['format=png&width=1024', 'preset=favicon']) await (await fetch(`${siteUrl}/api/assets/${lockup.id}/file?${query}`, { headers: { cookie: partner } })).arrayBuffer();
   await (await fetch(`${siteUrl}${base}/bundles`, { method: 'POST', headers: { cookie: partner, origin: siteUrl, 'content-type': 'application/json' }, body: JSON.stringify({ allLogos: true }) })).arrayBuffer();
+}
+
+/** The demo's own photographs (drawn in code), uploaded as photographs with alt text, caption and focal point, and approved. */
+async function stockPhotos(siteUrl: string, cookie: string, brandId: string): Promise<void> {
+  const base = `/api/brands/${brandId}`;
+  const form = new FormData();
+  form.append('kind', 'photo');
+  for (const photo of DEMO_PHOTOS) form.append('file', new Blob([new Uint8Array(await drawDemoPhoto(photo))], { type: 'image/jpeg' }), photo.filename);
+  const res = await fetch(siteUrl + `${base}/assets`, { method: 'POST', headers: { origin: siteUrl, cookie }, body: form });
+  if (!res.ok) throw new Error(`demo photo upload answered ${res.status}: ${await res.text()}`);
+  const { assets } = await res.json();
+  for (const asset of assets as { id: string; originalFilename: string }[]) {
+    const photo = DEMO_PHOTOS.find((p) => p.filename === asset.originalFilename);
+    if (photo) await call(siteUrl, cookie, 'PATCH', `${base}/assets/${asset.id}`, { altText: photo.altText, caption: photo.caption, focus: photo.focus, tags: ['photography'], state: 'approved' });
+  }
+}
+
+/** The approved demo photographs on the shelf, in the order the imagery block shows them. */
+async function shelfPhotos(siteUrl: string, cookie: string, brandId: string): Promise<DemoShelfPhoto[]> {
+  const { assets } = await call(siteUrl, cookie, 'GET', `/api/brands/${brandId}/assets?kind=photo&state=approved`);
+  return DEMO_PHOTOS.flatMap((photo) => {
+    const asset = (assets as { id: string; originalFilename: string }[]).find((a) => a.originalFilename === photo.filename);
+    return asset ? [{ id: asset.id, verdict: photo.verdict }] : [];
+  });
 }
 
 /** Make sure the first demo brand is published and stocked; returns the demo share link URL. */
@@ -75,7 +101,7 @@ export async function publishDemo(siteUrl: string, dataDir: string): Promise<str
     const draft = await call(siteUrl, cookie, 'GET', `${base}/guideline`);
     if (draft.doc.content.length === 0) {
       const started = await call(siteUrl, cookie, 'POST', `${base}/guideline/template`, { template: 'brand-book', baseRevision: draft.revision });
-      await call(siteUrl, cookie, 'PUT', `${base}/guideline`, { baseRevision: started.revision, doc: withDemoCopy(started.doc) });
+      await call(siteUrl, cookie, 'PUT', `${base}/guideline`, { baseRevision: started.revision, doc: withDemoCopy(started.doc, await shelfPhotos(siteUrl, cookie, brand.id)) });
     }
     await call(siteUrl, cookie, 'POST', `${base}/versions`, { note: 'First edition of the Larchmere guidelines: logo, colour, type and imagery.' });
   }

@@ -1,6 +1,8 @@
-// Photographs with a do or don't verdict. Every image comes from the brand's own asset shelf (an asset id);
-// a name that is not yet an asset ("photo-to-come-1") shows as a frame. Outside addresses are never fetched.
+// Photographs with a do or don't verdict. Every image comes from the brand's own asset shelf (an asset id, chosen in a
+// picker of approved photographs); a name that is not yet an asset ("photo-to-come-1") shows as a frame. Outside
+// addresses are never fetched.
 import * as z from 'zod';
+import { PHOTO_ASPECTS } from '@/lib/assets/photo';
 import { assetRef } from '@/lib/safe/values';
 import { refIdSchema } from '@/lib/guideline/ids';
 import { defineBlock, text } from '@/blocks/define';
@@ -49,6 +51,8 @@ export const imageryBlock = defineBlock({
   fields: {
     items: z.array(imageItemSchema).max(24, { error: 'At most 24 images.' }).default(() => []),
     columns: z.number({ error: 'columns must be a number.' }).int().min(1).max(4).default(3),
+    /** The shape every photograph is cut to, around its focal point (drafts saved before this field read as 4:3). */
+    aspect: z.enum(PHOTO_ASPECTS, { error: `The aspect ratio must be one of ${PHOTO_ASPECTS.join(', ')}.` }).default('4:3'),
   },
   refs: { items: { src: 'image' } },
   fromStored: withoutOutsideImages,

@@ -3,6 +3,7 @@ import { createHash } from 'node:crypto';
 import { RENDITION_CUSTOM_LIMIT, RENDITION_RATE_LIMIT } from 'astro:env/server';
 import { Readable } from 'node:stream';
 import { ZipArchive } from 'archiver';
+import sharp from 'sharp';
 import { Op, QueryTypes, UniqueConstraintError, type WhereOptions } from 'sequelize';
 import { Asset, AssetDownload, AssetRendition } from '@db/models/assets';
 import type { Brand } from '@db/models';
@@ -22,10 +23,12 @@ import { newKey } from '@/lib/storage/storage';
 import { storage } from '@/lib/storage/index.server';
 import { inspectUpload, UploadRejection } from '@/lib/uploads/inspect.server';
 import type { AssetReader } from './access.server';
-import { canMoveState, FORMAT_INFO, PREVIEW_MAX_WIDTH, renditionFilename, STANDARD_RENDITIONS, VECTOR_PRINT_RENDITIONS, type AssetFormat, type AssetKind, type AssetState, type RenditionParams, type RenditionQuery } from './kinds';
+import { formatList } from '@/lib/uploads/rules';
+import { canMoveState, FORMAT_INFO, MAX_IMAGE_PIXELS, PHOTO_FORMATS, PREVIEW_MAX_WIDTH, renditionFilename, STANDARD_RENDITIONS, VECTOR_PRINT_RENDITIONS, type AssetFormat, type AssetKind, type AssetState, type RenditionParams, type RenditionQuery } from './kinds';
 import { cachedRendition, renditionKey, type Rendition } from './render.server';
 import { checkRenditionSize, resolveRendition } from './renditions';
 import { usageNote } from './usage';
+import { ALT_TEXT_REQUIRED, type FocalPoint } from './photo';
 
 export interface AssetView {
   id: string;
@@ -42,6 +45,10 @@ export interface AssetView {
   tags: string[];
   description: string | null;
   usageNotes: string | null;
+  /** Photographs: alt text, caption and focal point (null elsewhere, and the focal point null until chosen). */
+  altText: string | null;
+  caption: string | null;
+  focus: FocalPoint | null;
   createdAt: string;
   updatedAt: string;
   stateChangedAt: string | null;
@@ -52,7 +59,7 @@ export interface AssetView {
   patternSettings: Record<string, unknown> | null;
 }
 
-const RENDERABLE = new Set(['svg', 'png', 'jpeg', 'webp']);
+const RENDERABLE = new Set(['svg', 'png', 'jpeg', 'webp', 'avif']);
 
 export function assetView(row: Asset): AssetView {
   const renderable = RENDERABLE.has(row.format);
@@ -72,6 +79,9 @@ export function assetView(row: Asset): AssetView {
     tags: row.tags,
     description: row.description,
     usageNotes: row.usageNotes,
+    altText: row.altText ?? null,
+    caption: row.caption ?? null,
+    focus: row.focusX != null && row.focusY != null ? { x: row.focusX, y: row.focusY } : null,
     createdAt: row.createdAt.toISOString(),
     updatedAt: row.updatedAt.toISOString(),
     stateChangedAt: row.stateChangedAt?.toISOString() ?? null,
@@ -100,8 +110,9 @@ export interface UploadOutcome {
   rejected: { filename: string; code: string; message: string }[];
 }
 
-/** The kind a shelf file is filed under: drawings and images as the uploader says (logo or image), the rest by format. */
+/** The kind a shelf file is filed under: photographs when asked (checked as such), drawings and images as the uploader says, the rest by format. */
 function shelfKind(format: AssetFormat, wanted: AssetKind | undefined): AssetKind {
+  if (wanted === 'photo') return 'photo';
   const rasterish = format === 'svg' || format === 'png' || format === 'jpeg' || format === 'webp';
   return rasterish && (wanted === 'logo' || wanted === 'image') ? wanted : FORMAT_INFO[format].kind;
 }
@@ -113,12 +124,19 @@ async function shelfBounds(format: AssetFormat, kind: AssetKind, inspected: { st
   return drawnBounds(inspected.stored).then((b) => b.fraction, () => null);
 }
 
+/** A photograph's size as it is seen, its EXIF orientation applied (a portrait shot stored on its side is portrait). */
+async function uprightSize(bytes: Buffer): Promise<{ width: number; height: number } | Record<string, never>> {
+  const meta = await sharp(bytes, { limitInputPixels: MAX_IMAGE_PIXELS }).metadata();
+  return meta.autoOrient ?? {};
+}
+
 /** Store one inspected file and its row, or nothing at all: the file is removed again when the row cannot be written. */
 async function storeOne(caller: Caller, brand: Brand, file: File, wanted: AssetKind | undefined): Promise<AssetView & { duplicate: boolean; sanitised: string[] }> {
-  const checked = await inspectUpload(Buffer.from(await file.arrayBuffer()), { as: 'shelf', filename: file.name });
+  // A photograph is checked against the photo row (raster pictures only); everything else against the shelf's.
+  const checked = await inspectUpload(Buffer.from(await file.arrayBuffer()), { as: wanted === 'photo' ? 'photo' : 'shelf', filename: file.name });
   const format = checked.format as AssetFormat;
   const kind = shelfKind(format, wanted);
-  const inspected = { ...checked, format, kind, drawnBounds: await shelfBounds(format, kind, checked) };
+  const inspected = { ...checked, format, kind, drawnBounds: await shelfBounds(format, kind, checked), ...(kind === 'photo' ? await uprightSize(checked.stored) : {}) };
   const contentHash = createHash('sha256').update(inspected.stored).digest('hex');
   const existing = await Asset.findOne({ where: { brandId: brand.id, contentHash } });
   if (existing) return { ...assetView(existing), duplicate: true, sanitised: [] };
@@ -208,7 +226,10 @@ export interface AssetChanges {
   description?: string | null;
   usageNotes?: string | null;
   name?: string;
-  kind?: 'logo' | 'image';
+  kind?: 'logo' | 'image' | 'photo';
+  altText?: string | null;
+  caption?: string | null;
+  focus?: FocalPoint | null;
 }
 
 export async function updateAsset(caller: Caller, brand: Brand, assetId: string, body: AssetChanges): Promise<AssetView> {
@@ -226,8 +247,20 @@ export async function updateAsset(caller: Caller, brand: Brand, assetId: string,
   if (body.name !== undefined) changes.name = body.name;
   if (body.kind !== undefined && body.kind !== asset.kind) {
     if (!RENDERABLE.has(asset.format)) throw new ApiError(400, 'invalid_input', `A ${asset.format.toUpperCase()} file cannot be marked as a logo or image.`, { path: 'kind' });
+    if (body.kind === 'photo' && !(PHOTO_FORMATS as readonly string[]).includes(asset.format)) {
+      throw new ApiError(400, 'invalid_input', `A photograph is ${formatList(PHOTO_FORMATS)}; this file is ${FORMAT_INFO[asset.format].label}.`, { path: 'kind' });
+    }
+    if (asset.format === 'avif' && body.kind !== 'photo') throw new ApiError(400, 'invalid_input', 'An AVIF file is kept as a photograph.', { path: 'kind' });
     changes.kind = body.kind;
   }
+  if (body.altText !== undefined) changes.altText = body.altText || null;
+  if (body.caption !== undefined) changes.caption = body.caption || null;
+  if (body.focus !== undefined) Object.assign(changes, { focusX: body.focus?.x ?? null, focusY: body.focus?.y ?? null });
+  // WCAG 2.2 SC 1.1.1: an approved photograph always has a text alternative, so every page that shows it can say what it shows.
+  const kindAfter = changes.kind ?? asset.kind;
+  const stateAfter = changes.state ?? asset.state;
+  const altAfter = changes.altText !== undefined ? changes.altText : asset.altText;
+  if (kindAfter === 'photo' && stateAfter === 'approved' && !altAfter?.trim()) throw new ApiError(422, 'alt_text_required', ALT_TEXT_REQUIRED, { path: 'altText' });
   const before = { state: asset.state, name: asset.name };
   await sequelize.transaction(async (t) => {
     await asset.update(changes, { transaction: t });

@@ -2,18 +2,24 @@
 // Browser-safe: the shelf island imports the same lists the server validates with.
 import { z } from 'zod';
 import { acceptAttribute, FORMAT_TYPES, UPLOAD_RULES } from '@/lib/uploads/rules';
+import type { FocalPoint, PhotoAspect } from './photo';
 
 export const ASSET_FORMATS = UPLOAD_RULES.shelf.accept;
 export type AssetFormat = (typeof ASSET_FORMATS)[number];
 
 /**
- * What an asset is for: logos get every rendition, images get web sizes, the rest are served as uploaded. Patterns are
- * tiles Plumbline drew from the mark (never uploaded), kept with their settings.
+ * What an asset is for: logos get every rendition, images get web sizes, photographs also carry alt text, a caption
+ * and a focal point for the imagery block; patterns are tiles Plumbline drew from the mark (never uploaded), kept with
+ * their settings; the rest are served as uploaded.
  */
-export const ASSET_KINDS = ['logo', 'image', 'document', 'font', 'archive', 'pattern'] as const;
+export const ASSET_KINDS = ['logo', 'image', 'photo', 'document', 'font', 'archive', 'pattern'] as const;
 export type AssetKind = (typeof ASSET_KINDS)[number];
 
-const DEFAULT_KIND: Record<AssetFormat, AssetKind> = { svg: 'logo', png: 'image', jpeg: 'image', webp: 'image', pdf: 'document', woff2: 'font', woff: 'font', ttf: 'font', otf: 'font', zip: 'archive' };
+const DEFAULT_KIND: Record<AssetFormat, AssetKind> = { svg: 'logo', png: 'image', jpeg: 'image', webp: 'image', avif: 'photo', pdf: 'document', woff2: 'font', woff: 'font', ttf: 'font', otf: 'font', zip: 'archive' };
+
+/** Formats that can be filed as photographs (the photo row of the upload table). */
+export const PHOTO_FORMATS = UPLOAD_RULES.photo.accept;
+export const PHOTO_ACCEPT_ATTRIBUTE = acceptAttribute('photo');
 
 export const ASSET_STATES = ['draft', 'approved', 'retired'] as const;
 export type AssetState = (typeof ASSET_STATES)[number];
@@ -117,6 +123,8 @@ export interface RenditionParams {
   colorSpace: 'rgb' | 'cmyk';
   /** Only for ICO: the sizes inside. */
   sizes: number[] | null;
+  /** Photographs on a published page: cut to this aspect ratio around the focal point before the resize (absent otherwise). */
+  focalCrop?: { aspect: PhotoAspect; focus: FocalPoint };
 }
 
 /** The twelve renditions the shelf offers for every logo (the benchmark and the bundle draw from this list). */

@@ -14,6 +14,7 @@ import type { FileStorage } from '@/lib/storage/storage';
 import { MAX_IMAGE_PIXELS, renditionType, type AssetFormat, type RenditionParams } from './kinds';
 import { checkRenditionSize, DEFAULT_SVG_WIDTH, paramsText, RenditionError } from './renditions';
 import { escapeXml } from '@/lib/safe/escape';
+import { focalCrop, renditionHeight } from './photo';
 
 export interface RenditionSource {
   id: string;
@@ -99,6 +100,18 @@ async function drawn(source: DrawnSource, params: RenditionSpec, contentWidth: n
   return cropTo(img, w, h, box);
 }
 
+/** A photograph cut to the aspect ratio around its focal point (EXIF orientation applied first), then scaled to the width. */
+async function focalCropped(bytes: Buffer, params: RenditionSpec): Promise<Sharp> {
+  const { aspect, focus } = params.focalCrop!;
+  const meta = await sharp(bytes, { limitInputPixels: MAX_IMAGE_PIXELS }).metadata();
+  const size = meta.autoOrient ?? { width: meta.width ?? 1, height: meta.height ?? 1 };
+  const box = focalCrop(size, aspect, focus);
+  const width = Math.min(params.width ?? box.width, box.width); // never upscaled
+  return sharp(bytes, { limitInputPixels: MAX_IMAGE_PIXELS, autoOrient: true })
+    .extract(box)
+    .resize({ width, height: renditionHeight(width, aspect), fit: 'fill' });
+}
+
 /** A square of `size` px with the drawing centred inside `inner` px (or inside its clear space). */
 async function square(source: DrawnSource, params: RenditionSpec, size: number): Promise<Sharp> {
   const clearSpace = params.padding < 0;
@@ -168,6 +181,7 @@ async function drawRendition(source: DrawnSource, params: RenditionSpec): Promis
     return { body: encodeIco(pngs), ...type };
   }
   if (params.square) return { body: await encodeAs(await square(source, params, params.width!), params).toBuffer(), ...type };
+  if (params.focalCrop && source.format !== 'svg') return { body: await encodeAs(await focalCropped(source.bytes, params), params).toBuffer(), ...type };
   const { img, width } = await drawn(source, params, params.width, null);
   const target = params.width ?? width;
   return { body: await encodeAs(img.resize({ width: target }), params).toBuffer(), ...type };

@@ -13,7 +13,7 @@ export class RenditionError extends AppError {
 /** Width of a raster drawn from an SVG when none is asked for. */
 export const DEFAULT_SVG_WIDTH = 1024;
 
-const RASTER_SOURCES: AssetFormat[] = ['svg', 'png', 'jpeg', 'webp'];
+const RASTER_SOURCES: AssetFormat[] = ['svg', 'png', 'jpeg', 'webp', 'avif'];
 
 /** '#rrggbb' for a typed colour, null for "transparent", or a refusal naming the field. */
 function colour(value: string | undefined, field: string): string | null | undefined {

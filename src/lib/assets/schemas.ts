@@ -2,6 +2,7 @@
 import { z } from 'zod';
 import { isCleanNote, isOneLine, NOTE_MESSAGE, ONE_LINE_MESSAGE } from '@/lib/safe/values';
 import { ASSET_KINDS, ASSET_STATES } from './kinds';
+import { ALT_TEXT_MAX, CAPTION_MAX, focalPointSchema } from './photo';
 
 const text = (max: number) => z.string().trim().max(max, `at most ${max} characters`).refine(isOneLine, ONE_LINE_MESSAGE);
 const note = (max: number) => z.string().trim().max(max, `at most ${max} characters`).refine(isCleanNote, NOTE_MESSAGE);
@@ -12,7 +13,12 @@ export const assetPatchSchema = z.strictObject({
   description: note(2000).nullable().optional(),
   usageNotes: note(2000).nullable().optional(),
   name: text(160).min(1, 'a name is needed').optional(),
-  kind: z.enum(['logo', 'image']).optional(),
+  kind: z.enum(['logo', 'image', 'photo']).optional(),
+  /** A photograph's description for screen readers (WCAG 2.2 SC 1.1.1); needed before a photo is approved. */
+  altText: note(ALT_TEXT_MAX).nullable().optional(),
+  caption: note(CAPTION_MAX).nullable().optional(),
+  /** Where the subject sits (fractions 0–1); crops keep it in view. null goes back to the centre. */
+  focus: focalPointSchema.nullable().optional(),
 });
 
 export const assetListQuerySchema = z.strictObject({
@@ -21,7 +27,7 @@ export const assetListQuerySchema = z.strictObject({
   kind: z.enum(ASSET_KINDS).optional(),
 });
 
-export const uploadFieldsSchema = z.strictObject({ kind: z.enum(['logo', 'image']).optional() });
+export const uploadFieldsSchema = z.strictObject({ kind: z.enum(['logo', 'image', 'photo']).optional() });
 
 export const bundleSchema = z
   .strictObject({

@@ -511,7 +511,7 @@ export async function loadIdentity(brand: Brand): Promise<Identity> {
     BrandColor.findAll({ where: { brandId: brand.id }, order: [['position', 'ASC'], ['createdAt', 'ASC']] }),
     BrandLogo.findAll({ where: { brandId: brand.id }, order: [['position', 'ASC'], ['createdAt', 'ASC']] }),
     BrandTypeface.findAll({ where: { brandId: brand.id }, order: [['createdAt', 'ASC']] }),
-    Asset.findAll({ where: { brandId: brand.id, state: 'approved' }, order: [['name', 'ASC']], attributes: ['id', 'name', 'kind', 'format'] }),
+    Asset.findAll({ where: { brandId: brand.id, state: 'approved' }, order: [['name', 'ASC']], attributes: ['id', 'name', 'kind', 'format', 'width', 'height', 'altText', 'caption', 'focusX', 'focusY'] }),
   ]);
   const settings: TypeScaleSettings = { ...DEFAULT_TYPE_SCALE, ...(brand.typeScale ?? {}) };
   const body = faces.find((f) => f.role === 'body') ?? faces[0];
@@ -525,7 +525,17 @@ export async function loadIdentity(brand: Brand): Promise<Identity> {
   }
   return {
     brand: { id: brand.id, name: brand.name, slug: brand.slug },
-    assets: approved.map((a) => ({ id: a.id, name: a.name, kind: a.kind, format: a.format, url: `/api/assets/${a.id}/file?format=original` })),
+    assets: approved.map((a) => ({
+      id: a.id,
+      name: a.name,
+      kind: a.kind,
+      format: a.format,
+      url: `/api/assets/${a.id}/file?format=original`,
+      // Photographs carry what the imagery block draws with; other files stay as they were.
+      ...(a.kind === 'photo'
+        ? { width: a.width, height: a.height, alt: a.altText, caption: a.caption, focus: a.focusX != null && a.focusY != null ? { x: a.focusX, y: a.focusY } : null }
+        : {}),
+    })),
     colors: await Promise.all(colors.map(colorView)),
     logos: logos.map(logoView),
     typefaces: faces.map(typefaceView),

@@ -119,6 +119,14 @@ export interface IdentityAsset {
   format: string;
   /** Where readers with download rights fetch the original. */
   url: string;
+  /** Photographs: pixel size, alt text, caption and focal point (absent in versions published before photographs). */
+  width?: number | null;
+  height?: number | null;
+  alt?: string | null;
+  caption?: string | null;
+  focus?: { x: number; y: number } | null;
+  /** In a published version: the address of the version's own copy, which answers ?w=&aspect= with a cropped rendition. */
+  renditions?: string;
 }
 
 export interface Identity {

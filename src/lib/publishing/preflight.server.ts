@@ -9,9 +9,9 @@ export async function preflightBrand(brand: Brand): Promise<Finding[]> {
   const [draft, identity, assets, instructions] = await Promise.all([
     readDraft(brand),
     loadIdentity(brand),
-    Asset.findAll({ where: { brandId: brand.id }, attributes: ['id', 'name', 'state'] }),
+    Asset.findAll({ where: { brandId: brand.id }, attributes: ['id', 'name', 'state', 'altText'] }),
     allTemplateInstructions(),
   ]);
-  const shelf = new Map<string, ShelfEntry>(assets.map((a) => [a.id, { name: a.name, state: a.state }]));
+  const shelf = new Map<string, ShelfEntry>(assets.map((a) => [a.id, { name: a.name, state: a.state, alt: a.altText }]));
   return preflight({ doc: draft.doc, identity, shelf, instructions });
 }

@@ -27,6 +27,8 @@ export interface Finding {
 export interface ShelfEntry {
   state: 'draft' | 'approved' | 'retired';
   name: string;
+  /** A photograph's own alt text on the shelf, which the imagery block uses when its item has none. */
+  alt?: string | null;
 }
 
 export interface PreflightInput {
@@ -86,7 +88,7 @@ export function preflight({ doc, identity, shelf, instructions }: PreflightInput
         if (!entry) add('image_placeholder', id, where, `${n} is a stand-in, not a file from the shelf: choose a photograph.`);
         else if (entry.state === 'retired') add('file_retired', id, where, `${n} (${entry.name}) has been retired.`);
         else if (entry.state !== 'approved') add('file_not_approved', id, where, `${n} (${entry.name}) is not approved yet.`);
-        if (!item.alt?.trim()) add('missing_alt', id, where, `${n} has no alternative text for people who cannot see it.`);
+        if (!item.alt?.trim() && !entry?.alt?.trim()) add('missing_alt', id, where, `${n} has no alternative text for people who cannot see it.`);
       });
     }
     if (raw.type === 'downloads') {

@@ -11,7 +11,7 @@ export function withVersionUrls(identity: Identity, slug: string, number: number
   return {
     ...identity,
     // Shelf images the version copied are served from the version; the rest keep their download-gated address.
-    assets: identity.assets?.map((a) => (files[a.id] ? { ...a, url: `${base}/${a.id}` } : a)),
+    assets: identity.assets?.map((a) => (files[a.id] ? { ...a, url: `${base}/${a.id}`, ...(a.kind === 'photo' ? { renditions: `${base}/${a.id}` } : {}) } : a)),
     logos: identity.logos.map((l) => {
       const url = `${base}/${l.id}`;
       return { ...l, files: { original: url, black: `${url}?variant=black`, white: `${url}?variant=white`, reversed: `${url}?variant=reversed`, onDark: `${url}?variant=on-dark` } };

@@ -44,9 +44,9 @@ async function copyFiles(brand: Brand, identity: Identity, doc: GuidelineDoc): P
   const logoType = (format: 'svg' | 'png') => (format === 'svg' ? 'image/svg+xml' : 'image/png');
   // Blocks show approved images of the brand's own shelf only (their declared image references), copied like the logos;
   // a name that is not yet an asset ("photo-to-come-1") has nothing to copy.
-  const approvedImages = new Set((identity.assets ?? []).filter((a) => a.kind === 'image').map((a) => a.id));
+  const approvedImages = new Set((identity.assets ?? []).filter((a) => a.kind === 'image' || a.kind === 'photo').map((a) => a.id));
   const wanted = documentRefs(doc, 'image').filter((id) => isAssetRef(id) && approvedImages.has(id));
-  const images = wanted.length ? await Asset.findAll({ where: { brandId: brand.id, id: wanted, state: 'approved', kind: 'image' }, attributes: ['id', 'storageKey', 'mime', 'format'] }) : [];
+  const images = wanted.length ? await Asset.findAll({ where: { brandId: brand.id, id: wanted, state: 'approved', kind: ['image', 'photo'] }, attributes: ['id', 'storageKey', 'mime', 'format'] }) : [];
   for (const image of images) await copy(image.id, image.storageKey, image.format, image.mime);
   const logos = await BrandLogo.findAll({ where: { brandId: brand.id }, attributes: ['id', 'storageKey', 'format', 'variantFiles'] });
   for (const logo of logos) {

@@ -48,7 +48,15 @@ export interface UploadRule {
  * a logo is a small drawing, a mood-board photo may be a camera original, the shelf keeps print files.
  */
 export const UPLOAD_RULES = {
-  shelf: { noun: 'A file on the asset shelf', accept: ['svg', 'png', 'jpeg', 'webp', 'pdf', 'woff2', 'woff', 'ttf', 'otf', 'zip'], maxBytes: 25 * MB, maxPixels: 60_000_000 },
+  shelf: { noun: 'A file on the asset shelf', accept: ['svg', 'png', 'jpeg', 'webp', 'avif', 'pdf', 'woff2', 'woff', 'ttf', 'otf', 'zip'], maxBytes: 25 * MB, maxPixels: 60_000_000 },
+  /** A photograph for the shelf: a raster picture a page shows in responsive renditions. */
+  photo: {
+    noun: 'A photograph',
+    accept: ['jpeg', 'png', 'webp', 'avif'],
+    maxBytes: 25 * MB,
+    maxPixels: 60_000_000,
+    hint: 'Logos, drawings and documents go on the shelf without “as photographs”.',
+  },
   logo: { noun: 'A logo', accept: ['svg', 'png'], maxBytes: 5 * MB, maxPixels: 40_000_000 },
   typeface: { noun: 'A typeface', accept: FONT_FORMATS, maxBytes: 10 * MB, maxPixels: 0 }, // takes no images
   boardImage: {

@@ -3,9 +3,11 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useRef, useState, type DragEvent } from 'react';
 import { api } from '@/lib/client/api';
 import { formatFileSize, SITE_LOCALE } from '@/lib/format';
-import { ACCEPT_ATTRIBUTE, ASSET_KINDS, STATE_LABELS, type AssetKind, type AssetState } from '@/lib/assets/kinds';
+import type { FocalPoint } from '@/lib/assets/photo';
+import { ACCEPT_ATTRIBUTE, ASSET_KINDS, PHOTO_ACCEPT_ATTRIBUTE, STATE_LABELS, type AssetKind, type AssetState } from '@/lib/assets/kinds';
 import { QueryRoot } from '@/components/app/QueryRoot';
 import { DownloadLog } from './DownloadLog';
+import { PhotoDetails } from './PhotoDetails';
 import { RenditionPicker } from './RenditionPicker';
 import { downloadBundle } from './bundle';
 import { uploadFile } from './upload';
@@ -22,6 +24,9 @@ export interface ShelfAsset {
   tags: string[];
   description: string | null;
   usageNotes: string | null;
+  altText: string | null;
+  caption: string | null;
+  focus: FocalPoint | null;
   renderable: boolean;
   files: { original: string; preview: string | null };
 }
@@ -43,7 +48,7 @@ const STATE_BADGE: Record<AssetState, string> = {
   approved: 'bg-plumb-wash text-plumb-deep',
   retired: 'bg-paper text-ink-faint line-through',
 };
-const KIND_LABEL: Record<AssetKind, string> = { logo: 'Logo', image: 'Image', document: 'Document', font: 'Font', archive: 'Archive', pattern: 'Pattern' };
+const KIND_LABEL: Record<AssetKind, string> = { logo: 'Logo', image: 'Image', photo: 'Photograph', document: 'Document', font: 'Font', archive: 'Archive', pattern: 'Pattern' };
 // The site's locale, so the server's render and the browser's agree.
 const size = (bytes: number) => formatFileSize(bytes, SITE_LOCALE);
 
@@ -69,7 +74,7 @@ function Shelf(props: ShelfProps) {
 
   const change = useMutation({
     mutationFn: ({ id, body }: { id: string; body: Record<string, unknown> }) => api<{ asset: ShelfAsset }>(`/api/brands/${brandId}/assets/${id}`, { method: 'PATCH', body }),
-    onSuccess: (r) => { setNotice({ kind: 'ok', text: `“${r.asset.name}” is now ${STATE_LABELS[r.asset.state].label.toLowerCase()}.` }); return refresh(); },
+    onSuccess: (r, { body }) => { setNotice({ kind: 'ok', text: body.state ? `“${r.asset.name}” is now ${STATE_LABELS[r.asset.state].label.toLowerCase()}.` : `Saved the details of “${r.asset.name}”.` }); return refresh(); },
     onError: (e) => setNotice({ kind: 'error', text: e.message }),
   });
   const remove = useMutation({
@@ -188,6 +193,7 @@ function Shelf(props: ShelfProps) {
                   </div>
                   {a.tags.length > 0 && <p className="text-xs text-ink-faint">{a.tags.map((t) => `#${t}`).join(' ')}</p>}
                   {a.usageNotes && <p className="text-sm text-ink-soft">{a.usageNotes}</p>}
+                  {a.kind === 'photo' && !a.altText && <p className="text-sm text-warn">No alt text yet: add it under “Photo details” before approving.</p>}
                   <div className="mt-auto flex flex-wrap gap-2 pt-2">
                     <button type="button" className="btn-quiet px-3 py-1.5" aria-expanded={openId === a.id} onClick={() => setOpenId(openId === a.id ? null : a.id)}>Get a file</button>
                     {canApprove && a.state !== 'approved' && <button type="button" className="btn-primary px-3 py-1.5" onClick={() => change.mutate({ id: a.id, body: { state: 'approved' } })}>Approve</button>}
@@ -195,6 +201,7 @@ function Shelf(props: ShelfProps) {
                     {canApprove && a.state !== 'draft' && <button type="button" className="btn-quiet px-3 py-1.5" onClick={() => change.mutate({ id: a.id, body: { state: 'draft' } })}>Back to draft</button>}
                     {canUpload && <button type="button" className="btn-danger px-3 py-1.5" onClick={() => { if (confirm(`Delete “${a.name}” and every file made from it?`)) remove.mutate(a.id); }}>Delete</button>}
                   </div>
+                  {canApprove && a.kind === 'photo' && <PhotoDetails asset={a} onSave={(body) => change.mutate({ id: a.id, body })} />}
                   {canApprove && <DetailsEditor asset={a} onSave={(body) => change.mutate({ id: a.id, body })} />}
                   {openId === a.id && <RenditionPicker asset={a} brandColors={props.brandColors} />}
                 </div>
@@ -231,6 +238,7 @@ function DropZone({ brandId, onDone }: { brandId: string; onDone: () => void }) 
   const [over, setOver] = useState(false);
   const [transfers, setTransfers] = useState<Transfer[]>([]);
   const [asLogo, setAsLogo] = useState(false);
+  const [asPhoto, setAsPhoto] = useState(false);
 
   const send = async (files: File[]) => {
     const start = transfers.length;
@@ -239,7 +247,7 @@ function DropZone({ brandId, onDone }: { brandId: string; onDone: () => void }) 
     await Promise.all(
       files.map(async (file, i) => {
         try {
-          const reply = await uploadFile(`/api/brands/${brandId}/assets`, file, (p) => update(i, { progress: p }), asLogo ? { kind: 'logo' } : {});
+          const reply = await uploadFile(`/api/brands/${brandId}/assets`, file, (p) => update(i, { progress: p }), asPhoto ? { kind: 'photo' } : asLogo ? { kind: 'logo' } : {});
           const a = reply.assets[0];
           update(i, { progress: 1, done: true, error: a?.duplicate ? 'Already on the shelf (same file): kept the existing one.' : a?.sanitised.length ? `Cleaned: removed ${a.sanitised.join(', ')}.` : undefined });
         } catch (e) {
@@ -264,11 +272,14 @@ function DropZone({ brandId, onDone }: { brandId: string; onDone: () => void }) 
         className={`m-4 rounded-lg border-2 border-dashed px-6 py-8 text-center transition-colors ${over ? 'border-plumb bg-plumb-wash' : 'border-rule-strong'}`}
       >
         <h2 id="upload-title" className="text-lg font-bold">Add files to the shelf</h2>
-        <p className="mt-1 text-sm text-ink-soft">Drop files here, or <button type="button" className="font-semibold text-plumb underline" onClick={() => input.current?.click()}>choose them</button>. SVG, PNG, JPEG, WebP, PDF, fonts (WOFF2, WOFF, TTF, OTF) or ZIP, up to 25 MB each. New files start as drafts.</p>
+        <p className="mt-1 text-sm text-ink-soft">Drop files here, or <button type="button" className="font-semibold text-plumb underline" onClick={() => input.current?.click()}>choose them</button>. SVG, PNG, JPEG, WebP, AVIF, PDF, fonts (WOFF2, WOFF, TTF, OTF) or ZIP, up to 25 MB each. New files start as drafts.</p>
         <label className="mt-3 inline-flex items-center gap-2 text-sm text-ink-soft">
-          <input type="checkbox" className="accent-plumb" checked={asLogo} onChange={(e) => setAsLogo(e.target.checked)} /> Treat PNG, JPEG and WebP files as logos (SVGs always are)
+          <input type="checkbox" className="accent-plumb" checked={asLogo} onChange={(e) => { setAsLogo(e.target.checked); if (e.target.checked) setAsPhoto(false); }} /> Treat PNG, JPEG and WebP files as logos (SVGs always are)
         </label>
-        <input ref={input} type="file" multiple accept={ACCEPT_ATTRIBUTE} className="sr-only" aria-label="Choose files to upload" onChange={(e) => { void send([...(e.target.files ?? [])]); e.target.value = ''; }} />
+        <label className="mt-1 flex items-center justify-center gap-2 text-sm text-ink-soft">
+          <input type="checkbox" className="accent-plumb" checked={asPhoto} onChange={(e) => { setAsPhoto(e.target.checked); if (e.target.checked) setAsLogo(false); }} /> Upload as photographs (JPEG, PNG, WebP or AVIF), for the imagery block; each needs alt text before it is approved
+        </label>
+        <input ref={input} type="file" multiple accept={asPhoto ? PHOTO_ACCEPT_ATTRIBUTE : ACCEPT_ATTRIBUTE} className="sr-only" aria-label="Choose files to upload" onChange={(e) => { void send([...(e.target.files ?? [])]); e.target.value = ''; }} />
       </div>
       {transfers.length > 0 && (
         <ul className="space-y-2 border-t border-rule px-6 py-4 text-sm" aria-label="Uploads">

@@ -2,11 +2,18 @@ import type { APIRoute } from 'astro';
 import { PRINT_WEIGHTS } from '@/lib/guideline/identity';
 import { log } from '@/lib/log.server';
 import { oneColourLogo, type OneColourVariant } from '@/lib/logo/knockout.server';
+import { versionPhotoRendition } from '@/lib/publishing/photo-renditions.server';
 import { siteAccess } from '@/lib/publishing/site-access.server';
 import { versionVariantFileId } from '@/lib/publishing/versions.server';
 import { staticInstance } from '@/lib/type/font-instance.server';
 import { storage } from '@/lib/storage/index.server';
 
+const FILE_HEADERS = {
+  // A version's files never change; still private, since access is per viewer.
+  'cache-control': 'private, max-age=31536000, immutable',
+  'x-content-type-options': 'nosniff',
+  'content-security-policy': "default-src 'none'; style-src 'unsafe-inline'; sandbox",
+};
 const VARIANTS = new Set(['black', 'white', 'reversed', 'on-dark']);
 /** Computed versions of a version's files, which never change: the last hundred kept in memory. */
 const made = new Map<string, { body: Buffer; contentType: string }>();
@@ -19,6 +26,12 @@ export const GET: APIRoute = async (context) => {
   const fileId = context.params.fileId ?? '';
   let file = Object.hasOwn(access.version.files, fileId) && !fileId.includes('~') ? access.version.files[fileId] : undefined;
   if (!file) return new Response('Not found', { status: 404 });
+  // A photograph asked at a width and aspect ratio: a rendition cut around its focal point (imagery block's srcset).
+  if (context.url.searchParams.has('aspect')) {
+    const rendition = await versionPhotoRendition(access.version, fileId, file.key, context.url.searchParams);
+    if (!rendition) return new Response('Not found', { status: 404 });
+    return new Response(new Uint8Array(rendition.body), { headers: { 'content-type': rendition.mime, ...FILE_HEADERS } });
+  }
   let body = await storage.get(file.key);
   if (!body) return new Response('Not found', { status: 404 });
   const variant = context.url.searchParams.get('variant');
@@ -58,12 +71,6 @@ export const GET: APIRoute = async (context) => {
     }
   }
   return new Response(new Uint8Array(body), {
-    headers: {
-      'content-type': contentType,
-      // A version's files never change; still private, since access is per viewer.
-      'cache-control': 'private, max-age=31536000, immutable',
-      'x-content-type-options': 'nosniff',
-      'content-security-policy': "default-src 'none'; style-src 'unsafe-inline'; sandbox",
-    },
+    headers: { 'content-type': contentType, ...FILE_HEADERS },
   });
 };
