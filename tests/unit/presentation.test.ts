@@ -3,6 +3,7 @@ import { readFileSync } from 'node:fs';
 import { renderToStaticMarkup } from 'react-dom/server';
 import { createElement } from 'react';
 import { describe, expect, test } from 'vitest';
+import { BlockRenderer } from '@/blocks/renderers';
 import { deckSlides, SLIDES, type DeckContext } from '@/components/presentation/slides';
 import { contrastRatio } from '@/lib/color/contrast';
 import type { GuidelineDoc } from '@/lib/guideline/document';
@@ -67,11 +68,15 @@ describe('the slide registry', () => {
   });
 
   test('the pattern slide shows the pattern block as it renders, and only when the guidelines have one', () => {
-    const doc: GuidelineDoc = { type: 'doc', content: [{ type: 'pattern', attrs: { id: 'pat', logoId: 'l-cone' } }] };
+    const attrs = { id: 'pat', logoId: 'l-cone' };
+    const doc: GuidelineDoc = { type: 'doc', content: [{ type: 'pattern', attrs }] };
     const slides = deckSlides(context({ doc }));
     expect(slides.map((s) => s.key)).toContain('pattern');
     const html = renderToStaticMarkup(createElement('div', null, slides.find((s) => s.key === 'pattern')!.content));
-    expect(html).toContain('aria-label="Pattern of');
+    // The block's own output, unchanged: whatever the pattern block draws on the site is what the slide shows.
+    const block = renderToStaticMarkup(createElement(BlockRenderer, { type: 'pattern', attrs, identity, mode: 'site' }));
+    expect(block).toContain('<svg');
+    expect(html).toContain(block);
     // A pattern block with no mark chosen draws nothing on the site, so the slide is left out.
     const unset: GuidelineDoc = { type: 'doc', content: [{ type: 'pattern', attrs: { id: 'pat', logoId: null } }] };
     expect(keys(context({ doc: unset }))).not.toContain('pattern');

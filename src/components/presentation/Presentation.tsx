@@ -13,7 +13,7 @@ export interface PresentationProps {
 export function Presentation({ brandName, slides, guidelinesHref, pdfHref }: PresentationProps) {
   return (
     <>
-      <main className="deck" data-deck aria-roledescription="presentation" aria-label={`${brandName}: the identity`}>
+      <main className="deck" data-deck aria-label={`${brandName}: the identity`}>
         {slides.map((slide, i) => (
           <section
             key={slide.key}

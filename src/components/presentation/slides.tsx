@@ -32,7 +32,7 @@ export interface SlideDefinition<M> {
   View: (props: { material: M; ctx: DeckContext }) => ReactNode;
 }
 
-const defineSlide = <M,>(def: SlideDefinition<M>): SlideDefinition<unknown> => def as SlideDefinition<unknown>;
+const defineSlide = <M,>(def: SlideDefinition<M>): SlideDefinition<unknown> => def as unknown as SlideDefinition<unknown>;
 
 /** A slide's ground and ink as custom properties (the inks are chosen by contrast, never typed). */
 const worn = (ground: string): CSSProperties => ({ '--ground': ground, '--ink': inkOn(ground) }) as CSSProperties;

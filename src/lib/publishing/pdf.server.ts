@@ -141,15 +141,7 @@ export async function printSlides(url: string, cookie: { name: string; value: st
     if (blocked) log.warn({ path: new URL(url).pathname, blocked }, 'pdf: requests blocked while printing slides');
     const pdf = await page.pdf({ preferCSSPageSize: true, printBackground: true, tagged: true, timeout: 120_000 });
     const doc = await PDFDocument.load(pdf, { updateMetadata: false, parseSpeed: ParseSpeeds.Fastest });
-    doc.setTitle(meta.title, { showInWindowTitleBar: true });
-    doc.setAuthor(meta.author);
-    doc.setSubject(meta.subject);
-    doc.setKeywords(meta.keywords);
-    doc.setCreator('Plumbline');
-    doc.setProducer('Plumbline (Chromium and pdf-lib)');
-    doc.setCreationDate(meta.published);
-    doc.setModificationDate(new Date());
-    doc.setLanguage('en');
+    describe(doc, meta);
     return Buffer.from(await doc.save({ objectsPerTick: Infinity }));
   } finally {
     await page.close();
@@ -183,6 +175,19 @@ function sectionStarts(book: PDFDocument, titles: string[]): number[] {
 
 const normalise = (text: string) => text.replace(/\s+/g, ' ').trim();
 
+/** Title, author, subject, keywords, dates and language in the document information (ISO 32000-1 §14.3.3). */
+function describe(doc: PDFDocument, meta: BookMeta): void {
+  doc.setTitle(meta.title, { showInWindowTitleBar: true });
+  doc.setAuthor(meta.author);
+  doc.setSubject(meta.subject);
+  doc.setKeywords(meta.keywords);
+  doc.setCreator('Plumbline');
+  doc.setProducer('Plumbline (Chromium and pdf-lib)');
+  doc.setCreationDate(meta.published);
+  doc.setModificationDate(new Date());
+  doc.setLanguage('en');
+}
+
 /** Front matter before the body, contents links pointed at their pages, page labels i, ii, 1, 2…, and metadata. */
 async function bindBook(book: PDFDocument, front: PDFDocument, starts: number[], meta: BookMeta): Promise<Uint8Array> {
   const bodyPages = book.getPages();
@@ -202,15 +207,7 @@ async function bindBook(book: PDFDocument, front: PDFDocument, starts: number[],
     }
   }
   book.catalog.set(PDFName.of('PageLabels'), book.context.obj({ Nums: [0, { S: PDFName.of('r') }, copied.length, { S: PDFName.of('D') }] }));
-  book.setTitle(meta.title, { showInWindowTitleBar: true });
-  book.setAuthor(meta.author);
-  book.setSubject(meta.subject);
-  book.setKeywords(meta.keywords);
-  book.setCreator('Plumbline');
-  book.setProducer('Plumbline (Chromium and pdf-lib)');
-  book.setCreationDate(meta.published);
-  book.setModificationDate(new Date());
-  book.setLanguage('en');
+  describe(book, meta);
   return book.save({ objectsPerTick: Infinity });
 }
 
