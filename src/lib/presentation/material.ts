@@ -14,10 +14,10 @@ import { isAssetRef, storedHex } from '@/lib/safe/values';
  */
 export const SLIDE_PAGE = { widthPx: 1280, heightPx: 720, widthMm: 338.67, heightMm: 190.5 } as const;
 
-const BLACK_INK = '#141414';
+const BLACK_INK = '#000000';
 const WHITE_INK = '#ffffff';
 
-/** The near-black or the white, whichever has the higher WCAG 2.2 contrast on `ground` (one of them always reaches 4.5:1). */
+/** Black or white, whichever has the higher WCAG 2.2 contrast on `ground` (one of them always reaches 4.5:1). */
 export function inkOn(ground: string): string {
   const hex = storedHex(ground, '#ffffff');
   return contrastRatio(BLACK_INK, hex) >= contrastRatio(WHITE_INK, hex) ? BLACK_INK : WHITE_INK;
