@@ -16,6 +16,8 @@ const slug = DEMO_BRANDS[0].slug;
 
 const counter = () => page.locator('[data-deck-count]').textContent();
 const announced = () => page.locator('[data-deck-live]').textContent();
+/** Until the slide's fade-in has ended (axe-core would read its colours half faded). */
+const still = (p: Page) => p.waitForFunction(() => document.getAnimations().every((a) => a.playState !== 'running'));
 /** The slide regions a reader can see (the others are hidden). */
 const visibleSlides = () => page.locator('section[aria-roledescription="slide"]:visible');
 
@@ -31,7 +33,7 @@ beforeAll(async () => {
   await page.goto(link.body.shareLink.url);
   await page.waitForURL(new RegExp(`/b/${slug}$`));
   await page.goto(`${baseUrl()}/b/${slug}/presentation`);
-  await page.locator('html[data-deck="on"]').waitFor();
+  await page.locator('html[data-deck-mode="on"]').waitFor();
   total = await page.locator('section[data-slide]').count();
 }, 120_000);
 afterAll(async () => {
@@ -105,13 +107,14 @@ describe('the presentation in a browser', () => {
     await page.keyboard.press('ArrowRight');
     await page.keyboard.press('ArrowRight');
     await page.reload();
-    await page.locator('html[data-deck="on"]').waitFor();
+    await page.locator('html[data-deck-mode="on"]').waitFor();
     expect(await counter()).toBe(`3 / ${total}`);
     await page.keyboard.press('Home');
   });
 
   test('axe-core finds no serious or critical violation on any slide', async () => {
     for (let n = 1; n <= total; n++) {
+      await still(page);
       const serious = await seriousViolations(page);
       expect(serious, `slide ${n}`).toEqual([]);
       await page.keyboard.press('ArrowRight');
@@ -125,7 +128,7 @@ describe('the presentation in a browser', () => {
     const still = await browser.newContext({ viewport: { width: 1280, height: 720 }, reducedMotion: 'reduce', storageState: await context.storageState() });
     const quiet = await still.newPage();
     await quiet.goto(`${baseUrl()}/b/${slug}/presentation`);
-    await quiet.locator('html[data-deck="on"]').waitFor();
+    await quiet.locator('html[data-deck-mode="on"]').waitFor();
     expect(await animation(quiet)).toBe('none');
     await still.close();
   });

@@ -32,7 +32,7 @@ export function startDeck(root: HTMLElement): (n: number) => void {
     history.replaceState(null, '', `#slide-${n + 1}`);
   };
 
-  document.documentElement.dataset.deck = 'on';
+  document.documentElement.dataset.deckMode = 'on';
   if (bar) bar.hidden = false;
   const fromHash = Number(location.hash.match(/^#slide-(\d+)$/)?.[1] ?? 1);
   show(Number.isInteger(fromHash) ? fromHash - 1 : 0, false);
