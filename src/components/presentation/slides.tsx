@@ -193,6 +193,8 @@ const type = defineSlide<true>({
   View: ({ ctx }) => {
     const heading = typefaceForRole(ctx.identity, 'heading') ?? typefaceForRole(ctx.identity, 'body');
     const body = typefaceForRole(ctx.identity, 'body') ?? heading;
+    // The brand's first word: the whole name at a headline size would run off the column.
+    const sample = ctx.identity.brand.name.split(/\s+/)[0];
     const steps = [...ctx.identity.typeScale.steps].filter((s) => s.step >= 0).sort((a, b) => b.step - a.step).slice(0, 5);
     return (
       <div className="s-frame s-type" style={worn(slideGrounds(ctx.identity).light)}>
@@ -219,7 +221,7 @@ const type = defineSlide<true>({
               <li key={s.name} style={{ fontFamily: fontStack(s.role === 'body' ? body : heading) }}>
                 <span className="s-scale-name">{s.name} · {Math.round(s.px * 10) / 10} px</span>
                 <span className="s-scale-sample" style={{ fontSize: `${Math.min(s.px, 96) / 12.8}cqw` }}>
-                  {ctx.identity.brand.name}
+                  {sample}
                 </span>
               </li>
             ))}
