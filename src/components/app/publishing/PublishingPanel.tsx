@@ -241,7 +241,7 @@ function ShareLinks({ brandId, versions }: { brandId: string; versions: Version[
                     {l.state === 'active' && (
                       <span className="flex flex-wrap justify-end gap-2">
                         <label className="flex items-center gap-1.5 whitespace-nowrap px-1 text-sm">
-                          <input type="checkbox" checked={l.allowPresentation} disabled={present.isPending} onChange={(e) => present.mutate({ id: l.id, allow: e.target.checked })} /> Presentation
+                          <input type="checkbox" checked={l.allowPresentation} disabled={present.isPending} aria-label={`${l.label ?? 'Unnamed link'}: may open the presentation`} onChange={(e) => present.mutate({ id: l.id, allow: e.target.checked })} /> Presentation
                         </label>
                         <button type="button" className="btn-danger px-3 py-1" onClick={() => revoke.mutate(l.id)}>Withdraw</button>
                       </span>
