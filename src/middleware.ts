@@ -38,7 +38,7 @@ async function resolveCaller(context: APIContext, next: MiddlewareNext): Promise
     let grant = shareGrants.get(token);
     if (grant === undefined) {
       const link = await linkForToken(token);
-      grant = link && linkState(link) === 'active' ? { brandId: link.brandId, linkId: link.id, allowDownloads: link.allowDownloads, version: link.versionNumber } : null;
+      grant = link && linkState(link) === 'active' ? { brandId: link.brandId, linkId: link.id, allowDownloads: link.allowDownloads, allowPresentation: link.allowPresentation, version: link.versionNumber } : null;
       shareGrants.set(token, grant);
     }
     context.locals.shareGrant = grant;

@@ -27,6 +27,8 @@ export class ShareLink extends Model<InferAttributes<ShareLink>, InferCreationAt
   declare label: string | null;
   declare versionNumber: number | null;
   declare allowDownloads: boolean;
+  /** The link also opens the version's reveal presentation (and its PDF). */
+  declare allowPresentation: CreationOptional<boolean>;
   declare passwordHash: string | null;
   declare expiresAt: Date | null;
   declare revokedAt: Date | null;
@@ -40,7 +42,8 @@ export class ShareLink extends Model<InferAttributes<ShareLink>, InferCreationAt
 export class PdfExport extends Model<InferAttributes<PdfExport>, InferCreationAttributes<PdfExport>> {
   declare id: CreationOptional<string>;
   declare versionId: string;
-  declare size: 'a4' | 'letter';
+  /** Paper size of the print edition, or 'slides' for the 16:9 presentation. */
+  declare size: 'a4' | 'letter' | 'slides';
   declare state: 'queued' | 'rendering' | 'done' | 'failed';
   declare progress: number;
   declare storageKey: string | null;
@@ -75,6 +78,7 @@ export function initPublishingModels(sequelize: Sequelize): void {
       label: { type: DataTypes.STRING(120), allowNull: true },
       versionNumber: { type: DataTypes.INTEGER, allowNull: true },
       allowDownloads: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+      allowPresentation: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
       passwordHash: { type: DataTypes.STRING(200), allowNull: true },
       expiresAt: { type: DataTypes.DATE, allowNull: true },
       revokedAt: { type: DataTypes.DATE, allowNull: true },

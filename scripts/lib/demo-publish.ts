@@ -106,7 +106,7 @@ export async function publishDemo(siteUrl: string, dataDir: string): Promise<str
     await call(siteUrl, cookie, 'POST', `${base}/versions`, { note: 'First edition of the Larchmere guidelines: logo, colour, type and imagery.' });
   }
   if (!existsSync(linkFile)) {
-    const { shareLink } = await call(siteUrl, cookie, 'POST', `${base}/share-links`, { label: 'Demo link for the signage agency', allowDownloads: true });
+    const { shareLink } = await call(siteUrl, cookie, 'POST', `${base}/share-links`, { label: 'Demo link for the signage agency', allowDownloads: true, allowPresentation: true });
     writeFileSync(linkFile, shareLink.url);
   }
   return readFileSync(linkFile, 'utf8').trim();

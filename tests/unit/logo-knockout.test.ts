@@ -63,6 +63,12 @@ describe('SVG knockouts, read back by pixel sampling (shapes inside shapes)', ()
     expect(px(50, 40), 'the tree is the ground colour').toEqual([0x1d, 0x2a, 0x44, 255]);
     expect(px(3, 3)[3], 'outside the disc stays transparent').toBe(0);
   });
+  test('painted in black on white: the disc black, the tree white (a black ink is never taken for a knockout)', async () => {
+    const px = await sampler(knockoutSvg(fixture('disc-tree.svg'), { ink: '#000000', paintOn: '#ffffff' }), 2);
+    expect(px(15, 50), 'the disc is the ink').toEqual([0, 0, 0, 255]);
+    expect(px(50, 40), 'the tree is the ground colour').toEqual([255, 255, 255, 255]);
+    expect(px(3, 3)[3], 'outside the disc stays transparent').toBe(0);
+  });
   test('a light tree on a navy disc: disc in the ink, the tree cut out, outside transparent', async () => {
     for (const ink of ['#ffffff', '#000000', '#c8553d']) {
       const px = await sampler(knockoutSvg(fixture('disc-tree.svg'), { ink }), 2);

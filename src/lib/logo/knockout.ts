@@ -179,8 +179,9 @@ export function knockoutSvg(svgText: string, options: KnockoutOptions): string {
   if (options.paintOn !== undefined) {
     const groundResult = parseColor(options.paintOn);
     if (!groundResult.ok) throw new LogoError('invalid_input', `The ground colour: ${groundResult.error.message}`);
-    const paint = (hex: string) => (c: string) => (c.toLowerCase().startsWith(hex) ? `${hex === MASK_INK ? ink : groundResult.color.hex}${c.slice(7)}` : c);
-    const painted = drawing.replace(/#ffffff(?:[0-9a-f]{2})?\b/gi, paint(MASK_INK)).replace(/#000000(?:[0-9a-f]{2})?\b/gi, paint(MASK_KNOCKOUT));
+    // One pass over both mask paints: in two passes a black ink, once painted, would be taken for a knockout.
+    const paint = (c: string) => `${c.slice(0, 7).toLowerCase() === MASK_INK ? ink : groundResult.color.hex}${c.slice(7)}`;
+    const painted = drawing.replace(/#(?:ffffff|000000)(?:[0-9a-f]{2})?\b/gi, paint);
     return `<svg${bareRoot}>${painted}</svg>`;
   }
   const { x, y, width, height } = clean.viewBox;

@@ -16,6 +16,8 @@ import { versionPath } from './snapshot-urls';
 
 export const PAPER_SIZES = ['a4', 'letter'] as const;
 export type PaperSize = (typeof PAPER_SIZES)[number];
+/** What a PDF export prints: the print edition on a paper size, or the reveal presentation's 16:9 slides. */
+export type PdfEdition = PaperSize | 'slides';
 const QUEUE = 'pdf-export';
 
 let browser: Promise<Browser> | null = null;
@@ -119,6 +121,34 @@ export async function printBook(url: string, cookie: { name: string; value: stri
 }
 
 /**
+ * Print the reveal presentation: one 16:9 page per slide (the page size is the presentation's own @page rule),
+ * under the same rules as the book: scripts off, only the version's own files, then the metadata set by pdf-lib.
+ */
+export async function printSlides(url: string, cookie: { name: string; value: string } | undefined, meta: BookMeta): Promise<Buffer> {
+  const page = await (await warmBrowser()).newPage();
+  let blocked = 0;
+  try {
+    await page.setJavaScriptEnabled(false);
+    await page.setRequestInterception(true);
+    page.on('request', (request) => {
+      if (printRequestAllowed(request.url(), request.method(), url)) return void request.continue();
+      blocked++;
+      return void request.abort('blockedbyclient');
+    });
+    if (cookie) await page.setCookie({ ...cookie, url: new URL(url).origin, httpOnly: true });
+    await page.goto(url, { waitUntil: 'load', timeout: 60_000 });
+    await page.evaluate(() => document.fonts.ready.then(() => undefined));
+    if (blocked) log.warn({ path: new URL(url).pathname, blocked }, 'pdf: requests blocked while printing slides');
+    const pdf = await page.pdf({ preferCSSPageSize: true, printBackground: true, tagged: true, timeout: 120_000 });
+    const doc = await PDFDocument.load(pdf, { updateMetadata: false, parseSpeed: ParseSpeeds.Fastest });
+    describe(doc, meta);
+    return Buffer.from(await doc.save({ objectsPerTick: Infinity }));
+  } finally {
+    await page.close();
+  }
+}
+
+/**
  * The body page index (0-based) where each section starts, read from the outline Chromium wrote: its top-level
  * entries are the section headings (<h1>), matched to `titles` in order, since rich-text headings placed before
  * the first section are top-level entries too. A section not found gets -1 (its contents row shows no number).
@@ -145,6 +175,19 @@ function sectionStarts(book: PDFDocument, titles: string[]): number[] {
 
 const normalise = (text: string) => text.replace(/\s+/g, ' ').trim();
 
+/** Title, author, subject, keywords, dates and language in the document information (ISO 32000-1 §14.3.3). */
+function describe(doc: PDFDocument, meta: BookMeta): void {
+  doc.setTitle(meta.title, { showInWindowTitleBar: true });
+  doc.setAuthor(meta.author);
+  doc.setSubject(meta.subject);
+  doc.setKeywords(meta.keywords);
+  doc.setCreator('Plumbline');
+  doc.setProducer('Plumbline (Chromium and pdf-lib)');
+  doc.setCreationDate(meta.published);
+  doc.setModificationDate(new Date());
+  doc.setLanguage('en');
+}
+
 /** Front matter before the body, contents links pointed at their pages, page labels i, ii, 1, 2…, and metadata. */
 async function bindBook(book: PDFDocument, front: PDFDocument, starts: number[], meta: BookMeta): Promise<Uint8Array> {
   const bodyPages = book.getPages();
@@ -164,15 +207,7 @@ async function bindBook(book: PDFDocument, front: PDFDocument, starts: number[],
     }
   }
   book.catalog.set(PDFName.of('PageLabels'), book.context.obj({ Nums: [0, { S: PDFName.of('r') }, copied.length, { S: PDFName.of('D') }] }));
-  book.setTitle(meta.title, { showInWindowTitleBar: true });
-  book.setAuthor(meta.author);
-  book.setSubject(meta.subject);
-  book.setKeywords(meta.keywords);
-  book.setCreator('Plumbline');
-  book.setProducer('Plumbline (Chromium and pdf-lib)');
-  book.setCreationDate(meta.published);
-  book.setModificationDate(new Date());
-  book.setLanguage('en');
+  describe(book, meta);
   return book.save({ objectsPerTick: Infinity });
 }
 
@@ -205,6 +240,17 @@ export function bookMeta(brandName: string, studioName: string, number: number, 
   };
 }
 
+/** Title, author and subject of a version's presentation PDF. */
+export function slidesMeta(brandName: string, studioName: string, number: number, published: Date): BookMeta {
+  return {
+    title: `${brandName}: the identity, version ${number}`,
+    author: studioName,
+    subject: `The ${brandName} identity in slides: logo, mark, colour, type and more. Version ${number}, published ${formatLongDate(published, SITE_LOCALE)}.`,
+    keywords: [brandName, 'brand identity', 'presentation', `version ${number}`],
+    published,
+  };
+}
+
 async function renderExport(exportId: string): Promise<void> {
   const job = await PdfExport.findByPk(exportId);
   if (!job) return;
@@ -213,10 +259,13 @@ async function renderExport(exportId: string): Promise<void> {
   if (!version || !brand) return;
   await job.update({ state: 'rendering', progress: 20 });
   try {
-    const url = `${SITE_URL}${versionPath(brand.slug, version.number)}/print?size=${job.size}`;
     const studio = await Studio.findByPk(brand.studioId, { attributes: ['name'] });
-    const meta = bookMeta(brand.name, studio?.name ?? brand.name, version.number, version.publishedAt);
-    const pdf = await printBook(url, { name: PRINT_COOKIE, value: printPass(version.id) }, meta, (progress) => job.update({ progress }));
+    const author = studio?.name ?? brand.name;
+    const pass = { name: PRINT_COOKIE, value: printPass(version.id) };
+    const pdf =
+      job.size === 'slides'
+        ? await printSlides(`${SITE_URL}${versionPath(brand.slug, version.number)}/presentation?print`, pass, slidesMeta(brand.name, author, version.number, version.publishedAt))
+        : await printBook(`${SITE_URL}${versionPath(brand.slug, version.number)}/print?size=${job.size}`, pass, bookMeta(brand.name, author, version.number, version.publishedAt), (progress) => job.update({ progress }));
     await job.update({ progress: 95 });
     const key = newKey(brand.id, 'pdf', 'pdf');
     await storage.put(key, pdf, 'application/pdf');
@@ -235,8 +284,8 @@ export interface PdfStatus {
   printerMissing?: boolean;
 }
 
-/** The PDF of a version at a size: its bytes when ready, otherwise its progress (queued on first ask). */
-export async function versionPdf(version: GuidelineVersion, size: PaperSize): Promise<{ pdf: Buffer } | { status: PdfStatus }> {
+/** The PDF of a version at a size (or its slides): its bytes when ready, otherwise its progress (queued on first ask). */
+export async function versionPdf(version: GuidelineVersion, size: PdfEdition): Promise<{ pdf: Buffer } | { status: PdfStatus }> {
   const [job, created] = await PdfExport.findOrCreate({ where: { versionId: version.id, size }, defaults: { versionId: version.id, size, state: 'queued', progress: 0, storageKey: null, error: null } });
   if (job.state === 'done' && job.storageKey) {
     const pdf = await storage.get(job.storageKey);

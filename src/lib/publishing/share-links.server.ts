@@ -28,6 +28,7 @@ const view = (l: ShareLink): ShareLinkView => ({
   label: l.label,
   version: l.versionNumber,
   allowDownloads: l.allowDownloads,
+  allowPresentation: l.allowPresentation,
   hasPassword: l.passwordHash !== null,
   expiresAt: l.expiresAt?.toISOString() ?? null,
   revokedAt: l.revokedAt?.toISOString() ?? null,
@@ -53,7 +54,7 @@ export async function passwordMatches(password: string, stored: string): Promise
 export async function createShareLink(
   caller: Caller,
   brand: Brand,
-  body: { expiresAt?: string; password?: string; allowDownloads?: boolean; version?: number; label?: string },
+  body: { expiresAt?: string; password?: string; allowDownloads?: boolean; allowPresentation?: boolean; version?: number; label?: string },
 ): Promise<ShareLinkView> {
   if (body.expiresAt && new Date(body.expiresAt) <= new Date()) throw new ApiError(400, 'invalid_input', 'The expiry date is in the past.', { path: 'expiresAt' });
   if (body.version !== undefined && !(await GuidelineVersion.findOne({ where: { brandId: brand.id, number: body.version } }))) {
@@ -69,6 +70,7 @@ export async function createShareLink(
         label: body.label ?? null,
         versionNumber: body.version ?? null,
         allowDownloads: body.allowDownloads ?? false,
+        allowPresentation: body.allowPresentation ?? false,
         passwordHash: body.password ? await hashPassword(body.password) : null,
         expiresAt: body.expiresAt ? new Date(body.expiresAt) : null,
         revokedAt: null,
@@ -77,7 +79,7 @@ export async function createShareLink(
       },
       { transaction: t },
     );
-    await audit({ actorId: caller.id, action: 'shareLink.create', targetType: 'shareLink', targetId: row.id, brandId: brand.id, studioId: brand.studioId, details: { allowDownloads: row.allowDownloads, expiresAt: body.expiresAt ?? null, version: row.versionNumber, password: !!body.password } }, t);
+    await audit({ actorId: caller.id, action: 'shareLink.create', targetType: 'shareLink', targetId: row.id, brandId: brand.id, studioId: brand.studioId, details: { allowDownloads: row.allowDownloads, allowPresentation: row.allowPresentation, expiresAt: body.expiresAt ?? null, version: row.versionNumber, password: !!body.password } }, t);
     return row;
   });
   return { ...view(link), url: `${SITE_URL}/s/${token}` };
@@ -96,6 +98,19 @@ export async function revokeShareLink(caller: Caller, brand: Brand, linkId: stri
     shareGrants.clear();
     await audit({ actorId: caller.id, action: 'shareLink.revoke', targetType: 'shareLink', targetId: link.id, brandId: brand.id, studioId: brand.studioId, details: {} }, t);
   });
+}
+
+/** Let a link open the presentation, or stop it; the link's holders see the change at once. */
+export async function setLinkPresentation(caller: Caller, brand: Brand, linkId: string, allowPresentation: boolean): Promise<ShareLinkView> {
+  const link = await ShareLink.findOne({ where: { id: linkId, brandId: brand.id } });
+  if (!link) throw new ApiError(404, 'not_found', 'That share link was not found.');
+  if (link.allowPresentation === allowPresentation) return view(link);
+  await sequelize.transaction(async (t) => {
+    await link.update({ allowPresentation }, { transaction: t });
+    shareGrants.clear();
+    await audit({ actorId: caller.id, action: 'shareLink.update', targetType: 'shareLink', targetId: link.id, brandId: brand.id, studioId: brand.studioId, details: { allowPresentation } }, t);
+  });
+  return view(link);
 }
 
 /** The link a token opens, or null when no link has that token. */

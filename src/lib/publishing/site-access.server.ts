@@ -26,6 +26,8 @@ export interface SiteAccess {
   role: BrandRole | null;
   viaShareLink: string | null;
   canDownload: boolean;
+  /** Members may open the reveal presentation; a share link only when it says so. */
+  canPresent: boolean;
   /** Editors see notes meant for them (e.g. a font shown in its fallback for want of a licence). */
   isEditor: boolean;
 }
@@ -38,6 +40,10 @@ const page = (status: number, title: string, message: string) =>
       `<body><main><h1>${escapeHtml(title)}</h1><p>${escapeHtml(message)}</p></main></body></html>`,
     { status, headers: { 'content-type': 'text/html; charset=utf-8', 'cache-control': 'no-store' } },
   );
+
+/** The page for a share link that opens the guidelines but not the presentation. */
+export const notSharedPage = () =>
+  page(403, 'The presentation is not part of this link', 'This link opens the published guidelines only. Ask the brand team for a link that includes the presentation.');
 
 export const notFoundPage = () => page(404, 'Nothing here', 'This guideline site does not exist, or you do not have access to it.');
 
@@ -70,7 +76,7 @@ export async function siteAccess(Astro: Pick<APIContext, 'locals' | 'url' | 'red
   const passVersion = brand && !role && !share ? versionFromPass(Astro.cookies.get(PRINT_COOKIE)?.value) : null;
   if (passVersion) {
     const version = await findVersion(brand!.id, number);
-    if (version && version.id === passVersion) return { brand: brand!, version, role: null, viaShareLink: null, canDownload: false, isEditor: false };
+    if (version && version.id === passVersion) return { brand: brand!, version, role: null, viaShareLink: null, canDownload: false, canPresent: true, isEditor: false };
   }
   if (!brand || (!role && !share)) {
     if (!user && !share) return Astro.redirect(`/sign-in?next=${encodeURIComponent(Astro.url.pathname)}`);
@@ -90,6 +96,7 @@ export async function siteAccess(Astro: Pick<APIContext, 'locals' | 'url' | 'red
     role,
     viaShareLink: role ? null : share!.linkId,
     canDownload: role ? can(role, 'asset.download') : share!.allowDownloads,
+    canPresent: role ? true : share!.allowPresentation,
     isEditor: role ? can(role, 'draft.edit') : false,
   };
 }

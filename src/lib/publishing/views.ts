@@ -8,6 +8,8 @@ export interface ShareLinkView {
   url?: string;
   version: number | null;
   allowDownloads: boolean;
+  /** The link also opens the reveal presentation. */
+  allowPresentation: boolean;
   hasPassword: boolean;
   expiresAt: string | null;
   revokedAt: string | null;

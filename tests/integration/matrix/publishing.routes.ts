@@ -12,5 +12,6 @@ export default withoutClientWork([
   { method: 'GET', file: 'brands/[id]/versions/compare.ts', path: (f) => `${b(f)}/versions/compare?from=1&to=draft`, expect: only(200, ['owner', 'editor', 'reviewer']) },
   { method: 'GET', file: 'brands/[id]/share-links/index.ts', path: (f) => `${b(f)}/share-links`, expect: only(200, ['owner']) },
   { method: 'POST', file: 'brands/[id]/share-links/index.ts', path: (f) => `${b(f)}/share-links`, body: () => ({ allowDownloads: true }), expect: only(201, ['owner']) },
+  { method: 'PATCH', file: 'brands/[id]/share-links/[linkId].ts', path: (f) => `${b(f)}/share-links/${f.shareLinkId}`, body: () => ({ allowPresentation: true }), expect: only(200, ['owner']) },
   { method: 'DELETE', file: 'brands/[id]/share-links/[linkId].ts', path: (f) => `${b(f)}/share-links/${f.shareLinkId}`, expect: only(204, ['owner']) },
 ] satisfies Route[]);

@@ -143,6 +143,8 @@ function Versions({ slug, versions, pdfProblem }: { slug: string; versions: Vers
             <span className="ml-auto flex gap-3 text-sm">
               <a className="hover:underline" href={`/b/${slug}/v/${v.number}/guideline.pdf?size=a4`}>PDF A4</a>
               <a className="hover:underline" href={`/b/${slug}/v/${v.number}/guideline.pdf?size=letter`}>PDF Letter</a>
+              <a className="hover:underline" href={`/b/${slug}/v/${v.number}/presentation`}>Presentation</a>
+              <a className="hover:underline" href={`/b/${slug}/v/${v.number}/presentation.pdf`}>Slides PDF</a>
             </span>
             <p className="w-full text-sm">{v.note}</p>
           </li>
@@ -156,7 +158,7 @@ function ShareLinks({ brandId, versions }: { brandId: string; versions: Version[
   const queryClient = useQueryClient();
   const key = ['share-links', brandId];
   const links = useQuery({ queryKey: key, queryFn: () => api<{ shareLinks: ShareLink[] }>(`/api/brands/${brandId}/share-links`).then((r) => r.shareLinks) });
-  const [form, setForm] = useState({ label: '', expires: '', password: '', allowDownloads: false, version: '' });
+  const [form, setForm] = useState({ label: '', expires: '', password: '', allowDownloads: false, allowPresentation: false, version: '' });
   const [fresh, setFresh] = useState<ShareLink | null>(null);
   const create = useMutation({
     mutationFn: () =>
@@ -167,14 +169,19 @@ function ShareLinks({ brandId, versions }: { brandId: string; versions: Version[
           ...(form.expires ? { expiresAt: new Date(`${form.expires}T23:59:59`).toISOString() } : {}),
           ...(form.password ? { password: form.password } : {}),
           allowDownloads: form.allowDownloads,
+          allowPresentation: form.allowPresentation,
           ...(form.version ? { version: Number(form.version) } : {}),
         },
       }),
     onSuccess: (r) => {
       setFresh(r.shareLink);
-      setForm({ label: '', expires: '', password: '', allowDownloads: false, version: '' });
+      setForm({ label: '', expires: '', password: '', allowDownloads: false, allowPresentation: false, version: '' });
       return queryClient.invalidateQueries({ queryKey: key });
     },
+  });
+  const present = useMutation({
+    mutationFn: ({ id, allow }: { id: string; allow: boolean }) => api(`/api/brands/${brandId}/share-links/${id}`, { method: 'PATCH', body: { allowPresentation: allow } }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: key }),
   });
   const revoke = useMutation({
     mutationFn: (id: string) => api(`/api/brands/${brandId}/share-links/${id}`, { method: 'DELETE' }),
@@ -202,6 +209,8 @@ function ShareLinks({ brandId, versions }: { brandId: string; versions: Version[
           </select>
         </div>
         <label className="flex items-center gap-2 text-sm sm:col-span-2"><input type="checkbox" checked={form.allowDownloads} onChange={(e) => setForm({ ...form, allowDownloads: e.target.checked })} /> Allow downloads of approved assets</label>
+        <label className="flex items-center gap-2 text-sm sm:col-span-2"><input type="checkbox" checked={form.allowPresentation} onChange={(e) => setForm({ ...form, allowPresentation: e.target.checked })} /> May open the presentation (the identity in slides, and its PDF)</label>
+        {present.isError && <p role="alert" className="rounded-md bg-danger-wash px-3 py-2 text-sm text-danger sm:col-span-2">{present.error.message}</p>}
         {create.isError && <p role="alert" className="rounded-md bg-danger-wash px-3 py-2 text-sm text-danger sm:col-span-2">{create.error.message}</p>}
         <div className="sm:col-span-2"><button className="btn-primary" disabled={create.isPending || versions.length === 0}>{create.isPending ? 'Making…' : 'Make a link'}</button></div>
       </form>
@@ -224,11 +233,20 @@ function ShareLinks({ brandId, versions }: { brandId: string; versions: Version[
             <tbody>
               {links.data.map((l) => (
                 <tr key={l.id} className="border-t border-rule">
-                  <td className="py-2.5 pr-4 align-top">{l.label ?? 'Unnamed link'}<div className="text-xs text-ink-soft">{[l.hasPassword && 'password', l.allowDownloads && 'downloads', l.expiresAt && `until ${formatDate(l.expiresAt)}`].filter(Boolean).join(' · ')}</div></td>
+                  <td className="py-2.5 pr-4 align-top">{l.label ?? 'Unnamed link'}<div className="text-xs text-ink-soft">{[l.hasPassword && 'password', l.allowDownloads && 'downloads', l.allowPresentation && 'presentation', l.expiresAt && `until ${formatDate(l.expiresAt)}`].filter(Boolean).join(' · ')}</div></td>
                   <td className="pr-4 align-top py-2.5 whitespace-nowrap">{l.version ? `Version ${l.version}` : 'Current'}</td>
                   <td className="pr-4 align-top py-2.5">{l.lastUsedAt ? <><When value={l.lastUsedAt} as="dateTime" /> ({l.useCount}×)</> : 'Never'}</td>
                   <td className="pr-4 align-top py-2.5"><span className={l.state === 'active' ? 'font-semibold text-ok' : 'text-ink-soft'}>{l.state === 'active' ? 'Working' : l.state === 'expired' ? 'Expired' : 'Withdrawn'}</span></td>
-                  <td className="py-2 text-right align-top">{l.state === 'active' && <button type="button" className="btn-danger px-3 py-1" onClick={() => revoke.mutate(l.id)}>Withdraw</button>}</td>
+                  <td className="py-2 text-right align-top">
+                    {l.state === 'active' && (
+                      <span className="flex flex-wrap justify-end gap-2">
+                        <label className="flex items-center gap-1.5 whitespace-nowrap px-1 text-sm">
+                          <input type="checkbox" checked={l.allowPresentation} disabled={present.isPending} aria-label={`${l.label ?? 'Unnamed link'}: may open the presentation`} onChange={(e) => present.mutate({ id: l.id, allow: e.target.checked })} /> Presentation
+                        </label>
+                        <button type="button" className="btn-danger px-3 py-1" onClick={() => revoke.mutate(l.id)}>Withdraw</button>
+                      </span>
+                    )}
+                  </td>
                 </tr>
               ))}
             </tbody>

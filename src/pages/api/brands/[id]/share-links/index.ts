@@ -9,6 +9,7 @@ const createBody = z.strictObject({
   expiresAt: z.iso.datetime({ offset: true, error: 'Give the expiry as an ISO date and time, e.g. 2027-01-31T18:00:00Z.' }).optional(),
   password: z.string().min(6, 'A link password needs at least 6 characters.').max(200).optional(),
   allowDownloads: z.boolean().optional(),
+  allowPresentation: z.boolean().optional(),
   version: z.number().int().min(1).optional(),
 });
 
