@@ -18,6 +18,12 @@ export class GuidelineVersion extends Model<InferAttributes<GuidelineVersion>, I
   declare files: Record<string, VersionFile>;
   declare publishedById: string | null;
   declare publishedAt: CreationOptional<Date>;
+  /** building → ready (every file written, manifest set) or failed (buildError says why); see src/lib/publishing/build/contract.ts. */
+  declare state: CreationOptional<'building' | 'ready' | 'failed'>;
+  declare buildError: CreationOptional<string | null>;
+  declare buildSteps: CreationOptional<unknown[]>;
+  declare manifest: CreationOptional<unknown | null>;
+  declare builtAt: CreationOptional<Date | null>;
 }
 
 export class ShareLink extends Model<InferAttributes<ShareLink>, InferCreationAttributes<ShareLink>> {
@@ -67,6 +73,11 @@ export function initPublishingModels(sequelize: Sequelize): void {
       files: { type: DataTypes.JSONB, allowNull: false },
       publishedById: { type: DataTypes.TEXT, allowNull: true },
       publishedAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
+      state: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'building' },
+      buildError: { type: DataTypes.TEXT, allowNull: true },
+      buildSteps: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
+      manifest: { type: DataTypes.JSONB, allowNull: true },
+      builtAt: { type: DataTypes.DATE, allowNull: true },
     },
     { ...common, tableName: 'guideline_versions', timestamps: false },
   );

@@ -25,4 +25,4 @@ export function newKey(brandId: string, kind: string, extension: string): string
 /** A brand's folder name: its UUID, nothing that could climb out of the store. */
 export const SAFE_BRAND_ID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/;
 
-export const SAFE_KEY = /^[0-9a-f-]{36}\/[a-z-]+\/[0-9a-f-]{36}(\.[a-z0-9]{1,8})?$/;
+export const SAFE_KEY = /^[0-9a-f-]{36}\/(?:[a-z-]+\/[0-9a-f-]{36}|build\/[0-9a-f-]{36}\/[0-9a-f]{64})(\.[a-z0-9]{1,8})?$/;

@@ -1,0 +1,74 @@
+// What a built version is: the contract between the build job that writes it and the requests that serve it.
+// A version is rendered once, every file it will ever serve is written to storage under the version, and a
+// manifest maps each served path to its stored object. Nothing here touches the database or storage.
+
+/** Where a version stands: built by a job, then never changing. */
+export type VersionState = 'building' | 'ready' | 'failed';
+
+/** One step of a build as the publishing screen shows it. */
+export interface BuildStep {
+  /** Stable id, e.g. "copy-files", "pages", "print", "pdf-a4", "pdf-letter", "tokens", "manifest". */
+  id: string;
+  label: string;
+  state: 'waiting' | 'running' | 'done' | 'failed';
+  /** Files written so far by this step (optional, for the progress line). */
+  count?: number;
+  startedAt?: string;
+  finishedAt?: string;
+}
+
+/** One stored file of a built version. */
+export interface ManifestEntry {
+  /** Storage object key (never a machine path). */
+  key: string;
+  /** SHA-256 of the bytes, hex. */
+  hash: string;
+  size: number;
+  /** Content-Type to send. */
+  type: string;
+}
+
+/**
+ * Every file a version serves, by its path relative to the version (see the path helpers below). Written last,
+ * in the same UPDATE that turns the version `ready`, so a ready version never names a missing file.
+ */
+export interface Manifest {
+  format: 1;
+  versionId: string;
+  builtAt: string;
+  entries: Record<string, ManifestEntry>;
+}
+
+/** The audiences a published page differs by today. A share-link visitor is never an editor. */
+export interface PageAudience {
+  latest: boolean;
+  who: 'editor' | 'member' | 'link';
+  downloads: boolean;
+}
+
+export const AUDIENCES: readonly PageAudience[] = [true, false].flatMap((latest) =>
+  (['editor', 'member', 'link'] as const).flatMap((who) => [true, false].map((downloads) => ({ latest, who, downloads }))),
+);
+
+/** Manifest path of the guideline page for one audience, e.g. "page/latest-member-downloads.html". */
+export const pagePath = (a: PageAudience) => `page/${a.latest ? 'latest' : 'older'}-${a.who}-${a.downloads ? 'downloads' : 'no-downloads'}.html`;
+
+/**
+ * Manifest path of a file URL under the version ("/b/:slug/v/:n/<rest>"): the rest of the path plus its query
+ * with parameters sorted, so `files/x?w=960&aspect=3:2` and `files/x?aspect=3:2&w=960` are one entry.
+ */
+export function filePath(rest: string, search: URLSearchParams | string = ''): string {
+  const params = new URLSearchParams(search);
+  params.sort();
+  const query = params.toString();
+  return query ? `${rest}?${query}` : rest;
+}
+
+/** A strong ETag from a stored file's hash. */
+export const entryEtag = (entry: Pick<ManifestEntry, 'hash'>) => `"${entry.hash.slice(0, 32)}"`;
+
+/** Storage key of a built file: content-addressed inside the version, so a retried build rewrites the same keys. */
+export function builtKey(brandId: string, versionId: string, hash: string, extension: string): string {
+  const ext = extension.replace(/[^a-z0-9]/gi, '').toLowerCase().slice(0, 8);
+  return `${brandId}/build/${versionId}/${hash}${ext ? `.${ext}` : ''}`;
+}
