@@ -1,5 +1,7 @@
 // Files on local disk under FILES_DIR (default .data/files), outside public/.
-import { mkdir, readFile, rm, writeFile, rename } from 'node:fs/promises';
+import { createReadStream } from 'node:fs';
+import { mkdir, open, readFile, rm, writeFile, rename } from 'node:fs/promises';
+import type { Readable } from 'node:stream';
 import { dirname, join, resolve } from 'node:path';
 import { SAFE_BRAND_ID, SAFE_KEY, type FileStorage } from './storage';
 
@@ -33,6 +35,17 @@ export class LocalDiskStorage implements FileStorage {
       if ((err as NodeJS.ErrnoException).code === 'ENOENT') return null;
       throw err;
     }
+  }
+
+  async getStream(key: string): Promise<{ stream: Readable; size: number } | null> {
+    // Open first, so the size and the bytes come from the same file even if the key is rewritten meanwhile.
+    const handle = await open(this.path(key), 'r').catch((err: NodeJS.ErrnoException) => {
+      if (err.code === 'ENOENT') return null;
+      throw err;
+    });
+    if (!handle) return null;
+    const { size } = await handle.stat();
+    return { stream: createReadStream('', { fd: handle.fd, autoClose: true }), size };
   }
 
   async delete(key: string): Promise<void> {

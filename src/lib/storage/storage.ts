@@ -8,8 +8,10 @@ export interface StoredObject {
 export interface FileStorage {
   /** Store bytes under a key; overwrites. */
   put(key: string, bytes: Uint8Array, contentType: string): Promise<StoredObject>;
-  /** The bytes under a key, or null when there are none. */
+  /** The bytes under a key, or null when there are none. For small files; serve big ones with getStream. */
   get(key: string): Promise<Buffer | null>;
+  /** A stream of the bytes under a key and their size, or null when there are none: nothing is buffered whole. */
+  getStream(key: string): Promise<{ stream: import('node:stream').Readable; size: number } | null>;
   /** Remove a key; a missing key is not an error. */
   delete(key: string): Promise<void>;
   /** Remove every file kept for a brand (all its keys start with its id); none left is not an error. */

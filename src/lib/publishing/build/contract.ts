@@ -72,3 +72,13 @@ export function builtKey(brandId: string, versionId: string, hash: string, exten
   const ext = extension.replace(/[^a-z0-9]/gi, '').toLowerCase().slice(0, 8);
   return `${brandId}/build/${versionId}/${hash}${ext ? `.${ext}` : ''}`;
 }
+
+/** What every build step writes through: content-addressed objects under the version, collected into the manifest. */
+export interface BuildWriter {
+  /** Store bytes under a manifest path (see pagePath/filePath); writing the same path twice keeps the last. */
+  write(path: string, bytes: Uint8Array, type: string): Promise<ManifestEntry>;
+  /** Bytes this build already wrote under a path (a later step may read an earlier one's output), or null. */
+  read(path: string): Promise<Buffer | null>;
+  /** Manifest paths written so far. */
+  paths(): string[];
+}
