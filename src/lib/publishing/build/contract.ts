@@ -82,3 +82,22 @@ export interface BuildWriter {
   /** Manifest paths written so far. */
   paths(): string[];
 }
+
+/** What a step knows of the version it builds; it loads anything else it needs through src/lib. */
+export interface BuildContext {
+  versionId: string;
+  brandId: string;
+  /** The brand's slug when the build started: built pages link under /b/<slug>/v/<number>/ (a renamed slug redirects). */
+  slug: string;
+  number: number;
+  writer: BuildWriter;
+  /** Report the number of files this step has written so far (shown on the publishing screen). */
+  progress(count: number): Promise<void>;
+}
+
+/** One step of the build, run in order by the build job; a throw fails the build with the step named. */
+export interface BuildStepDefinition {
+  id: string;
+  label: string;
+  run(ctx: BuildContext): Promise<void>;
+}
