@@ -11,7 +11,7 @@ import {
 } from 'sequelize';
 import pg from 'pg';
 import { BRAND_ROLES, STUDIO_ROLES, type BrandRole, type StudioRole } from '@/lib/auth/roles';
-import type { Box, ColorRole, LogoVariant, LogoVariantSlot, TypefaceRole, TypeScaleSettings } from '@/lib/identity/types';
+import type { Box, ColorRole, LightParts, LogoVariant, LogoVariantSlot, TypefaceRole, TypeScaleSettings } from '@/lib/identity/types';
 
 /** A designer's own file for one variant slot of a logo. */
 export interface LogoVariantFile {
@@ -121,6 +121,8 @@ export class BrandLogo extends Model<InferAttributes<BrandLogo>, InferCreationAt
   declare minPrintMm: number | null;
   /** Files the designer supplied for one-colour or dark-ground versions, by slot; each wins over the computed one. */
   declare variantFiles: CreationOptional<Partial<Record<LogoVariantSlot, LogoVariantFile>>>;
+  /** How light parts print in one colour: holes (the default) or ink. */
+  declare lightParts: CreationOptional<LightParts>;
   declare position: number;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -253,6 +255,7 @@ export function initModels(sequelize: Sequelize): void {
       minScreenPx: { type: DataTypes.INTEGER, allowNull: true },
       minPrintMm: { type: DataTypes.DOUBLE, allowNull: true },
       variantFiles: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
+      lightParts: { type: DataTypes.STRING(8), allowNull: false, defaultValue: 'holes' },
       position: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
       ...timestamps,
     },

@@ -5,6 +5,7 @@
 import { createHash } from 'node:crypto';
 import sharp, { type Sharp } from 'sharp';
 import { encode as encodeIco } from 'sharp-ico';
+import type { LightParts } from '@/lib/identity/types';
 import { knockoutSvg } from '@/lib/logo/knockout';
 import { knockoutRaster, variantInk } from '@/lib/logo/recolour.server';
 import { logoPrintFile } from '@/lib/logo/print-files.server';
@@ -36,6 +37,8 @@ export type DrawnSource = Pick<RenditionSource, 'bytes' | 'format' | 'drawnBound
 export interface RenditionSpec extends RenditionParams {
   /** For a one-colour SVG shown on a known ground: shapes in that ground's colour are painted, not cut out. */
   paintOn?: string | null;
+  /** How the logo's light parts print in a one-colour variant (its own setting); holes when left out. */
+  lightParts?: LightParts;
 }
 
 export interface Rendition {
@@ -55,17 +58,17 @@ const svgMemo = new Map<string, { text: string; width: number; height: number }>
 /** The colour treatment of an SVG: the variant's ink painted in, vectors kept (knockout.ts). */
 function recolourSvg(text: string, spec: RenditionSpec): string {
   if (spec.variant === 'original') return text;
-  return knockoutSvg(text, { ink: variantInk(spec.variant, spec.color), paintOn: spec.paintOn ?? undefined });
+  return knockoutSvg(text, { ink: variantInk(spec.variant, spec.color), paintOn: spec.paintOn ?? undefined, lightParts: spec.lightParts });
 }
 
 /** The colour treatment of a raster: the variant's ink sorted into its pixels, as a PNG. */
 async function recolourRaster(bytes: Buffer, spec: RenditionSpec): Promise<Buffer> {
-  return spec.variant === 'original' ? bytes : knockoutRaster(bytes, variantInk(spec.variant, spec.color));
+  return spec.variant === 'original' ? bytes : knockoutRaster(bytes, variantInk(spec.variant, spec.color), undefined, spec.lightParts);
 }
 
 /** The SVG text with the variant painted in, plus its intrinsic size; memoised, as sanitising costs more than drawing small icons. */
 function svgFor(bytes: Buffer, params: RenditionSpec): { text: string; width: number; height: number } {
-  const memoKey = `${createHash('sha1').update(bytes).digest('hex')}|${params.variant}|${params.color ?? ''}|${params.paintOn ?? ''}`;
+  const memoKey = `${createHash('sha1').update(bytes).digest('hex')}|${params.variant}|${params.color ?? ''}|${params.paintOn ?? ''}|${params.lightParts ?? 'holes'}`;
   const known = svgMemo.get(memoKey);
   if (known) return known;
   const clean = toSanitizedSvg(bytes.toString('utf8'));

@@ -29,6 +29,7 @@ import type {
   IdentityColor,
   IdentityLogo,
   IdentityTypeface,
+  LightParts,
   LogoVariant,
   LogoVariantSlot,
   TypefaceRole,
@@ -215,8 +216,18 @@ export async function uploadLogo(
   }
 }
 
+/**
+ * Where a logo's file and its versions are; the light-parts setting rides along when it is not the default, so a
+ * change gives the one-colour versions new addresses and no screen keeps showing the old drawing.
+ */
+function oneColourUrls(base: string, lightParts: LightParts): IdentityLogo['files'] {
+  const also = lightParts === 'holes' ? '' : `&lightParts=${lightParts}`;
+  return { original: base, black: `${base}?variant=black${also}`, white: `${base}?variant=white${also}`, reversed: `${base}?variant=reversed${also}`, onDark: `${base}?variant=on-dark` };
+}
+
 /** A logo row with its clear space and minimum sizes computed. */
 export function logoView(row: BrandLogo): IdentityLogo {
+  const lightParts = row.lightParts ?? 'holes';
   const suggested = minimumSize({ logoWidthUnits: row.bounds.width, thinnestStrokeUnits: row.thinnestStroke });
   const base = `/api/brands/${row.brandId}/logos/${row.id}/file`;
   return {
@@ -238,8 +249,9 @@ export function logoView(row: BrandLogo): IdentityLogo {
       screenPx: row.minScreenPx ?? suggested.screenPx,
       printMm: row.minPrintMm ?? suggested.printMm,
     },
-    files: { original: base, black: `${base}?variant=black`, white: `${base}?variant=white`, reversed: `${base}?variant=reversed`, onDark: `${base}?variant=on-dark` },
+    files: oneColourUrls(base, lightParts),
     ownVariants: Object.keys(row.variantFiles ?? {}) as LogoVariantSlot[],
+    lightParts,
     position: row.position,
   };
 }
@@ -273,9 +285,16 @@ export type LogoFileVariant = 'original' | OneColourVariant | 'on-dark';
 
 /**
  * The logo's bytes, or one of its versions: the designer's own file for the slot when there is one, otherwise a
- * knockout computed from the drawing (oneColourLogo); 'on-dark' falls back to the original.
+ * knockout computed from the drawing (oneColourLogo) with its light parts as the logo's setting says (or as
+ * `lightParts` asks, to compare before choosing); 'on-dark' falls back to the original.
  */
-export async function logoFile(brand: Brand, logoId: string, variant: LogoFileVariant, ink?: string): Promise<{ body: Buffer; contentType: string; filename: string }> {
+export async function logoFile(
+  brand: Brand,
+  logoId: string,
+  variant: LogoFileVariant,
+  ink?: string,
+  lightParts?: LightParts,
+): Promise<{ body: Buffer; contentType: string; filename: string }> {
   const logo = await logoOf(brand, logoId);
   const own = variant === 'original' || variant === 'one-colour' ? undefined : logo.variantFiles?.[variant];
   const ownBytes = own ? await storage.get(own.key) : null;
@@ -287,7 +306,7 @@ export async function logoFile(brand: Brand, logoId: string, variant: LogoFileVa
   if (!bytes) throw new ApiError(404, 'not_found', 'The logo file is missing from storage.');
   if (variant === 'original' || variant === 'on-dark') return { body: bytes, contentType: logo.format === 'svg' ? 'image/svg+xml' : 'image/png', filename };
   const inkHex = variant === 'one-colour' ? hexOf(ink ?? '') : undefined;
-  const made = await oneColourLogo({ bytes, format: logo.format }, variant, { ink: inkHex });
+  const made = await oneColourLogo({ bytes, format: logo.format, lightParts: lightParts ?? logo.lightParts }, variant, { ink: inkHex });
   return { body: made.body, contentType: made.contentType, filename };
 }
 

@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { SCALE_RATIOS } from '@/lib/type/scale';
 import { SHIPPED_FONTS } from '@/lib/type/shipped-fonts';
 import { cssColorInput, displayName, fallbackFamily, noteText, singleLine, typefaceFamily } from '@/lib/safe/values';
-import { COLOR_ROLES, LOGO_VARIANTS, TYPEFACE_ROLES } from './types';
+import { COLOR_ROLES, LIGHT_PARTS, LOGO_VARIANTS, TYPEFACE_ROLES } from './types';
 
 const percent = z.number().min(0, 'CMYK values run from 0 to 100.').max(100, 'CMYK values run from 0 to 100.');
 export const cmykSchema = z.tuple([percent, percent, percent, percent], { error: 'Give CMYK as four numbers [c, m, y, k] from 0 to 100.' });
@@ -51,6 +51,7 @@ export const updateLogoBody = z
     thinnestStroke: z.number({ error: 'Type the stroke as a number.' }).positive('The thinnest stroke must be larger than 0.').max(1e5).optional(),
     minScreenPx: z.number({ error: SCREEN_MINIMUM }).int(SCREEN_MINIMUM).min(4, SCREEN_MINIMUM).max(4000, SCREEN_MINIMUM).nullable().optional(),
     minPrintMm: z.number({ error: PRINT_MINIMUM }).min(1, PRINT_MINIMUM).max(2000, PRINT_MINIMUM).nullable().optional(),
+    lightParts: z.enum(LIGHT_PARTS, { error: `Light parts print as one of: ${LIGHT_PARTS.join(', ')}.` }).optional(),
   })
   .refine((b) => Object.keys(b).length > 0, 'Send at least one field to change.');
 

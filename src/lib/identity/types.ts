@@ -35,6 +35,18 @@ export const LOGO_VARIANT_SLOT_LABELS: Record<LogoVariantSlot, string> = {
   'on-dark': 'Full colour for dark grounds',
 };
 
+/**
+ * How a logo's light parts (those under 3:1 against the ground it was drawn for, WCAG 2.2 SC 1.4.11) print in one
+ * colour: left out as holes, so the ground shows through (a light tree cut from a dark disc), or printed in the ink
+ * (a yellow lamp that would otherwise vanish). White and near-white parts stay holes either way. The designer decides.
+ */
+export const LIGHT_PARTS = ['holes', 'ink'] as const;
+export type LightParts = (typeof LIGHT_PARTS)[number];
+export const LIGHT_PARTS_LABELS: Record<LightParts, { label: string; hint: string }> = {
+  holes: { label: 'Cut out', hint: 'Light parts become holes and the ground shows through them.' },
+  ink: { label: 'Printed in the ink', hint: 'Light colours print in the ink like the rest; only white and near-white parts stay cut out.' },
+};
+
 export interface Box {
   x: number;
   y: number;
@@ -70,6 +82,8 @@ export interface IdentityLogo {
   files: { original: string; black: string; white: string; reversed: string; onDark?: string };
   /** Slots for which the designer uploaded a file of their own (the computed version is used for the rest). */
   ownVariants?: LogoVariantSlot[];
+  /** How its light parts print in one colour; versions published before the setting read as 'holes'. */
+  lightParts?: LightParts;
   position: number;
 }
 

@@ -8,10 +8,14 @@
 // function of IEC 61966-2-1); a paint reads as the ground when it contrasts less with the ground than with the
 // opposite extreme (black for a light ground, white for a dark one), i.e. the dividing luminance is √(1.05·0.05) − 0.05
 // ≈ 0.179, the point where a colour's WCAG contrast ratio against white and against black are equal.
+import { converter } from 'culori';
 import { parseColor } from '@/lib/color/parse';
 import { relativeLuminance } from '@/lib/color/contrast';
+import { deltaE2000 } from '@/lib/color/difference';
+import type { LightParts } from '@/lib/identity/types';
 import { LogoError } from './errors';
 import { toSanitizedSvg } from './sanitize';
+import { PART_DELTA_E } from './tones';
 
 /** The relative luminance at which WCAG contrast against white equals contrast against black: √(1.05 × 0.05) − 0.05. */
 export const GROUND_SPLIT_LUMINANCE = Math.sqrt(1.05 * 0.05) - 0.05;
@@ -52,6 +56,30 @@ export function paintRole(luminance: number, ground: DrawnGround): PaintRole {
   return contrast < KNOCKOUT_CONTRAST ? 'knockout' : 'ink';
 }
 
+const toLab = converter('lab65');
+const labOfHex = (hex: string): [number, number, number] => {
+  const lab = toLab(hex.slice(0, 7))!;
+  return [lab.l, lab.a, lab.b];
+};
+const GROUND_EXTREME = { light: labOfHex('#ffffff'), dark: labOfHex('#000000') } as const;
+
+/**
+ * True when a colour is the ground's own (white or near-white for a light ground, black or near-black for a dark one):
+ * closer to it than ΔE00 5, the distance under which the tone check counts two colours as one part (common practice).
+ */
+export function isGroundColour(hex: string, ground: DrawnGround): boolean {
+  return deltaE2000(labOfHex(hex), GROUND_EXTREME[ground]) < PART_DELTA_E;
+}
+
+/**
+ * The role of one colour under the designer's choice for light parts: as `paintRole`, except that with 'ink' a light
+ * part prints in the ink unless it is the ground's own colour (a white gap stays a gap).
+ */
+export function paintRoleFor(hex: string, ground: DrawnGround, lightParts: LightParts = 'holes'): PaintRole {
+  const role = paintRole(relativeLuminance([1, 3, 5].map((i) => parseInt(hex.slice(i, i + 2), 16)) as [number, number, number]), ground);
+  return role === 'knockout' && lightParts === 'ink' && !isGroundColour(hex, ground) ? 'ink' : role;
+}
+
 /** Every paint of an SVG passed through `paint`: attributes, inline styles and <style> sheets. */
 function repaintAll(svg: string, paint: (value: string) => string): string {
   const decls = (css: string) => css.replace(DECL, (_d, p: string, c: string, v: string) => `${p}${c}${paint(v)}`);
@@ -83,6 +111,26 @@ function gradientLuminance(body: string): number | undefined {
   return weight > 0 ? sum / weight : undefined;
 }
 
+/** The stop colours a gradient names itself ('#rrggbb'), for telling whether all of them are the ground's own. */
+function gradientStopHexes(body: string): string[] {
+  const found: string[] = [];
+  for (const stop of body.matchAll(/<stop\b([^>]*)>/gi)) {
+    const attrs = stop[1];
+    const style = /style\s*=\s*"([^"]*)"/i.exec(attrs)?.[1] ?? '';
+    const colour = /stop-color\s*:\s*([^;]+)/i.exec(style)?.[1] ?? /stop-color\s*=\s*"([^"]*)"/i.exec(attrs)?.[1] ?? 'black';
+    const parsed = parseColor(colour.trim());
+    if (parsed.ok) found.push(parsed.color.hex.slice(0, 7));
+  }
+  return found;
+}
+
+/** A gradient's one role: by its mean luminance, and with 'ink' for light parts, ink unless every stop is the ground's own colour. */
+function gradientRole(body: string, luminance: number, ground: DrawnGround, lightParts: LightParts): PaintRole {
+  const role = paintRole(luminance, ground);
+  if (role === 'ink' || lightParts === 'holes') return role;
+  return gradientStopHexes(body).every((hex) => isGroundColour(hex, ground)) ? 'knockout' : 'ink';
+}
+
 /** What the sorting found: how many paints are ink and how many knockouts, for the given ground. */
 export function paintCensus(svg: string, ground: DrawnGround): { ink: number; knockout: number } {
   const census = { ink: 0, knockout: 0 };
@@ -111,12 +159,12 @@ export function drawnGround(svg: string): DrawnGround {
 }
 
 /** The drawing with every paint turned into mask white (ink) or mask black (knockout), opacity kept. */
-export function maskPaints(svg: string, ground: DrawnGround): string {
+export function maskPaints(svg: string, ground: DrawnGround, lightParts: LightParts = 'holes'): string {
   // Gradients first: each one takes a single role from its mean luminance, marked with a token the next pass reads.
   const marked = svg.replace(GRADIENT, (whole, tag: string, attrs: string, body: string) => {
     const luminance = gradientLuminance(body);
     if (luminance === undefined) return whole;
-    const token = ROLE_TOKEN[paintRole(luminance, ground)];
+    const token = ROLE_TOKEN[gradientRole(body, luminance, ground, lightParts)];
     const stops = body
       .replace(/(stop-color\s*=\s*")[^"]*"/gi, `$1${token}"`)
       .replace(/(stop-color\s*:\s*)[^;"]+/gi, `$1${token}`)
@@ -132,8 +180,7 @@ export function maskPaints(svg: string, ground: DrawnGround): string {
     // Unreadable paint draws nothing in a browser; keep it so.
     if (!parsed.ok) return 'none';
     if (parsed.color.alpha === 0) return value;
-    const luminance = paintLuminance(v)!;
-    const base = paintRole(luminance, ground) === 'ink' ? MASK_INK : MASK_KNOCKOUT;
+    const base = paintRoleFor(parsed.color.hex, ground, lightParts) === 'ink' ? MASK_INK : MASK_KNOCKOUT;
     const alpha = parsed.color.alpha < 1 ? Math.round(parsed.color.alpha * 255).toString(16).padStart(2, '0') : '';
     return `${base}${alpha}`;
   });
@@ -147,6 +194,8 @@ export interface KnockoutOptions {
   ink: string;
   /** The ground the logo was drawn for; found from its paints when left out. */
   ground?: DrawnGround;
+  /** How light parts print (the logo's own setting): holes, the default, or ink. */
+  lightParts?: LightParts;
   /**
    * For print on a known solid ground: paint the knockout shapes in this colour instead of cutting them out. The look
    * is the same on that ground, and the file needs no mask, which PDF writers (Chromium's among them) turn into images.
@@ -155,7 +204,8 @@ export interface KnockoutOptions {
 }
 
 /**
- * The one-colour logo with knockouts: shapes painted in the ground's colour become holes, the rest the ink; fills,
+ * The one-colour logo with knockouts: shapes painted in the ground's colour become holes (light parts too, unless the
+ * designer chose to print them in ink), the rest the ink; fills,
  * strokes, gradients (by mean luminance), opacity, groups and <use> are kept, since the drawing itself is untouched.
  */
 export function knockoutSvg(svgText: string, options: KnockoutOptions): string {
@@ -175,7 +225,7 @@ export function knockoutSvg(svgText: string, options: KnockoutOptions): string {
   const hasFill = inherited.some((a) => /^fill\s*=/i.test(a));
   const hasColor = inherited.some((a) => /^color\s*=/i.test(a));
   const groupAttrs = [hasFill ? '' : ` fill="${defaultPaint}"`, hasColor ? '' : ` color="${defaultPaint}"`, ...inherited.map((a) => ` ${a}`)].join('');
-  const drawing = maskPaints(`<g${groupAttrs}>${inner}</g>`, ground);
+  const drawing = maskPaints(`<g${groupAttrs}>${inner}</g>`, ground, options.lightParts ?? 'holes');
   if (options.paintOn !== undefined) {
     const groundResult = parseColor(options.paintOn);
     if (!groundResult.ok) throw new LogoError('invalid_input', `The ground colour: ${groundResult.error.message}`);

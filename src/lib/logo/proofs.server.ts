@@ -3,6 +3,7 @@
 // Every drawing goes through the one rendition function; the grey is computed here on its pixels (tones.ts).
 import sharp from 'sharp';
 import { renderRendition, type RenditionSpec } from '@/lib/assets/render.server';
+import type { LightParts } from '@/lib/identity/types';
 import { escapeXml } from '@/lib/safe/escape';
 import { oneColourLogo, type VariantOverride } from './knockout.server';
 import { greyscalePixels, toneReport, type ToneReport } from './tones';
@@ -12,7 +13,8 @@ export const PROOF_SIZE = 640;
 /** Ground left around the logo on each side of a proof, as a share of PROOF_SIZE. */
 export const PROOF_MARGIN = 0.1;
 
-export type LogoSource = { bytes: Buffer; format: 'svg' | 'png' | 'webp' | 'jpeg'; canvas: { width: number; height: number } };
+/** A logo as the proofs draw it; `lightParts` is its own choice for light parts in one colour (holes when left out). */
+export type LogoSource = { bytes: Buffer; format: 'svg' | 'png' | 'webp' | 'jpeg'; canvas: { width: number; height: number }; lightParts?: LightParts };
 export type OneColourProof = 'black-on-white' | 'white-on-black';
 
 const PROOF_GROUND = { 'black-on-white': { variant: 'black', ground: '#ffffff' }, 'white-on-black': { variant: 'white', ground: '#000000' } } as const;

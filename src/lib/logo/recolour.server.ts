@@ -5,8 +5,9 @@ import sharp from 'sharp';
 import { MAX_IMAGE_PIXELS } from '@/lib/assets/kinds';
 import { parseColor } from '@/lib/color/parse';
 import { relativeLuminance } from '@/lib/color/contrast';
+import type { LightParts } from '@/lib/identity/types';
 import { LogoError } from './errors';
-import { GROUND_SPLIT_LUMINANCE, type DrawnGround } from './knockout';
+import { GROUND_SPLIT_LUMINANCE, isGroundColour, paintRole, type DrawnGround } from './knockout';
 
 /** The one-colour versions: black ink, white ink, reversed (white ink for coloured grounds) and a chosen ink. */
 export type OneColourVariant = 'black' | 'white' | 'reversed' | 'one-colour';
@@ -26,9 +27,10 @@ export function variantInk(variant: OneColourVariant, ink?: string | null): stri
 /**
  * A raster logo in one ink on a transparent ground: each pixel's coverage is its alpha times how far its colour lies
  * from the ground the logo was drawn for toward its darkest (or lightest) ink, so anti-aliased edges stay smooth and
- * shapes painted in the ground's colour become holes.
+ * shapes painted in the ground's colour become holes. With `lightParts: 'ink'` a light pixel that is not the ground's
+ * own colour (the same rule as the SVG knockout) is full ink instead.
  */
-export async function knockoutRaster(bytes: Buffer, ink: string, ground?: DrawnGround): Promise<Buffer> {
+export async function knockoutRaster(bytes: Buffer, ink: string, ground?: DrawnGround, lightParts: LightParts = 'holes'): Promise<Buffer> {
   const { data, info } = await sharp(bytes, { limitInputPixels: MAX_IMAGE_PIXELS }).ensureAlpha().toColourspace('srgb').raw().toBuffer({ resolveWithObject: true });
   const { width, height, channels } = info;
   const count = width * height;
@@ -54,11 +56,25 @@ export async function knockoutRaster(bytes: Buffer, ink: string, ground?: DrawnG
   const inkDepth = Math.max(inkward[Math.floor(opaque * 0.95)] ?? 1, 1 - SPLIT_ENCODED + 0.1);
   const out = Buffer.alloc(count * 4);
   const [r, g, b] = [1, 3, 5].map((i) => parseInt(ink.slice(i, i + 2), 16));
+  const drawnOn: DrawnGround = onDark ? 'dark' : 'light';
+  // Light parts printed in ink: memoised per colour, since a logo has few and ΔE00 is not cheap.
+  const inked = new Map<number, boolean>();
+  const printsAsInk = (at: number) => {
+    const key = (data[at] << 16) | (data[at + 1] << 8) | data[at + 2];
+    let yes = inked.get(key);
+    if (yes === undefined) {
+      const hex = `#${key.toString(16).padStart(6, '0')}`;
+      const rgb: [number, number, number] = [data[at], data[at + 1], data[at + 2]];
+      yes = paintRole(relativeLuminance(rgb), drawnOn) === 'knockout' && !isGroundColour(hex, drawnOn);
+      inked.set(key, yes);
+    }
+    return yes;
+  };
   for (let i = 0; i < count; i++) {
     const at = i * channels;
     const depth = (onDark ? luma[i] : 1 - luma[i]) / inkDepth;
     // Below 15 % of the way to the ink reads as ground, above 85 % as full ink, linear between (keeps anti-aliasing).
-    const coverage = Math.min(1, Math.max(0, (depth - 0.15) / 0.7));
+    const coverage = lightParts === 'ink' && printsAsInk(at) ? 1 : Math.min(1, Math.max(0, (depth - 0.15) / 0.7));
     out[i * 4] = r;
     out[i * 4 + 1] = g;
     out[i * 4 + 2] = b;

@@ -7,6 +7,7 @@ import { converter } from 'culori';
 import { relativeLuminance, WCAG_THRESHOLDS } from '@/lib/color/contrast';
 import { deltaE2000 } from '@/lib/color/difference';
 import { NEAR_DUPLICATE_DELTA_E } from '@/lib/color/palette';
+import type { LightParts } from '@/lib/identity/types';
 
 /** Under this WCAG contrast two touching parts are too close to tell apart in grey (WCAG 2.2 SC 1.4.11, 3:1). */
 export const TONE_CONTRAST = WCAG_THRESHOLDS.nonText;
@@ -235,7 +236,13 @@ export function toneReport(raster: Raster): ToneReport {
 /** What the proofs route answers for one logo: the analysis and where the three proof images and the sheet are. */
 export interface LogoProofs {
   tones: ToneReport;
+  /** How the logo's light parts print in one colour, as the proofs in `files` show them. */
+  lightParts: LightParts;
+  /** The logo's light colours that the choice decides ('#rrggbb'): empty when both choices print the same. */
+  lightColours: string[];
   files: { blackOnWhite: string; whiteOnBlack: string; greyscale: string; sheet: string };
+  /** The one-colour proofs drawn with the other choice, to compare before changing it. */
+  compare: { lightParts: LightParts; blackOnWhite: string; whiteOnBlack: string };
 }
 
 export const PROOF_KINDS = ['black-on-white', 'white-on-black', 'greyscale', 'sheet'] as const;

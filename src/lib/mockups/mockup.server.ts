@@ -124,7 +124,7 @@ export async function versionMockup(brand: Brand, version: GuidelineVersion, key
       const own = await copy(versionVariantFileId(logo.id, SLOT[file]));
       if (own) return own;
       if (file === 'onDark') return original;
-      return oneColourLogo({ bytes: original.body, format: original.contentType === 'image/svg+xml' ? 'svg' : 'png' }, 'white');
+      return oneColourLogo({ bytes: original.body, format: original.contentType === 'image/svg+xml' ? 'svg' : 'png', lightParts: logo.lightParts }, 'white');
     },
     font: (face) => copy(face.id),
     async photos(ids) {

@@ -52,8 +52,9 @@ export async function patternTile(identity: Identity, input: PatternSettingsInpu
   const { ground, ink } = picked.colours;
   const file = await (options.readMark ?? draftMark)(identity.brand.id, logo);
   if (!file) throw new AppError('pattern_logo_missing', 'The mark’s file is missing from storage.', { status: 422 });
-  // The one-colour knockout in the ink: shapes painted in the ground's colour become holes, so the ground shows through.
-  const knocked = await oneColourLogo({ bytes: file.bytes, format: file.format }, 'one-colour', { ink: ink.hex.slice(0, 7) });
+  // The one-colour knockout in the ink: shapes painted in the ground's colour become holes, so the ground shows through
+  // (light parts too, unless the logo's own setting prints them in the ink).
+  const knocked = await oneColourLogo({ bytes: file.bytes, format: file.format, lightParts: logo.lightParts }, 'one-colour', { ink: ink.hex.slice(0, 7) });
   const mark: TileMark = knocked.format === 'svg' ? { format: 'svg', svg: knocked.body.toString('utf8'), viewBox: logo.canvas } : { format: 'png', png: knocked.body };
   const layout = patternLayout(settings, logo.canvas.width / logo.canvas.height, options.repeat);
   const svg = tileSvg(layout, mark, { ground: ground.hex.slice(0, 7), opacity: settings.opacity });

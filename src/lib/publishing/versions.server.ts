@@ -11,7 +11,7 @@ import { documentRefs, withStoredAttrs } from '@/blocks';
 import type { GuidelineDoc } from '@/lib/guideline/document';
 import { loadIdentity } from '@/lib/identity/identity.server';
 import { log } from '@/lib/log.server';
-import type { Identity } from '@/lib/identity/types';
+import type { Identity, LightParts } from '@/lib/identity/types';
 import { notifyPublished } from '@/lib/notices/publish.server';
 import { isAssetRef } from '@/lib/safe/values';
 import { storage } from '@/lib/storage/index.server';
@@ -151,6 +151,21 @@ export async function findVersion(brandId: string, number: number | null, opts: 
 export async function versionSnapshot(version: GuidelineVersion): Promise<{ doc: GuidelineDoc; identity: Identity }> {
   const row = version.snapshot ? version : await GuidelineVersion.findByPk(version.id, { attributes: ['snapshot'] });
   return row!.snapshot as { doc: GuidelineDoc; identity: Identity };
+}
+
+/** Each recently asked version's logos and how their light parts print in one colour (a version never changes). */
+const lightPartsOf = new Map<string, Map<string, LightParts>>();
+
+/** How a version's logo prints its light parts in one colour: as the snapshot recorded, 'holes' for versions from before the setting. */
+export async function versionLogoLightParts(version: GuidelineVersion, logoId: string): Promise<LightParts> {
+  let logos = lightPartsOf.get(version.id);
+  if (!logos) {
+    const { identity } = await versionSnapshot(version);
+    logos = new Map(identity.logos.map((l) => [l.id, l.lightParts ?? 'holes']));
+    lightPartsOf.set(version.id, logos);
+    if (lightPartsOf.size > 100) lightPartsOf.delete(lightPartsOf.keys().next().value!);
+  }
+  return logos.get(logoId) ?? 'holes';
 }
 
 /** The newest version number of a brand, or null. */

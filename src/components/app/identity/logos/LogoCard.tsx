@@ -48,7 +48,7 @@ export function LogoCard({ brandId, logo, brandColor, colors, canEdit, onNotice 
           )}
         </div>
       </div>
-      <OneColourProofs brandId={brandId} logo={logo} colors={colors} />
+      <OneColourProofs brandId={brandId} logo={logo} colors={colors} canEdit={canEdit} onNotice={onNotice} />
     </li>
   );
 }

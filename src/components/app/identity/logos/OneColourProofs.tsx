@@ -2,10 +2,10 @@
 // inner shapes stay visible) and greyscale by relative luminance, with the touching colours that turn to the same grey.
 import { useId } from 'react';
 import { formatNumber, SITE_LOCALE } from '@/lib/format';
-import type { IdentityColor, IdentityLogo } from '@/lib/identity/types';
-import type { ToneCollapse, TonePart } from '@/lib/logo/tones';
-import { LoadState } from '../shared';
-import { useLogoProofs } from './logos.queries';
+import { LIGHT_PARTS, LIGHT_PARTS_LABELS, type IdentityColor, type IdentityLogo, type LightParts } from '@/lib/identity/types';
+import type { LogoProofs, ToneCollapse, TonePart } from '@/lib/logo/tones';
+import { LoadState, messageOf, type NoticeState } from '../shared';
+import { useLogoProofs, useUpdateLogo } from './logos.queries';
 
 const ratio = (n: number) => `${formatNumber(Math.floor(n * 100) / 100, SITE_LOCALE, 2)}:1`;
 
@@ -42,7 +42,59 @@ function Collapse({ pair, colors }: { pair: ToneCollapse; colors: IdentityColor[
   );
 }
 
-export function OneColourProofs({ brandId, logo, colors }: { brandId: string; logo: IdentityLogo; colors: IdentityColor[] }) {
+/**
+ * The designer's choice for the logo's light parts in one colour, with the other choice drawn small beside it, so it
+ * is made by looking. Readers see the choice, not the buttons.
+ */
+function LightPartsChoice({ brandId, logo, proofs, canEdit, onNotice }: { brandId: string; logo: IdentityLogo; proofs: LogoProofs; canEdit: boolean; onNotice: (n: NoticeState) => void }) {
+  const id = useId();
+  const update = useUpdateLogo(brandId, logo.id, {
+    onSuccess: (_r, { lightParts }) => onNotice({ kind: 'ok', text: `${logo.name}: light parts are now ${lightParts === 'ink' ? 'printed in the ink' : 'cut out'} in every one-colour version.` }),
+    onError: (e) => onNotice({ kind: 'error', text: messageOf(e, 'The choice could not be saved.') }),
+  });
+  const current = proofs.lightParts;
+  const light = proofs.lightColours;
+  return (
+    <fieldset className="rounded-lg bg-paper px-4 py-3" aria-describedby={`${id}-about`}>
+      <legend className="float-left w-full text-sm font-semibold">Light parts in one colour</legend>
+      <p id={`${id}-about`} className="clear-left pt-1 text-xs leading-relaxed text-ink-soft">
+        {light.length ? (
+          <>
+            {light.length === 1 ? 'One colour of this logo is' : `${light.length} colours of this logo are`} too light to stand out from white (under 3:1, WCAG 2.2 SC
+            1.4.11): {light.join(', ')}. In one colour they can be cut out or printed in the ink: your decision, used on the site, in the PDF, in patterns,
+            mock-ups and downloads.
+          </>
+        ) : (
+          'This logo has no light colours besides white, so both choices print the same; white parts always stay cut out.'
+        )}
+      </p>
+      <div className="mt-2 grid gap-2 sm:grid-cols-2">
+        {LIGHT_PARTS.map((choice: LightParts) => {
+          const preview = choice === current ? proofs.files.blackOnWhite : proofs.compare.blackOnWhite;
+          return (
+            <label key={choice} className={`flex items-center gap-3 rounded-md border px-3 py-2 text-sm ${choice === current ? 'border-plumb bg-white' : 'border-rule'}`}>
+              <input
+                type="radio"
+                name={`${id}-light`}
+                value={choice}
+                checked={choice === current}
+                disabled={!canEdit || update.isPending}
+                onChange={() => update.mutate({ lightParts: choice })}
+              />
+              <img src={preview} alt={`${logo.name} in black with light parts ${choice === 'ink' ? 'printed in the ink' : 'cut out'}`} className="h-12 w-16 shrink-0 rounded border border-rule bg-white object-contain" />
+              <span>
+                <span className="block font-semibold">{LIGHT_PARTS_LABELS[choice].label}</span>
+                <span className="block text-xs text-ink-soft">{LIGHT_PARTS_LABELS[choice].hint}</span>
+              </span>
+            </label>
+          );
+        })}
+      </div>
+    </fieldset>
+  );
+}
+
+export function OneColourProofs({ brandId, logo, colors, canEdit, onNotice }: { brandId: string; logo: IdentityLogo; colors: IdentityColor[]; canEdit: boolean; onNotice: (n: NoticeState) => void }) {
   const id = useId();
   const proofs = useLogoProofs(brandId, logo);
   return (
@@ -65,6 +117,7 @@ export function OneColourProofs({ brandId, logo, colors }: { brandId: string; lo
             <ProofTile src={proofs.data.files.whiteOnBlack} ground="#000000" label="White on black" alt={`${logo.name} in white on black`} />
             <ProofTile src={proofs.data.files.greyscale} ground="#ffffff" label="Greyscale" alt={`${logo.name} in greyscale`} />
           </div>
+          <LightPartsChoice brandId={brandId} logo={logo} proofs={proofs.data} canEdit={canEdit} onNotice={onNotice} />
           {proofs.data.tones.dependsOnColour ? (
             <div role="status" className="rounded-lg border border-warn/25 bg-warn-wash px-4 py-3 text-sm">
               <p className="font-semibold text-warn">This logo leans on colour</p>

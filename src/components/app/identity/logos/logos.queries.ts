@@ -43,10 +43,10 @@ export function useUploadOwnVersion(brandId: string, logoId: string, on: Reactio
 export const useDropOwnVersion = (brandId: string, logoId: string, on: Reactions<unknown, LogoVariantSlot>) =>
   useChange((slot: LogoVariantSlot) => api(`${logos(brandId)}/${logoId}/variants/${slot}`, { method: 'DELETE' }), useRefreshIdentity(brandId), on);
 
-/** The one-colour proofs of a logo; asked again when the designer's own one-colour files change. */
+/** The one-colour proofs of a logo; asked again when the designer's own one-colour files or the light-parts choice change. */
 export function useLogoProofs(brandId: string, logo: IdentityLogo) {
   return useQuery({
-    queryKey: ['logo-proofs', brandId, logo.id, [...(logo.ownVariants ?? [])].sort().join(',')],
+    queryKey: ['logo-proofs', brandId, logo.id, [...(logo.ownVariants ?? [])].sort().join(','), logo.lightParts ?? 'holes'],
     queryFn: () => api<{ proofs: LogoProofs }>(`${logos(brandId)}/${logo.id}/proofs`).then((r) => r.proofs),
   });
 }

@@ -4,7 +4,7 @@ import { log } from '@/lib/log.server';
 import { oneColourLogo, type OneColourVariant } from '@/lib/logo/knockout.server';
 import { versionPhotoRendition } from '@/lib/publishing/photo-renditions.server';
 import { siteAccess } from '@/lib/publishing/site-access.server';
-import { versionVariantFileId } from '@/lib/publishing/versions.server';
+import { versionLogoLightParts, versionVariantFileId } from '@/lib/publishing/versions.server';
 import { staticInstance } from '@/lib/type/font-instance.server';
 import { storage } from '@/lib/storage/index.server';
 
@@ -48,10 +48,12 @@ export const GET: APIRoute = async (context) => {
       // The print edition asks for a knockout painted on its known ground (?on=#rrggbb): vector all the way to the PDF.
       const on = context.url.searchParams.get('on');
       const paintOn = on && /^#[0-9a-f]{6}$/i.test(on) ? on : null;
-      const memoKey = `${file.key}|${variant}|${paintOn ?? ''}`;
+      // Light parts as holes or ink, as the logo said when the version was published.
+      const lightParts = await versionLogoLightParts(access.version, fileId);
+      const memoKey = `${file.key}|${variant}|${paintOn ?? ''}|${lightParts}`;
       let version = made.get(memoKey);
       if (!version) {
-        version = await oneColourLogo({ bytes: body, format: file.contentType === 'image/svg+xml' ? 'svg' : 'png' }, variant as OneColourVariant, { paintOn });
+        version = await oneColourLogo({ bytes: body, format: file.contentType === 'image/svg+xml' ? 'svg' : 'png', lightParts }, variant as OneColourVariant, { paintOn });
         made.set(memoKey, version);
         if (made.size > 100) made.delete(made.keys().next().value!);
       }
