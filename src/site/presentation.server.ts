@@ -1,13 +1,26 @@
-// The reveal presentation of a published version: who may open it, and the version's document and identity it is
-// drawn from (a version never changes, so both are read once per version and kept).
+// The reveal presentation of a published version: who may open it, and what it is drawn from: the version's document,
+// its identity, and the tone check of the logos it shows, read from the version's own copies of the logo files (a
+// version never changes, so all three are made once per version and kept).
 import type { APIContext } from 'astro';
 import type { GuidelineDoc } from '@/lib/guideline/document';
+import { markLogo, primaryLogo } from '@/lib/guideline/identity';
 import type { Identity } from '@/lib/identity/types';
+import { logoTones } from '@/lib/logo/proofs.server';
+import type { ToneReport } from '@/lib/logo/tones';
+import { log } from '@/lib/log.server';
 import { notSharedPage, siteAccess, type SiteAccess } from '@/lib/publishing/site-access.server';
 import { withVersionUrls } from '@/lib/publishing/snapshot-urls';
 import { versionSnapshot, type VersionRecord } from '@/lib/publishing/versions.server';
+import { storage } from '@/lib/storage/index.server';
 
-const cache = new Map<string, { doc: GuidelineDoc; identity: Identity }>();
+export interface PresentationMaterial {
+  doc: GuidelineDoc;
+  identity: Identity;
+  /** The tone check of each logo the slides show (primary and mark), by logo id. */
+  tones: Record<string, ToneReport>;
+}
+
+const cache = new Map<string, PresentationMaterial>();
 const MAX_CACHED = 100;
 
 /** The version a visitor may present at /b/:slug[/v/:n]/presentation, or the response to send instead. */
@@ -17,13 +30,35 @@ export async function presentationAccess(context: Pick<APIContext, 'locals' | 'u
   return access.canPresent ? access : notSharedPage();
 }
 
-/** The version's document and its identity with file addresses inside the version. */
-export async function presentationMaterial(version: VersionRecord, slug: string): Promise<{ doc: GuidelineDoc; identity: Identity }> {
+/** The tone check of the logos the presentation shows, from the version's own file copies; a logo without one is left out. */
+async function versionTones(version: VersionRecord, identity: Identity): Promise<Record<string, ToneReport>> {
+  const shown = [primaryLogo(identity), markLogo(identity)].filter((l, i, all) => !!l && all.findIndex((o) => o?.id === l.id) === i);
+  const tones: Record<string, ToneReport> = {};
+  for (const logo of shown) {
+    const copy = Object.hasOwn(version.files ?? {}, logo!.id) ? version.files[logo!.id] : undefined;
+    const bytes = copy ? await storage.get(copy.key) : null;
+    if (!bytes) continue;
+    try {
+      tones[logo!.id] = await logoTones({ bytes, format: logo!.format, canvas: logo!.canvas });
+    } catch (err) {
+      // A logo that cannot be drawn loses its slide, never the presentation.
+      log.warn({ versionId: version.id, logoId: logo!.id, problem: (err as Error).message }, 'presentation: no tone check');
+    }
+  }
+  return tones;
+}
+
+/** The version's document, its identity with file addresses inside the version, and the tone check of its logos. */
+export async function presentationMaterial(version: VersionRecord, slug: string): Promise<PresentationMaterial> {
   const key = `${version.id}:${slug}`;
   const hit = cache.get(key);
   if (hit) return hit;
   const snapshot = await versionSnapshot(version);
-  const material = { doc: snapshot.doc, identity: withVersionUrls(snapshot.identity, slug, version.number, version.files ?? {}) };
+  const material = {
+    doc: snapshot.doc,
+    identity: withVersionUrls(snapshot.identity, slug, version.number, version.files ?? {}),
+    tones: await versionTones(version, snapshot.identity),
+  };
   if (cache.size >= MAX_CACHED) cache.delete(cache.keys().next().value!);
   cache.set(key, material);
   return material;

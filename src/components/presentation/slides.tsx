@@ -5,11 +5,13 @@ import { renderToStaticMarkup } from 'react-dom/server';
 import { blockDefinition, storedAttrs } from '@/blocks/index';
 import { BlockRenderer } from '@/blocks/renderers';
 import { LogoImage, type RenderMode } from '@/components/guideline/parts';
-import { formatLongDate, SITE_LOCALE } from '@/lib/format';
+import { formatLongDate, formatNumber, SITE_LOCALE } from '@/lib/format';
 import type { GuidelineDoc } from '@/lib/guideline/document';
 import { fontStack, logosInOrder, markLogo, primaryLogo, typefaceForRole } from '@/lib/guideline/identity';
-import type { Identity, IdentityLogo } from '@/lib/identity/types';
-import { firstBlock, inkOn, paletteSwatches, revealPhotographs, slideGrounds, type RevealPhotograph } from '@/lib/presentation/material';
+import type { Identity, IdentityColor, IdentityLogo } from '@/lib/identity/types';
+import type { ToneCollapse, TonePart, ToneReport } from '@/lib/logo/tones';
+import { colourDependence, firstBlock, inkOn, paletteSwatches, revealPhotographs, SLIDE_PHOTO_ASPECT, slideGrounds, type LogoFinding, type RevealPhotograph } from '@/lib/presentation/material';
+import { safeAssetUrl } from '@/lib/guideline/links';
 import { versionPath } from '@/lib/publishing/snapshot-urls';
 
 export interface DeckContext {
@@ -20,6 +22,8 @@ export interface DeckContext {
   /** Where the guidelines are read online, e.g. "plumbline.example/b/larchmere". */
   siteAddress: string;
   mode: RenderMode;
+  /** The tone check of the logos shown (primary and mark), by logo id, from the version's own files; absent, no finding is shown. */
+  tones?: Record<string, ToneReport>;
 }
 
 export interface SlideDefinition<M> {
@@ -160,6 +164,82 @@ const oneColour = defineSlide<IdentityLogo[]>({
   ),
 });
 
+/** The WCAG 2.2 luminance weights as an SVG colour matrix row: applied in linear light it gives relative luminance. */
+const LUMA = '0.2126 0.7152 0.0722 0 0';
+
+/** A logo in grey by relative luminance (the same filter as the one-colour block). */
+function GreyLogo({ logo }: { logo: IdentityLogo }) {
+  const src = safeAssetUrl(logo.files.original);
+  if (!src) return null;
+  const { width: w, height: h } = logo.canvas;
+  const id = `deck-grey-${logo.id}`;
+  return (
+    <svg viewBox={`0 0 ${w} ${h}`} role="img" aria-label={`${logo.name} in grey`} className="s-finding-logo">
+      <defs>
+        <filter id={id} colorInterpolationFilters="linearRGB">
+          <feColorMatrix type="matrix" values={`${LUMA} ${LUMA} ${LUMA} 0 0 0 1 0`} />
+        </filter>
+      </defs>
+      <image href={src} width={w} height={h} filter={`url(#${id})`} />
+    </svg>
+  );
+}
+
+const ratioText = (n: number) => `${formatNumber(Math.floor(n * 100) / 100, SITE_LOCALE, 2)}:1`;
+/** A colour of the logo by its palette name when the brand has exactly that colour, else its hex. */
+const partName = (part: TonePart, colors: IdentityColor[]) => colors.find((c) => c.hex.toLowerCase() === part.hex.toLowerCase())?.name ?? part.hex.toUpperCase();
+
+function Pair({ pair, colors }: { pair: ToneCollapse; colors: IdentityColor[] }) {
+  return (
+    <li>
+      <span className="s-chips" aria-hidden="true">
+        <span style={{ background: pair.a.hex }} />
+        <span style={{ background: pair.b.hex }} />
+      </span>
+      <span>
+        <strong>{partName(pair.a, colors)}</strong> and <strong>{partName(pair.b, colors)}</strong> touch at <strong>{ratioText(pair.contrast)}</strong>: under the 3:1
+        asked of adjacent parts of a graphic.
+      </span>
+    </li>
+  );
+}
+
+const withoutColour = defineSlide<LogoFinding[]>({
+  key: 'without-colour',
+  title: 'Without colour',
+  // Only when a logo shown leans on colour: a logo that reads in grey needs no slide to say so.
+  material: (ctx) => {
+    const found = colourDependence(ctx.identity, ctx.tones ?? {});
+    return found.length ? found : null;
+  },
+  View: ({ material, ctx }) => (
+    <div className="s-frame s-finding" style={worn('#ffffff')}>
+      <Kicker>Without colour</Kicker>
+      <div className="s-finding-logos">
+        {material.map(({ logo }) => (
+          <figure key={logo.id}>
+            <div className="s-finding-pair">
+              <LogoStage logo={logo} on="#ffffff" size="medium" />
+              <GreyLogo logo={logo} />
+            </div>
+            <figcaption className="s-caption">{logo.name}: in colour, and in grey</figcaption>
+          </figure>
+        ))}
+      </div>
+      <div className="s-finding-words">
+        <p className="s-finding-lead">In grey, some parts of the logo run together.</p>
+        <ul className="s-finding-pairs">
+          {material.flatMap(({ logo, report }) => report.collapses.map((pair) => <Pair key={`${logo.id}-${pair.a.hex}-${pair.b.hex}`} pair={pair} colors={ctx.identity.colors} />))}
+        </ul>
+        <p className="s-finding-note">
+          Only the hue tells these parts apart, and a one-colour print, a photocopy or a reader who does not see that hue loses it. The 3:1 is WCAG 2.2’s
+          figure for graphics (SC 1.4.11), used here as guidance: logos are exempt from its contrast rules.
+        </p>
+      </div>
+    </div>
+  ),
+});
+
 const palette = defineSlide<ReturnType<typeof paletteSwatches>>({
   key: 'palette',
   title: 'Colour',
@@ -242,10 +322,23 @@ const photographs = defineSlide<RevealPhotograph[]>({
   View: ({ material, ctx }) => (
     <div className="s-frame s-photos-slide" style={worn(slideGrounds(ctx.identity).dark)}>
       <Kicker>Photography</Kicker>
-      <ul className={`s-photos s-photos-${material.length}`}>
+      <ul className={`s-photos s-photos-${material.length}`} style={{ '--photo-aspect': SLIDE_PHOTO_ASPECT[material.length].replace(':', ' / ') } as CSSProperties}>
         {material.map((p) => (
-          <li key={p.url}>
-            <img src={p.url} alt={p.alt} loading="eager" decoding="async" />
+          <li key={p.src}>
+            <figure>
+              <img
+                src={p.src}
+                srcSet={p.srcSet}
+                sizes={p.sizes}
+                width={p.width}
+                height={p.height}
+                alt={p.alt}
+                style={{ objectPosition: p.position }}
+                loading="eager"
+                decoding="async"
+              />
+              {p.caption ? <figcaption>{p.caption}</figcaption> : null}
+            </figure>
           </li>
         ))}
       </ul>
@@ -276,6 +369,7 @@ export const SLIDES: readonly SlideDefinition<unknown>[] = [
   logo,
   mark,
   oneColour,
+  withoutColour,
   palette,
   type,
   blockSlide('pattern', 'Pattern', 'pattern', 'Pattern'),
