@@ -4,7 +4,7 @@ import { readFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import type { Transaction } from 'sequelize';
 import { parseColor } from '@/lib/color';
-import type { ColorRole, LogoVariant, TypefaceRole } from '@/lib/identity/types';
+import type { ColorRole, LightParts, LogoVariant, TypefaceRole } from '@/lib/identity/types';
 import { sanitizeSvg } from '@/lib/logo';
 import { drawnBounds } from '@/lib/logo/bounds.server';
 import { thinnestStroke } from '@/lib/logo/stroke.server';
@@ -16,7 +16,7 @@ import { Brand, BrandColor, BrandLogo, BrandTypeface } from '@db/models';
 
 interface DemoIdentity {
   colors: { name: string; value: string; role: ColorRole; spot?: string }[];
-  logos: { file: string; name: string; variant: LogoVariant; unitLabel: string; unitOf: number }[];
+  logos: { file: string; name: string; variant: LogoVariant; unitLabel: string; unitOf: number; lightParts?: LightParts }[];
   typefaces: { key: string; role: TypefaceRole }[];
 }
 
@@ -46,7 +46,8 @@ export const DEMO_IDENTITIES: Record<string, DemoIdentity> = {
       { name: 'Paper', value: '#faf7f0', role: 'background' },
       { name: 'Slate', value: '#4b5563', role: 'text' },
     ],
-    logos: [{ file: 'pellow-mark.svg', name: 'Open book mark', variant: 'mark', unitLabel: 'the width of one page', unitOf: 0.25 }],
+    // The amber lamp is under 3:1 against white: cut out it would vanish in one colour, so the designer prints it in ink.
+    logos: [{ file: 'pellow-mark.svg', name: 'Open book mark', variant: 'mark', unitLabel: 'the width of one page', unitOf: 0.25, lightParts: 'ink' }],
     typefaces: [
       { key: 'bricolage-grotesque', role: 'heading' },
       { key: 'source-serif-4', role: 'body' },
@@ -90,6 +91,7 @@ export async function seedIdentity(brand: Brand, filesDir: string, t: Transactio
         thinnestStroke: Math.round((await thinnestStroke(bytes, clean.viewBox, true)) * 1000) / 1000,
         minScreenPx: null,
         minPrintMm: null,
+        lightParts: l.lightParts ?? 'holes',
         position,
       },
       { transaction: t },

@@ -103,6 +103,25 @@ describe('the presentation in a browser', () => {
     expect(await counter()).toBe(`1 / ${total}`);
   });
 
+  test('a real touch swipe (Chromium touch events through the DevTools protocol) turns the slide', async () => {
+    const touch = await browser.newContext({ viewport: { width: 1280, height: 720 }, hasTouch: true, isMobile: false, storageState: await context.storageState() });
+    const phone = await touch.newPage();
+    await phone.goto(`${baseUrl()}/b/${slug}/presentation`);
+    await phone.locator('html[data-deck-mode="on"]').waitFor();
+    const cdp = await touch.newCDPSession(phone);
+    const drag = async (from: number, to: number) => {
+      await cdp.send('Input.dispatchTouchEvent', { type: 'touchStart', touchPoints: [{ x: from, y: 360 }] });
+      for (let step = 1; step <= 5; step++) await cdp.send('Input.dispatchTouchEvent', { type: 'touchMove', touchPoints: [{ x: from + ((to - from) * step) / 5, y: 360 }] });
+      await cdp.send('Input.dispatchTouchEvent', { type: 'touchEnd', touchPoints: [] });
+    };
+    const at = () => phone.locator('[data-deck-count]').textContent();
+    await drag(1000, 300);
+    await expect.poll(at).toBe(`2 / ${total}`);
+    await drag(300, 1000);
+    await expect.poll(at).toBe(`1 / ${total}`);
+    await touch.close();
+  });
+
   test('reloading keeps the slide', async () => {
     await page.keyboard.press('ArrowRight');
     await page.keyboard.press('ArrowRight');
@@ -131,6 +150,35 @@ describe('the presentation in a browser', () => {
     await quiet.locator('html[data-deck-mode="on"]').waitFor();
     expect(await animation(quiet)).toBe('none');
     await still.close();
+  });
+
+  test('a share link without the presentation opens the guidelines but not the slides: a readable page says why', async () => {
+    const owner = await signIn(DEMO_PEOPLE[0].email);
+    const brandId = await publishedDemoBrand(owner);
+    const link = await owner.post(`/api/brands/${brandId}/share-links`, { label: 'Guidelines only' });
+    expect(link.status).toBe(201);
+    const guest = await browser.newContext({ viewport: { width: 1280, height: 720 } });
+    const visitor = await guest.newPage();
+    await visitor.goto(link.body.shareLink.url);
+    await visitor.waitForURL(new RegExp(`/b/${slug}$`));
+    const refused = await visitor.goto(`${baseUrl()}/b/${slug}/presentation`);
+    expect(refused?.status()).toBe(403);
+    await visitor.getByRole('heading', { name: 'The presentation is not part of this link' }).waitFor();
+    expect(await visitor.getByText('Ask the brand team for a link that includes the presentation.').isVisible()).toBe(true);
+    expect(await visitor.locator('section[data-slide]').count()).toBe(0);
+    expect(await seriousViolations(visitor)).toEqual([]);
+    await guest.close();
+  });
+
+  test('the photographs and the one-colour finding are slides of the deck when the version has them', async () => {
+    const shown = await page.locator('section[data-slide]').evaluateAll((all) => all.map((s) => s.getAttribute('data-slide')));
+    // The demo's logos lean on colour (the ember ring on the roast disc), found by the tone check.
+    expect(shown).toContain('without-colour');
+    expect(shown.indexOf('without-colour')).toBe(shown.indexOf('one-colour') + 1);
+    for (const img of await page.locator('section[data-slide="photographs"] img').all()) {
+      expect((await img.getAttribute('alt'))?.trim()).toBeTruthy();
+      expect(await img.getAttribute('srcset')).toMatch(/aspect=/);
+    }
   });
 
   test('no script error on the way', () => {

@@ -12,7 +12,12 @@ import type { Identity, IdentityColor, IdentityLogo } from '@/lib/identity/types
 import type { ToneCollapse, TonePart, ToneReport } from '@/lib/logo/tones';
 import { colourDependence, firstBlock, inkOn, paletteSwatches, revealPhotographs, SLIDE_PHOTO_ASPECT, slideGrounds, type LogoFinding, type RevealPhotograph } from '@/lib/presentation/material';
 import { safeAssetUrl } from '@/lib/guideline/links';
+import { composeMockup, type MockupLayout, type MockupSources } from '@/lib/mockups/compose';
+import { photoAddresses } from '@/lib/mockups/photos';
+import { pageSvg } from '@/lib/mockups/svg';
+import { mockupTemplate } from '@/lib/mockups/templates';
 import { versionPath } from '@/lib/publishing/snapshot-urls';
+import type { ApplicationsAttrs } from '@/blocks/applications/definition';
 
 export interface DeckContext {
   identity: Identity;
@@ -189,7 +194,7 @@ const ratioText = (n: number) => `${formatNumber(Math.floor(n * 100) / 100, SITE
 /** A colour of the logo by its palette name when the brand has exactly that colour, else its hex. */
 const partName = (part: TonePart, colors: IdentityColor[]) => colors.find((c) => c.hex.toLowerCase() === part.hex.toLowerCase())?.name ?? part.hex.toUpperCase();
 
-function Pair({ pair, colors }: { pair: ToneCollapse; colors: IdentityColor[] }) {
+function Pair({ pair, colors, logoName }: { pair: ToneCollapse; colors: IdentityColor[]; logoName: string | null }) {
   return (
     <li>
       <span className="s-chips" aria-hidden="true">
@@ -197,6 +202,7 @@ function Pair({ pair, colors }: { pair: ToneCollapse; colors: IdentityColor[] })
         <span style={{ background: pair.b.hex }} />
       </span>
       <span>
+        {logoName ? <span className="s-finding-of">{logoName}: </span> : null}
         <strong>{partName(pair.a, colors)}</strong> and <strong>{partName(pair.b, colors)}</strong> touch at <strong>{ratioText(pair.contrast)}</strong>: under the 3:1
         asked of adjacent parts of a graphic.
       </span>
@@ -229,7 +235,9 @@ const withoutColour = defineSlide<LogoFinding[]>({
       <div className="s-finding-words">
         <p className="s-finding-lead">In grey, some parts of the logo run together.</p>
         <ul className="s-finding-pairs">
-          {material.flatMap(({ logo, report }) => report.collapses.map((pair) => <Pair key={`${logo.id}-${pair.a.hex}-${pair.b.hex}`} pair={pair} colors={ctx.identity.colors} />))}
+          {material.flatMap(({ logo, report }) =>
+            report.collapses.map((pair) => <Pair key={`${logo.id}-${pair.a.hex}-${pair.b.hex}`} pair={pair} colors={ctx.identity.colors} logoName={material.length > 1 ? logo.name : null} />),
+          )}
         </ul>
         <p className="s-finding-note">
           Only the hue tells these parts apart, and a one-colour print, a photocopy or a reader who does not see that hue loses it. The 3:1 is WCAG 2.2’s
@@ -346,6 +354,77 @@ const photographs = defineSlide<RevealPhotograph[]>({
   ),
 });
 
+interface PieceInUse {
+  key: string;
+  name: string;
+  layout: MockupLayout;
+}
+
+/** The mock-ups the guidelines' applications block shows, composed from the version's identity (at most six). */
+function piecesInUse(ctx: DeckContext): PieceInUse[] | null {
+  const node = firstBlock(ctx.doc, 'applications');
+  const def = blockDefinition('applications');
+  if (!node || !def) return null;
+  const parsed = def.schema.safeParse(storedAttrs('applications', node.attrs));
+  if (!parsed.success) return null;
+  const attrs = parsed.data as ApplicationsAttrs;
+  const sources: MockupSources = { logo: (logo, file) => safeAssetUrl(logo.files[file] ?? logo.files.original), photos: photoAddresses(ctx.identity, attrs.photoIds) };
+  const pieces = attrs.templates.flatMap((key) => {
+    const template = mockupTemplate(key);
+    if (!template) return [];
+    try {
+      const composed = composeMockup(template, ctx.identity, sources, { logoId: attrs.logoId });
+      return composed.ok ? [{ key, name: template.name, layout: composed.layout }] : [];
+    } catch {
+      // A piece that cannot be drawn is left out here; the guidelines say why.
+      return [];
+    }
+  });
+  return pieces.length ? pieces.slice(0, 6) : null;
+}
+
+/** One piece, its pages side by side, as large as its cell allows (container units keep the proportions). */
+function Piece({ piece }: { piece: PieceInUse }) {
+  const { trim, pages } = piece.layout;
+  // Pages side by side with a gap of 4 % of one page's width between them.
+  const total = pages.length * trim.width + (pages.length - 1) * 0.04 * trim.width;
+  const ratio = total / trim.height;
+  const gap = `${((0.04 * trim.width) / total) * 100}%`;
+  return (
+    <li className="s-piece">
+      <div className="s-piece-stage">
+        <div className="s-piece-pages" style={{ '--piece-ratio': ratio.toFixed(4), gridTemplateColumns: `repeat(${pages.length}, minmax(0, 1fr))`, columnGap: gap } as CSSProperties}>
+          {pages.map((page) => (
+            <div
+              key={page.name}
+              className="s-piece-page"
+              // pageSvg escapes every value it writes; colours are parsed #rrggbb and addresses checked.
+              dangerouslySetInnerHTML={{ __html: pageSvg(piece.layout, page, { width: '100%', label: `${piece.name}, ${page.name}` }) }}
+            />
+          ))}
+        </div>
+      </div>
+      <p className="s-piece-name">{piece.name}</p>
+    </li>
+  );
+}
+
+const inUse = defineSlide<PieceInUse[]>({
+  key: 'in-use',
+  title: 'In use',
+  material: piecesInUse,
+  View: ({ material, ctx }) => (
+    <div className="s-frame s-in-use" style={worn(slideGrounds(ctx.identity).light)}>
+      <Kicker>In use</Kicker>
+      <ul className={`s-pieces s-pieces-${material.length}`}>
+        {material.map((piece) => (
+          <Piece key={piece.key} piece={piece} />
+        ))}
+      </ul>
+    </div>
+  ),
+});
+
 const closing = defineSlide<true>({
   key: 'closing',
   title: 'Closing',
@@ -374,8 +453,7 @@ export const SLIDES: readonly SlideDefinition<unknown>[] = [
   type,
   blockSlide('pattern', 'Pattern', 'pattern', 'Pattern'),
   photographs,
-  // The mock-ups block, once the guidelines have one.
-  blockSlide('in-use', 'In use', 'applications', 'In use'),
+  inUse,
   closing,
 ];
 

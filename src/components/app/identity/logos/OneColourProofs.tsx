@@ -46,14 +46,18 @@ function Collapse({ pair, colors }: { pair: ToneCollapse; colors: IdentityColor[
  * The designer's choice for the logo's light parts in one colour, with the other choice drawn small beside it, so it
  * is made by looking. Readers see the choice, not the buttons.
  */
-function LightPartsChoice({ brandId, logo, proofs, canEdit, onNotice }: { brandId: string; logo: IdentityLogo; proofs: LogoProofs; canEdit: boolean; onNotice: (n: NoticeState) => void }) {
+function LightPartsChoice({ brandId, logo, proofs, colors, canEdit, onNotice }: { brandId: string; logo: IdentityLogo; proofs: LogoProofs; colors: IdentityColor[]; canEdit: boolean; onNotice: (n: NoticeState) => void }) {
   const id = useId();
   const update = useUpdateLogo(brandId, logo.id, {
     onSuccess: (_r, { lightParts }) => onNotice({ kind: 'ok', text: `${logo.name}: light parts are now ${lightParts === 'ink' ? 'printed in the ink' : 'cut out'} in every one-colour version.` }),
     onError: (e) => onNotice({ kind: 'error', text: messageOf(e, 'The choice could not be saved.') }),
   });
-  const current = proofs.lightParts;
-  const light = proofs.lightColours;
+  // The choice being saved shows as made; the proofs follow once it is stored.
+  const current = (update.isPending ? update.variables?.lightParts : undefined) ?? proofs.lightParts;
+  const light = proofs.lightColours.map((hex) => {
+    const named = colors.find((c) => c.hex.toLowerCase() === hex.toLowerCase())?.name;
+    return named ? `${named} (${hex})` : hex;
+  });
   return (
     <fieldset className="rounded-lg bg-paper px-4 py-3" aria-describedby={`${id}-about`}>
       <legend className="float-left w-full text-sm font-semibold">Light parts in one colour</legend>
@@ -70,7 +74,7 @@ function LightPartsChoice({ brandId, logo, proofs, canEdit, onNotice }: { brandI
       </p>
       <div className="mt-2 grid gap-2 sm:grid-cols-2">
         {LIGHT_PARTS.map((choice: LightParts) => {
-          const preview = choice === current ? proofs.files.blackOnWhite : proofs.compare.blackOnWhite;
+          const preview = choice === proofs.lightParts ? proofs.files.blackOnWhite : proofs.compare.blackOnWhite;
           return (
             <label key={choice} className={`flex items-center gap-3 rounded-md border px-3 py-2 text-sm ${choice === current ? 'border-plumb bg-white' : 'border-rule'}`}>
               <input
@@ -117,7 +121,7 @@ export function OneColourProofs({ brandId, logo, colors, canEdit, onNotice }: { 
             <ProofTile src={proofs.data.files.whiteOnBlack} ground="#000000" label="White on black" alt={`${logo.name} in white on black`} />
             <ProofTile src={proofs.data.files.greyscale} ground="#ffffff" label="Greyscale" alt={`${logo.name} in greyscale`} />
           </div>
-          <LightPartsChoice brandId={brandId} logo={logo} proofs={proofs.data} canEdit={canEdit} onNotice={onNotice} />
+          <LightPartsChoice brandId={brandId} logo={logo} proofs={proofs.data} colors={colors} canEdit={canEdit} onNotice={onNotice} />
           {proofs.data.tones.dependsOnColour ? (
             <div role="status" className="rounded-lg border border-warn/25 bg-warn-wash px-4 py-3 text-sm">
               <p className="font-semibold text-warn">This logo leans on colour</p>
