@@ -84,6 +84,18 @@ describe('the slide registry', () => {
     expect(keys(context({ doc: unset }))).not.toContain('pattern');
   });
 
+  test('the In use slide draws the applications block’s pieces from the identity, each labelled, with no download links', () => {
+    const doc: GuidelineDoc = { type: 'doc', content: [{ type: 'applications', attrs: { id: 'app', templates: ['business-card', 'social-post'], logoId: null } }] };
+    const slide = deckSlides(context({ doc })).find((s) => s.key === 'in-use');
+    expect(slide).toBeDefined();
+    const html = renderToStaticMarkup(createElement('div', null, slide!.content));
+    // The business card has a front and a back (two pages); the social post one.
+    expect(html.match(/class="s-piece"/g)).toHaveLength(2);
+    expect(html.match(/<svg[^>]*role="img"/g)!.length).toBeGreaterThanOrEqual(3);
+    expect(html).not.toMatch(/download|bleed and crop/i);
+    expect(keys(context())).not.toContain('in-use');
+  });
+
   test('a new slide slots in by being listed; the registry decides nothing else', () => {
     const extra = { key: 'extra', title: 'Extra', material: () => 'x', View: () => null };
     expect(deckSlides(context(), [SLIDES[0], extra, SLIDES[SLIDES.length - 1]]).map((s) => s.key)).toEqual(['opening', 'extra', 'closing']);
