@@ -43,6 +43,13 @@ async function pdfOf(client: Client, path: string): Promise<Buffer> {
   throw new Error('the PDF was not ready within 2 minutes');
 }
 
+/** A draft with one section heading, so there is something to publish. */
+async function minimalDraft(client: Client, id: string): Promise<void> {
+  const { revision } = (await client.get(`/api/brands/${id}/guideline`)).body;
+  const doc = { type: 'doc', content: [{ type: 'sectionHeading', attrs: { id: 's0', title: 'Logo', eyebrow: '', intro: '' } }] };
+  expect((await client.request('PUT', `/api/brands/${id}/guideline`, { baseRevision: revision, doc })).status).toBe(200);
+}
+
 beforeAll(async () => {
   ({ client: owner } = await signUpFresh('reveal-finisher'));
   const brand = (await owner.post('/api/brands', { name: 'Lamp Lane Readers' })).body.brand;
@@ -104,6 +111,7 @@ describe('light parts in one colour, the designer’s setting', () => {
   });
 
   test('a published version keeps the setting it was published with', async () => {
+    await minimalDraft(owner, brandId);
     expect((await owner.post(api('/versions'), { note: 'Lamp in ink' })).status).toBe(201);
     expect((await owner.patch(api(`/logos/${logoId}`), { lightParts: 'holes' })).status).toBe(200);
     const published = await bytesOf(owner, `/b/${slug}/v/1/files/${logoId}?variant=black`);
@@ -116,15 +124,15 @@ describe('light parts in one colour, the designer’s setting', () => {
 
 describe('the presentation’s photographs', () => {
   /** A 3000 × 2000 picture with a bright square where the subject is: 75 % across, 50 % down. */
-  const cameraPhoto = () =>
-    sharp(Buffer.from(`<svg xmlns="http://www.w3.org/2000/svg" width="3000" height="2000"><rect width="3000" height="2000" fill="#4a3326"/><rect x="2150" y="900" width="200" height="200" fill="#ffe08a"/></svg>`))
+  const cameraPhoto = (n: number) =>
+    sharp(Buffer.from(`<svg xmlns="http://www.w3.org/2000/svg" width="3000" height="2000"><rect width="3000" height="2000" fill="#4a33${20 + n}"/><rect x="2150" y="900" width="200" height="200" fill="#ffe08a"/></svg>`))
       .jpeg({ quality: 80 })
       .toBuffer();
 
   test('cut to the slide around the focus, from the version’s own renditions, with the shelf’s alt text and caption', async () => {
     const ids: string[] = [];
     for (const n of [1, 2]) {
-      const up = await owner.upload(api('/assets'), `reading-${n}.jpg`, await cameraPhoto(), 'image/jpeg', { kind: 'photo' });
+      const up = await owner.upload(api('/assets'), `reading-${n}.jpg`, await cameraPhoto(n), 'image/jpeg', { kind: 'photo' });
       expect(up.status).toBe(201);
       const id = up.body.assets[0].id;
       const ok = await owner.patch(api(`/assets/${id}`), { state: 'approved', altText: `A lamp-lit reading table, ${n}.`, caption: `Evening reading, ${n}.`, focus: { x: 0.75, y: 0.5 } });
@@ -214,6 +222,7 @@ describe('the presentation PDF keeps the new slide', () => {
     const { client } = await signUpFresh('reveal-pdf');
     const brand = (await client.post('/api/brands', { name: 'Red Green Signals' })).body.brand;
     expect((await client.upload(`/api/brands/${brand.id}/logos`, 'signal.svg', RED_GREEN, 'image/svg+xml', { variant: 'primary' })).status).toBe(201);
+    await minimalDraft(client, brand.id);
     expect((await client.post(`/api/brands/${brand.id}/versions`, { note: 'Signals' })).status).toBe(201);
     const html: string = (await client.get(`/b/${brand.slug}/v/1/presentation`)).body;
     const slides = [...html.matchAll(/<section[^>]*data-slide="([a-z-]+)"/g)].map((m) => m[1]);

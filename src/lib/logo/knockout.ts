@@ -205,8 +205,8 @@ export interface KnockoutOptions {
 
 /**
  * The one-colour logo with knockouts: shapes painted in the ground's colour become holes (light parts too, unless the
- * designer chose to print them in ink), the rest the ink; fills,
- * strokes, gradients (by mean luminance), opacity, groups and <use> are kept, since the drawing itself is untouched.
+ * designer chose to print them in ink), the rest the ink; fills, strokes, gradients (by mean luminance), opacity,
+ * groups and <use> are kept, since the drawing itself is untouched.
  */
 export function knockoutSvg(svgText: string, options: KnockoutOptions): string {
   const inkResult = parseColor(options.ink ?? '');
