@@ -9,8 +9,9 @@ import sharp from 'sharp';
 import { afterAll, beforeAll, expect, test } from 'vitest';
 import { Render } from '@/blocks/oneColourProofs/Render';
 import type { Identity } from '@/lib/identity/types';
-import { baseUrl, signUpFresh } from '../support/client';
-import { launchOptions, seriousViolations } from '../support/browser';
+import { DEMO_BRANDS, DEMO_PEOPLE } from '@db/seeders/demo';
+import { baseUrl, signIn, signUpFresh } from '../support/client';
+import { launchOptions, publishedDemoBrand, seriousViolations } from '../support/browser';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -116,4 +117,30 @@ test('on the proofs the designer chooses how light parts print in one colour, by
   expect(logo.lightParts).toBe('ink');
   expect(await seriousViolations(page)).toEqual([]);
   expect(errors).toEqual([]);
+});
+
+test('the published demo shows each logo in one colour and in grey through the block, from the version’s own files', async () => {
+  const owner = await signIn(DEMO_PEOPLE[0].email);
+  await publishedDemoBrand(owner);
+  const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+  const signedIn = await context.request.post(`${baseUrl()}/api/auth/sign-in/email`, { data: { email: DEMO_PEOPLE[0].email, password: 'plumbline-demo' }, headers: { origin: baseUrl() } });
+  expect(signedIn.ok()).toBe(true);
+  const page = await context.newPage();
+  const errors: string[] = [];
+  page.on('pageerror', (e) => errors.push(String(e)));
+  await page.goto(`${baseUrl()}/b/${DEMO_BRANDS[0].slug}`);
+  const figures = page.locator('figure[data-logo-id]:has([data-proof])');
+  await figures.first().waitFor();
+  expect(await figures.count()).toBeGreaterThanOrEqual(2);
+  for (const figure of await figures.all()) {
+    await figure.scrollIntoViewIfNeeded();
+    for (const proof of ['black', 'white']) {
+      const img = figure.locator(`[data-proof="${proof}"] img`);
+      expect(await img.getAttribute('src')).toMatch(new RegExp(`/b/${DEMO_BRANDS[0].slug}/v/\\d+/files/[^?]+\\?variant=${proof}`));
+      await expect.poll(() => img.evaluate((el) => (el as HTMLImageElement).naturalWidth), { timeout: 20_000 }).toBeGreaterThan(0);
+    }
+    expect(await figure.locator('[data-proof="grey"] svg image').count()).toBe(1);
+  }
+  expect(errors).toEqual([]);
+  await context.close();
 });
