@@ -3,11 +3,14 @@
 import type { APIContext, MiddlewareNext } from 'astro';
 import { defineMiddleware } from 'astro:middleware';
 import { auth } from './lib/auth/auth.server';
+import { startChangeNotices } from './lib/live/notices.server';
 import { log, requestIdFrom, serveLogged } from './lib/log.server';
 import { shareGrants } from './lib/publishing/grant-cache';
 import { linkForToken, linkState, SHARE_COOKIE, tokenFromCookie } from './lib/publishing/share-links.server';
 
 // No memory of sessions here: a signed-out or revoked session is refused on the very next request, in every process.
+// The share grants are kept by change notices, which this process starts listening for now.
+startChangeNotices();
 const sessionKey = (cookie: string) => /session_token=([^;]+)/.exec(cookie)?.[1] ?? null;
 
 export const onRequest = defineMiddleware((context, next) => {
@@ -35,13 +38,14 @@ async function resolveCaller(context: APIContext, next: MiddlewareNext): Promise
   }
   const token = tokenFromCookie(context.cookies.get(SHARE_COOKIE)?.value);
   if (token) {
-    let grant = shareGrants.get(token);
-    if (grant === undefined) {
+    const kept = await shareGrants.remember(token, async () => {
       const link = await linkForToken(token);
-      grant = link && linkState(link) === 'active' ? { brandId: link.brandId, linkId: link.id, allowDownloads: link.allowDownloads, allowPresentation: link.allowPresentation, version: link.versionNumber } : null;
-      shareGrants.set(token, grant);
-    }
-    context.locals.shareGrant = grant;
+      if (!link || linkState(link) !== 'active') return { grant: null, expiresAt: null };
+      const grant = { brandId: link.brandId, linkId: link.id, allowDownloads: link.allowDownloads, allowPresentation: link.allowPresentation, version: link.versionNumber };
+      return { grant, expiresAt: link.expiresAt?.getTime() ?? null };
+    });
+    // No notice marks the moment a link expires: the kept grant carries its expiry.
+    context.locals.shareGrant = kept.expiresAt !== null && kept.expiresAt <= Date.now() ? null : kept.grant;
   }
   return next();
 }
