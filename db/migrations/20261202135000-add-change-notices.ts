@@ -10,8 +10,11 @@ const WATCHED = [
   { table: 'brand_members', kind: 'member', events: 'INSERT OR UPDATE OR DELETE' },
   { table: 'brands', kind: 'brand', events: 'INSERT OR UPDATE OR DELETE' },
   { table: 'guideline_versions', kind: 'version', events: 'INSERT OR DELETE' },
-  // better-auth's own table: a role needs an account with a proven address.
-  { table: 'user', kind: 'user', events: 'DELETE' },
+  // better-auth's own tables: a role needs an account with a proven address, and sessions are kept in memory too;
+  // signing out, revoking sessions, changing the password with "sign out elsewhere" and deleting an account all
+  // delete session rows (an account's go with it).
+  { table: 'user', kind: 'user', events: 'UPDATE OR DELETE' },
+  { table: 'session', kind: 'session', events: 'DELETE' },
 ] as const;
 
 export async function up({ context: qi }: MigrationParams<QueryInterface>): Promise<void> {
@@ -29,15 +32,11 @@ export async function up({ context: qi }: MigrationParams<QueryInterface>): Prom
   // A version turning ready (or failed) changes what "latest" means; its build progress does not.
   await run(`CREATE TRIGGER plumbline_change_notice_state AFTER UPDATE OF state ON guideline_versions FOR EACH ROW
     WHEN (OLD.state IS DISTINCT FROM NEW.state) EXECUTE FUNCTION plumbline_change_notice('version')`);
-  // Proving an address gives its account the roles it was invited to.
-  await run(`CREATE TRIGGER plumbline_change_notice_verified AFTER UPDATE OF "emailVerified" ON "user" FOR EACH ROW
-    WHEN (OLD."emailVerified" IS DISTINCT FROM NEW."emailVerified") EXECUTE FUNCTION plumbline_change_notice('user')`);
 }
 
 export async function down({ context: qi }: MigrationParams<QueryInterface>): Promise<void> {
   const run = (sql: string) => qi.sequelize.query(sql);
   await run('DROP TRIGGER IF EXISTS plumbline_change_notice_state ON guideline_versions');
-  await run('DROP TRIGGER IF EXISTS plumbline_change_notice_verified ON "user"');
   for (const { table } of WATCHED) await run(`DROP TRIGGER IF EXISTS plumbline_change_notice ON "${table}"`);
   await run('DROP FUNCTION IF EXISTS plumbline_change_notice()');
 }

@@ -6,8 +6,8 @@ import type { ChildProcess } from 'node:child_process';
 import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
 import { freePort } from '../../scripts/lib/postgres';
 import { startServer } from '../../scripts/lib/prepare';
-import { Client, baseUrl, joinBrand, signUpFresh } from '../support/client';
-import { closeDb } from '../support/db';
+import { Client, baseUrl, joinBrand, signUpFresh, signUpUnverified, verifyByMail } from '../support/client';
+import { closeDb, sql } from '../support/db';
 import { startTcpProxy, type TcpProxy } from '../support/tcp-proxy';
 
 const SECOND = 1000;
@@ -108,6 +108,37 @@ describe('a change made through one process, seen by another within a second', (
     // The old cookie, replayed on the other process (the jar itself was emptied by the sign-out).
     const replay = () => fetch(`${other}/api/brands`, { headers: { cookie } });
     const took = await msUntil(async () => (await replay()).status === 401, 5 * SECOND);
+    expect(took).toBeLessThan(SECOND);
+  });
+
+  test('sessions ended elsewhere by a password change', async () => {
+    const person = await signUpFresh('live-password');
+    const second = new Client();
+    expect((await second.post('/api/auth/sign-in/email', { email: person.email, password: 'correct-horse-battery' })).status).toBe(200);
+    const elsewhere = second.via(other);
+    for (let i = 0; i < 2; i++) expect((await elsewhere.get('/api/brands')).status).toBe(200);
+    const changed = await person.client.post('/api/auth/change-password', { currentPassword: 'correct-horse-battery', newPassword: 'another-horse-battery', revokeOtherSessions: true });
+    expect(changed.status).toBe(200);
+    const took = await msUntil(async () => (await elsewhere.get('/api/brands')).status === 401, 5 * SECOND);
+    expect(took).toBeLessThan(SECOND);
+  });
+
+  test('a deleted account', async () => {
+    const person = await signUpFresh('live-deleted');
+    const elsewhere = person.client.via(other);
+    for (let i = 0; i < 2; i++) expect((await elsewhere.get('/api/brands')).status).toBe(200);
+    // No screen deletes accounts yet; an operator removing the row is the same change to the table.
+    await sql('DELETE FROM "user" WHERE id = $1', [person.id]);
+    const took = await msUntil(async () => (await elsewhere.get('/api/brands')).status === 401, 5 * SECOND);
+    expect(took).toBeLessThan(SECOND);
+  });
+
+  test('an address proven through another process', async () => {
+    const person = await signUpUnverified(`live-proven-${Date.now()}@test.example`);
+    const elsewhere = person.client.via(other);
+    for (let i = 0; i < 2; i++) expect((await elsewhere.get('/api/brands')).status).toBe(403);
+    await verifyByMail(person.client, person.email);
+    const took = await msUntil(async () => (await elsewhere.get('/api/brands')).status === 200, 5 * SECOND);
     expect(took).toBeLessThan(SECOND);
   });
 

@@ -113,8 +113,26 @@ describe('notice-kept memory', () => {
   test('holds at most its number of entries, the oldest going first', async () => {
     const { board, clock } = boardAt();
     board.resume(clock.now);
-    const memory = board.memory<number>('small', ['brand'], 2);
+    const memory = board.memory<number>('small', ['brand'], { maxEntries: 2 });
     for (const k of ['a', 'b', 'c']) await memory.remember(k, async () => k.charCodeAt(0));
     expect([memory.get('a'), memory.get('b'), memory.get('c')]).toEqual([undefined, 98, 99]);
+  });
+
+  test('drops only what a notice concerns when told how, and keeps only what is worth keeping', async () => {
+    const { board, clock } = boardAt();
+    board.resume(clock.now);
+    const sessions = board.memory<{ sessionId: string; userId: string } | null>('sessions', ['session', 'user'], {
+      concerns: (notice, kept) => !kept || (notice.kind === 'session' ? kept.sessionId === notice.id : kept.userId === notice.id),
+      keepIf: (kept) => kept !== null,
+    });
+    await sessions.remember('cookie-a', async () => ({ sessionId: 's1', userId: 'u1' }));
+    await sessions.remember('cookie-b', async () => ({ sessionId: 's2', userId: 'u2' }));
+    await sessions.remember('forged', async () => null);
+    expect(sessions.size).toBe(2);
+    board.hear({ kind: 'session', id: 's1' });
+    expect(sessions.get('cookie-a')).toBeUndefined();
+    expect(sessions.get('cookie-b')).toEqual({ sessionId: 's2', userId: 'u2' });
+    board.hear({ kind: 'user', id: 'u2' });
+    expect(sessions.size).toBe(0);
   });
 });

@@ -5,7 +5,7 @@ import { z } from 'zod';
 /** The one channel; the triggers of db/migrations/20261202135000-add-change-notices.ts send on it. */
 export const CHANGE_CHANNEL = 'plumbline_changes';
 
-export const NOTICE_KINDS = ['link', 'member', 'brand', 'version', 'user'] as const;
+export const NOTICE_KINDS = ['link', 'member', 'brand', 'version', 'user', 'session'] as const;
 export type NoticeKind = (typeof NOTICE_KINDS)[number];
 
 /** A payload as received: hostile until this accepted it (anyone with database access may NOTIFY). */
@@ -69,33 +69,45 @@ export class NoticeBoard {
   }
 
   hear(notice: ChangeNotice): void {
-    for (const memory of this.memories) if (memory.kinds.includes(notice.kind)) memory.forget();
+    for (const memory of this.memories) if (memory.kinds.includes(notice.kind)) memory.heard(notice);
   }
 
   forgetAll(): void {
     for (const memory of this.memories) memory.forget();
   }
 
-  /** A memory of lookups that any notice of `kinds` makes stale. */
-  memory<V>(name: string, kinds: readonly NoticeKind[], maxEntries = 10_000): NoticeKeptMemory<V> {
-    const memory = new NoticeKeptMemory<V>(name, kinds, this, maxEntries);
+  /** A memory of lookups that a notice of `kinds` makes stale: all of them, or those `options.concerns` names. */
+  memory<V>(name: string, kinds: readonly NoticeKind[], options: MemoryOptions<V> = {}): NoticeKeptMemory<V> {
+    const memory = new NoticeKeptMemory<V>(name, kinds, this, options);
     this.memories.add(memory as NoticeKeptMemory<unknown>);
     return memory;
   }
 }
 
+export interface MemoryOptions<V> {
+  /** At most this many entries, the oldest going first (default 10 000). */
+  maxEntries?: number;
+  /** Which kept values a notice makes stale; without it, every one. */
+  concerns?: (notice: ChangeNotice, value: V) => boolean;
+  /** Whether a looked-up value is worth keeping (e.g. not an unknown token); without it, every one. */
+  keepIf?: (value: V) => boolean;
+}
+
 /** Lookups kept until a notice of one of its kinds says they may have changed; never trusted without notices. */
 export class NoticeKeptMemory<V> {
   private readonly entries = new Map<string, V>();
-  /** Counts forgets, so a lookup that was running while a notice arrived is not kept. */
+  /** Counts notices heard, so a lookup that was running while one arrived is not kept. */
   private generation = 0;
+  private readonly maxEntries: number;
 
   constructor(
     readonly name: string,
     readonly kinds: readonly NoticeKind[],
     private readonly board: NoticeBoard,
-    private readonly maxEntries: number,
-  ) {}
+    private readonly options: MemoryOptions<V>,
+  ) {
+    this.maxEntries = options.maxEntries ?? 10_000;
+  }
 
   get size(): number {
     return this.entries.size;
@@ -112,11 +124,25 @@ export class NoticeKeptMemory<V> {
     if (hit !== undefined) return hit;
     const since = this.generation;
     const value = await lookup();
-    if (since === this.generation && this.board.current) {
+    if (since === this.generation && this.board.current && (this.options.keepIf?.(value) ?? true)) {
       if (this.entries.size >= this.maxEntries) this.entries.delete(this.entries.keys().next().value!);
       this.entries.set(key, value);
     }
     return value;
+  }
+
+  /** A notice of one of its kinds: drop what it concerns. */
+  heard(notice: ChangeNotice): void {
+    this.generation++;
+    const concerns = this.options.concerns;
+    if (!concerns) return this.entries.clear();
+    for (const [key, value] of this.entries) if (concerns(notice, value)) this.entries.delete(key);
+  }
+
+  /** Drop one entry (e.g. a session this process just ended). */
+  drop(key: string): void {
+    this.generation++;
+    this.entries.delete(key);
   }
 
   forget(): void {
