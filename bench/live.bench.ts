@@ -1,12 +1,14 @@
-// What reading the session from the database on every request costs (sign-out is then honoured at once in every
-// process), measured in one run against the same requests without a session:
-// - the published page read by a member (a session lookup per request) vs through a share link (none);
+// What a signed-in request pays for its session, measured in one run against the same requests without one:
+// - the published page read by a member (session, role, brand and version from notice-kept memory) vs through a
+//   share link (no session);
 // - GET /api/health with the member's session cookie vs without.
-// Both pages come from the same notice-kept memory of brand, role and version, so the difference is the session.
+// Sessions are kept in memory by change notices (src/lib/auth/sessions.server.ts). Reading the session table on
+// every request instead (the state before) measured 343 vs 1 398 req/s on the page here: a ratio of 0.24.
 import autocannon from 'autocannon';
 import { benchServer, call } from './support/server';
 
 async function load(url: string, headers: Record<string, string>) {
+  await autocannon({ url, connections: 50, duration: 2, headers }); // warm up this path first
   const result = await autocannon({ url, connections: 50, duration: 6, headers });
   return { rps: result.requests.average, p99: result.latency.p99, errors: result.errors + result.non2xx };
 }
@@ -27,10 +29,9 @@ export default async function liveBench(): Promise<void> {
   const shareCookie = opened.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
 
   const page = `${server.baseUrl}/b/${brand.slug}`;
-  await load(page, { cookie }); // warm up
   const member = await load(page, { cookie });
   const visitor = await load(page, { cookie: shareCookie });
-  console.log(line('published page, member (session read per request)', member));
+  console.log(line('published page, member (session from memory)', member));
   console.log(line('published page, share link (no session)', visitor));
   console.log(`ratio member / share link: ${(member.rps / visitor.rps).toFixed(2)}`);
 
