@@ -1,10 +1,10 @@
 // What GET /api/health answers: this process, its store, and whether the database answers.
-import { hostname } from 'node:os';
 import { sequelize } from '@/lib/db.server';
 import { ApiError } from '@/lib/http/api';
 import { log } from '@/lib/log.server';
 import { storageKind } from '@/lib/storage/index.server';
 import { noticesCurrent } from './notices.server';
+import { processIdentity } from './process.server';
 
 /** How long the database may take to answer `SELECT 1` before the process counts it unreachable. */
 const DATABASE_WAIT_MS = 2000;
@@ -16,9 +16,6 @@ export interface Health {
   /** Whether change notices reach this process now (memories answer only then). */
   notices: 'current' | 'reconnecting';
 }
-
-/** Stable for the life of the process, distinct between processes on one machine and across machines. */
-const processId = `${hostname()}:${process.pid}`;
 
 /** The health answer, or a 503 `database_unreachable` when the database does not answer in time. */
 export async function health(): Promise<Health> {
@@ -35,5 +32,5 @@ export async function health(): Promise<Health> {
   } finally {
     clearTimeout(timer);
   }
-  return { status: 'ok', process: { id: processId, role: 'web' }, storage: storageKind, notices: noticesCurrent() ? 'current' : 'reconnecting' };
+  return { status: 'ok', process: processIdentity, storage: storageKind, notices: noticesCurrent() ? 'current' : 'reconnecting' };
 }

@@ -5,6 +5,7 @@ import pg from 'pg';
 import { DATABASE_URL } from 'astro:env/server';
 import { log } from '@/lib/log.server';
 import { CHANGE_CHANNEL, NoticeBoard, readNotice, reconnectDelay } from './notice';
+import { processIdentity } from './process.server';
 
 const ROUND_TRIP_EVERY_MS = 250;
 
@@ -47,6 +48,7 @@ async function listenForever(): Promise<void> {
       noticeBoard.resume(sentAt);
       listening = true;
       if (listenedBefore) log.info({ attempts: attempt + 1 }, 'change notices reconnected; notice-kept memory dropped');
+      else log.info({ process: processIdentity.id }, 'change notices listening');
       listenedBefore = true;
       attempt = -1;
       const why = await Promise.race([closed, roundTrips(client)]);
