@@ -104,6 +104,34 @@ describe('a change made through one process, seen by another within a second', (
     expect((await elsewhere.get(`/b/${slug}`)).status).toBe(404);
   });
 
+  test('a new member', async () => {
+    const member = await signUpFresh('live-joiner');
+    const elsewhere = member.client.via(other);
+    // Not a member yet: the other process keeps that answer too.
+    for (let i = 0; i < 2; i++) expect((await elsewhere.get(`/b/${slug}`)).status).toBe(404);
+    await joinBrand(owner, brandId, member, 'viewer');
+    const took = await msUntil(async () => (await elsewhere.get(`/b/${slug}`)).status === 200, 5 * SECOND);
+    expect(took).toBeLessThan(SECOND);
+  });
+
+  test('a deleted brand, for its members and its share links', async () => {
+    const doomed = (await owner.post('/api/brands', { name: 'Short Lived Co' })).body.brand;
+    const { revision } = (await owner.get(`/api/brands/${doomed.id}/guideline`)).body;
+    const doc = { type: 'doc', content: [{ type: 'sectionHeading', attrs: { id: 'intro', title: 'Brief', eyebrow: '', intro: '' } }] };
+    expect((await owner.request('PUT', `/api/brands/${doomed.id}/guideline`, { baseRevision: revision, doc })).status).toBe(200);
+    expect((await owner.post(`/api/brands/${doomed.id}/versions`, { note: 'Only edition' })).status).toBe(201);
+    const { url } = (await owner.post(`/api/brands/${doomed.id}/share-links`, {})).body.shareLink;
+    const visitor = await visitorVia(other, url);
+    const elsewhere = owner.via(other);
+    for (let i = 0; i < 2; i++) {
+      expect((await elsewhere.get(`/b/${doomed.slug}`)).status).toBe(200);
+      expect((await visitor.get(`/b/${doomed.slug}`)).status).toBe(200);
+    }
+    expect((await owner.delete(`/api/brands/${doomed.id}`)).status).toBe(204);
+    const took = await msUntil(async () => (await elsewhere.get(`/b/${doomed.slug}`)).status !== 200 && (await visitor.get(`/b/${doomed.slug}`)).status !== 200, 5 * SECOND);
+    expect(took).toBeLessThan(SECOND);
+  });
+
   test('a signed-out session', async () => {
     const person = await signUpFresh('live-session');
     const elsewhere = person.client.via(other);
