@@ -2,13 +2,16 @@
 // else: authorisation lives in src/lib/auth/policy.ts (members) and src/lib/publishing/site-access.server.ts (sites).
 import type { APIContext, MiddlewareNext } from 'astro';
 import { defineMiddleware } from 'astro:middleware';
-import { auth } from './lib/auth/auth.server';
+import { forgetSession, sessionFor } from './lib/auth/sessions.server';
+import { startChangeNotices } from './lib/live/notices.server';
 import { log, requestIdFrom, serveLogged } from './lib/log.server';
 import { shareGrants } from './lib/publishing/grant-cache';
 import { linkForToken, linkState, SHARE_COOKIE, tokenFromCookie } from './lib/publishing/share-links.server';
 
-// No memory of sessions here: a signed-out or revoked session is refused on the very next request, in every process.
-const sessionKey = (cookie: string) => /session_token=([^;]+)/.exec(cookie)?.[1] ?? null;
+// Sessions and share grants are kept in memory by change notices, which this process starts listening for now.
+startChangeNotices();
+/** Every session cookie the request carries, name and value: all that better-auth reads to find the session. */
+const sessionKey = (cookie: string) => [...cookie.matchAll(/(?:^|;)\s*([^=;\s]*session_token)=([^;]*)/g)].map((m) => `${m[1]}=${m[2]}`).join('; ') || null;
 
 export const onRequest = defineMiddleware((context, next) => {
   const requestId = requestIdFrom(context.request.headers.get('x-request-id'));
@@ -22,12 +25,18 @@ async function resolveCaller(context: APIContext, next: MiddlewareNext): Promise
   context.locals.user = null;
   context.locals.session = null;
   context.locals.shareGrant = null;
-  if (context.isPrerendered || context.url.pathname.startsWith('/api/auth/')) return next();
-
+  if (context.isPrerendered) return next();
   const headers = context.request.headers;
   const key = sessionKey(headers.get('cookie') ?? '');
+  if (context.url.pathname.startsWith('/api/auth/')) {
+    const response = await next();
+    // Signing out (or any change to the session) through this process is honoured here at once, not a moment later.
+    if (key && context.request.method !== 'GET') forgetSession(key);
+    return response;
+  }
+
   if (key) {
-    const found = await auth.api.getSession({ headers });
+    const found = await sessionFor(key, headers);
     if (found) {
       context.locals.user = found.user;
       context.locals.session = found.session;
@@ -35,13 +44,14 @@ async function resolveCaller(context: APIContext, next: MiddlewareNext): Promise
   }
   const token = tokenFromCookie(context.cookies.get(SHARE_COOKIE)?.value);
   if (token) {
-    let grant = shareGrants.get(token);
-    if (grant === undefined) {
+    const kept = await shareGrants.remember(token, async () => {
       const link = await linkForToken(token);
-      grant = link && linkState(link) === 'active' ? { brandId: link.brandId, linkId: link.id, allowDownloads: link.allowDownloads, allowPresentation: link.allowPresentation, version: link.versionNumber } : null;
-      shareGrants.set(token, grant);
-    }
-    context.locals.shareGrant = grant;
+      if (!link || linkState(link) !== 'active') return { grant: null, expiresAt: null };
+      const grant = { brandId: link.brandId, linkId: link.id, allowDownloads: link.allowDownloads, allowPresentation: link.allowPresentation, version: link.versionNumber };
+      return { grant, expiresAt: link.expiresAt?.getTime() ?? null };
+    });
+    // No notice marks the moment a link expires: the kept grant carries its expiry.
+    context.locals.shareGrant = kept.expiresAt !== null && kept.expiresAt <= Date.now() ? null : kept.grant;
   }
   return next();
 }

@@ -13,18 +13,28 @@ export interface Reply<T = any> {
 }
 
 export class Client {
-  private cookies = new Map<string, string>();
-
   /** `base`: another server than the suite's (a test that starts its own with other settings). */
-  constructor(private readonly base?: string) {}
+  constructor(
+    private readonly base?: string,
+    private readonly cookies = new Map<string, string>(),
+    private readonly origin?: string,
+  ) {}
 
   private get root(): string {
     return this.base ?? baseUrl();
   }
 
+  /**
+   * The same person (one cookie jar) reaching the site through another process at `base`, as a load balancer in front
+   * of several would send them; the Origin stays the site's.
+   */
+  via(base: string): Client {
+    return new Client(base, this.cookies, this.origin ?? this.root);
+  }
+
   /** Send a request; `body` as an object is JSON, as a string is sent raw. */
   async request<T = any>(method: string, path: string, body?: unknown, headers: Record<string, string> = {}): Promise<Reply<T>> {
-    const h: Record<string, string> = { origin: this.root, ...headers };
+    const h: Record<string, string> = { origin: this.origin ?? this.root, ...headers };
     if (this.cookies.size) h.cookie = [...this.cookies].map(([k, v]) => `${k}=${v}`).join('; ');
     let payload: string | undefined;
     if (body !== undefined) {
@@ -55,7 +65,7 @@ export class Client {
     const form = new FormData();
     form.set('file', new Blob([typeof content === 'string' ? content : new Uint8Array(content)], { type }), filename);
     for (const [k, v] of Object.entries(fields)) form.set(k, v);
-    const h: Record<string, string> = { origin: this.root };
+    const h: Record<string, string> = { origin: this.origin ?? this.root };
     if (this.cookies.size) h.cookie = [...this.cookies].map(([k, v]) => `${k}=${v}`).join('; ');
     const res = await fetch(this.root + path, { method: 'POST', headers: h, body: form });
     const text = await res.text();

@@ -24,8 +24,8 @@ export const unverifiedError = (email: string) =>
   new ApiError(403, 'email_unverified', `Confirm your e-mail address first: open the link we sent to ${email}, or ask for a new one on your dashboard (/app).`);
 
 /**
- * Whether the signed-in person has proven their address. The session is read from the database on every request
- * (no cookie cache, see auth-options.ts), so a link opened in another browser counts at once.
+ * Whether the signed-in person has proven their address. A kept session is dropped as soon as its account changes
+ * (sessions.server.ts), so a link opened in another browser counts within a second.
  */
 export async function isVerified(locals: App.Locals): Promise<boolean> {
   return !!locals.user?.emailVerified;

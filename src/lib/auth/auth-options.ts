@@ -57,7 +57,8 @@ export function authOptions(settings: AuthSettings): BetterAuthOptions {
     },
     // Resending goes through our own limited route (/api/account/verification), never better-auth's open one.
     disabledPaths: ['/send-verification-email'],
-    // No cookie cache: every request asks the session table, so signing out ends the session everywhere at once.
+    // No cookie cache (a signed-out cookie would work until it runs out): sessions are kept in memory by change
+    // notices instead (src/lib/auth/sessions.server.ts), so signing out ends the session in every process within a second.
     session: { expiresIn: 60 * 60 * 24 * 14, updateAge: 60 * 60 * 24, cookieCache: { enabled: false } },
     rateLimit: {
       enabled: true,

@@ -1,5 +1,11 @@
-// Share grants resolved from cookies, remembered for two seconds; revoking a link clears this process's memory
-// at once, and other processes forget within the two seconds.
-import { TtlCache } from '@/lib/http/ttl-cache';
+// Share grants resolved from cookies (by token), kept until a change notice about a share link or a brand: revoking
+// or changing a link is honoured by every process within a second (src/lib/live).
+import { noticeBoard } from '@/lib/live/notices.server';
 
-export const shareGrants = new TtlCache<App.Locals['shareGrant']>(2000);
+/** A link's grant (null: no active link) and when it expires (ms since epoch), since expiry sends no notice. */
+export interface KeptGrant {
+  grant: App.Locals['shareGrant'];
+  expiresAt: number | null;
+}
+
+export const shareGrants = noticeBoard.memory<KeptGrant>('share grants', ['link', 'brand']);

@@ -95,7 +95,7 @@ export async function revokeShareLink(caller: Caller, brand: Brand, linkId: stri
   if (link.revokedAt) return;
   await sequelize.transaction(async (t) => {
     await link.update({ revokedAt: new Date() }, { transaction: t });
-    shareGrants.clear();
+    shareGrants.forget();
     await audit({ actorId: caller.id, action: 'shareLink.revoke', targetType: 'shareLink', targetId: link.id, brandId: brand.id, studioId: brand.studioId, details: {} }, t);
   });
 }
@@ -107,7 +107,7 @@ export async function setLinkPresentation(caller: Caller, brand: Brand, linkId: 
   if (link.allowPresentation === allowPresentation) return view(link);
   await sequelize.transaction(async (t) => {
     await link.update({ allowPresentation }, { transaction: t });
-    shareGrants.clear();
+    shareGrants.forget();
     await audit({ actorId: caller.id, action: 'shareLink.update', targetType: 'shareLink', targetId: link.id, brandId: brand.id, studioId: brand.studioId, details: { allowPresentation } }, t);
   });
   return view(link);

@@ -7,17 +7,7 @@ import type { BrandRole } from '@/lib/auth/roles';
 import { versionFromPass, PRINT_COOKIE } from './print-grant.server';
 import { findVersion } from './versions.server';
 import { siteCache } from './site-cache';
-import type { TtlCache } from '@/lib/http/ttl-cache';
 import { escapeHtml } from '@/lib/safe/escape';
-
-/** A cached answer, or the lookup's (cached for next time). */
-async function remembered<V>(cache: TtlCache<V>, key: string, lookup: () => Promise<V>): Promise<V> {
-  const hit = cache.get(key);
-  if (hit !== undefined) return hit;
-  const value = await lookup();
-  cache.set(key, value);
-  return value;
-}
 
 export interface SiteAccess {
   brand: Brand;
@@ -63,13 +53,13 @@ function movedTo(url: URL, from: string, to: string): Response {
 /** The version a visitor may read at /b/:slug[/v/:number], or the response to send instead. */
 export async function siteAccess(Astro: Pick<APIContext, 'locals' | 'url' | 'redirect' | 'cookies'>, slug: string, number: number | null): Promise<SiteAccess | Response> {
   const { user, shareGrant } = Astro.locals;
-  const brand = await remembered(siteCache.brands, slug, () => Brand.findOne({ where: { slug } }));
+  const brand = await siteCache.brands.remember(slug, () => Brand.findOne({ where: { slug } }));
   if (!brand) {
     // A former address of a renamed brand: send the visitor on to the current one, which checks access as usual.
     const moved = await formerAddress(slug);
     if (moved) return movedTo(Astro.url, slug, moved);
   }
-  const role = brand && user ? await remembered(siteCache.roles, `${user.id}:${brand.id}`, () => roleOn(user.id, brand)) : null;
+  const role = brand && user ? await siteCache.roles.remember(`${user.id}:${brand.id}`, () => roleOn(user.id, brand)) : null;
   const share = brand && shareGrant?.brandId === brand.id ? shareGrant : null;
 
   // Our PDF renderer reads the print page with a signed pass for exactly one version.
@@ -86,7 +76,7 @@ export async function siteAccess(Astro: Pick<APIContext, 'locals' | 'url' | 'red
   // A link pinned to one version opens that version only.
   const wanted = !role && share?.version != null ? (number === null || number === share.version ? share.version : -1) : number;
   if (wanted === -1) return notFoundPage();
-  const version = await remembered(siteCache.versions, `${brand.id}:${wanted ?? 'latest'}`, () => findVersion(brand.id, wanted));
+  const version = await siteCache.versions.remember(`${brand.id}:${wanted ?? 'latest'}`, () => findVersion(brand.id, wanted));
   if (!version) {
     return page(404, 'Not published yet', number === null ? 'This brand has no published guidelines yet. The studio will share a link once the first version is out.' : `Version ${number} does not exist.`);
   }

@@ -4,3 +4,6 @@ import { LocalDiskStorage } from './local-disk.server';
 import type { FileStorage } from './storage';
 
 export const storage: FileStorage = new LocalDiskStorage(FILES_DIR);
+
+/** Which kind of store this process writes to (reported by GET /api/health). */
+export const storageKind: 'local' | 's3' = 'local';
