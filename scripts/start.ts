@@ -9,7 +9,8 @@ import { startCluster } from './lib/postgres';
 import { checkBrowser, checkDatabase, checkMail, checkStorage, formatChecks } from './lib/readiness';
 import { startFakeSmtp } from '@/lib/mail/fake-smtp';
 import { startFakeS3 } from '@/lib/storage/fake-s3';
-import { openStorage, type StorageSettings } from '@/lib/storage/open.server';
+import { openStorage } from '@/lib/storage/open.server';
+import type { StorageSettings } from '@/lib/storage/settings';
 import { authSecret, dataDir, demoEnabled, fakeS3Port, filesDir, host, pgPort, port, s3Settings, siteUrl, storageChoice } from './lib/settings';
 
 const started = Date.now();

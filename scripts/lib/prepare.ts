@@ -5,7 +5,7 @@ import { connect } from '@db/models';
 import { migrateAll } from '@db/migrate';
 import { seedDemo } from '@db/seeders/demo';
 import type { AuthSettings } from '@/lib/auth/auth-options';
-import { openStorage, storageEnv, type StorageSettings } from '@/lib/storage/open.server';
+import { storageEnv, type StorageSettings } from '@/lib/storage/settings';
 import { dirname, join } from 'node:path';
 import { projectRoot } from './settings';
 
@@ -23,7 +23,9 @@ export async function prepareDatabase(
   const sequelize = connect(settings.databaseUrl);
   try {
     const migrations = await migrateAll(sequelize, settings);
-    if (opts.seed !== false) await seedDemo(sequelize, settings, opts.storage ? openStorage(opts.storage) : opts.filesDir);
+    // The driver is loaded only when asked for: the object-store SDK stays out of the tests' global set-up.
+    const files = opts.storage ? (await import('@/lib/storage/open.server')).openStorage(opts.storage) : opts.filesDir;
+    if (opts.seed !== false) await seedDemo(sequelize, settings, files);
     return { migrations };
   } finally {
     await sequelize.close();
