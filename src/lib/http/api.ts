@@ -141,7 +141,8 @@ export interface FormLimits {
 
 /**
  * Read a multipart form as it streams in: 413 once the request passes `maxBytes`, and an error as soon as one
- * file passes `maxFileBytes`, so no oversized body is ever held whole.
+ * file passes `maxFileBytes`, so no oversized body is ever held whole. A file within its cap is kept whole: every
+ * upload is inspected whole before it is stored (inspect.server.ts), so none could go to storage as a stream.
  */
 export async function readForm(request: Request, maxBytes: number, limits: FormLimits = {}): Promise<FormData> {
   const type = request.headers.get('content-type') ?? '';
