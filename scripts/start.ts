@@ -46,11 +46,6 @@ try {
   process.exit(1);
 }
 let storageSettings: StorageSettings;
-if (choice.driver === 's3' && Number(process.versions.node.split('.')[0]) < 22) {
-  // The SDK warns in seven lines from every process; one line here says the same once.
-  process.env.AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED = 'true';
-  console.log(`  (the AWS SDK's releases after the first week of January 2027 need Node 22; the pinned one runs on Node ${process.versions.node})`);
-}
 if (choice.driver === 'local') {
   storageSettings = { driver: 'local', filesDir };
 } else if (choice.fakeS3) {
@@ -60,6 +55,12 @@ if (choice.driver === 'local') {
   console.log(`  s3 at ${fake.settings.endpoint}, bucket ${fake.settings.bucket}`);
 } else {
   storageSettings = { driver: 's3', ...s3Settings() };
+  step(`S3-compatible store at ${storageSettings.endpoint}, bucket ${storageSettings.bucket}`);
+}
+if (choice.driver === 's3' && Number(process.versions.node.split('.')[0]) < 22) {
+  // The SDK warns in seven lines from every process; one line here says the same once.
+  process.env.AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED = 'true';
+  console.log(`  (the AWS SDK's releases after the first week of January 2027 need Node 22; the pinned one runs on Node ${process.versions.node})`);
 }
 const storage = openStorage(storageSettings);
 

@@ -11,6 +11,8 @@ import { startFakeS3, type FakeS3 } from '@/lib/storage/fake-s3';
 import { LocalDiskStorage } from '@/lib/storage/local-disk.server';
 import { S3Storage } from '@/lib/storage/s3.server';
 import { newKey, RangeNotSatisfiable, type FileStorage } from '@/lib/storage/storage';
+import { storageEnv } from '@/lib/storage/settings';
+import { s3Settings, storageChoice } from '../../scripts/lib/settings';
 
 const MB = 1024 * 1024;
 const dir = mkdtempSync(join(tmpdir(), 'plumbline-storage-'));
@@ -221,5 +223,30 @@ describe.each(drivers)('storage on %s', (_name, open) => {
       await expect(storage.deleteBrandFiles(id), id).rejects.toThrow(/unexpected brand id/);
     }
     await expect(storage.getStream(newKey(brand, 'asset', 'bin'), { start: -1 })).rejects.toThrow(/malformed byte range/);
+  });
+});
+
+describe('choosing the store from settings', () => {
+  it('is local disk unless STORAGE says s3, and refuses a store it does not know', () => {
+    expect(storageChoice({})).toEqual({ driver: 'local' });
+    expect(storageChoice({ STORAGE: 'local' })).toEqual({ driver: 'local' });
+    expect(storageChoice({ STORAGE: 's3' })).toEqual({ driver: 's3', fakeS3: true });
+    expect(storageChoice({ STORAGE: 'S3', S3_ENDPOINT: 'https://objects.example' })).toEqual({ driver: 's3', fakeS3: false });
+    expect(() => storageChoice({ STORAGE: 'tape' })).toThrow(/STORAGE=tape is not a storage Plumbline knows/);
+  });
+
+  it('passes S3 settings to the server under the names the app reads', () => {
+    const settings = s3Settings({ S3_ENDPOINT: 'https://objects.example', S3_BUCKET: 'brand-files', S3_ACCESS_KEY_ID: 'id', S3_SECRET_ACCESS_KEY: 'secret', S3_FORCE_PATH_STYLE: 'false' });
+    expect(settings).toEqual({ endpoint: 'https://objects.example', bucket: 'brand-files', region: 'us-east-1', accessKeyId: 'id', secretAccessKey: 'secret', forcePathStyle: false });
+    expect(storageEnv({ driver: 's3', ...settings })).toEqual({
+      STORAGE: 's3',
+      S3_ENDPOINT: 'https://objects.example',
+      S3_BUCKET: 'brand-files',
+      S3_REGION: 'us-east-1',
+      S3_ACCESS_KEY_ID: 'id',
+      S3_SECRET_ACCESS_KEY: 'secret',
+      S3_FORCE_PATH_STYLE: 'false',
+    });
+    expect(storageEnv({ driver: 'local', filesDir: '/srv/files' })).toEqual({ STORAGE: 'local', FILES_DIR: '/srv/files' });
   });
 });
