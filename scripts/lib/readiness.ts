@@ -101,7 +101,8 @@ export async function checkStorage(storage: FileStorage, driver: 'local' | 's3')
       (async () => {
         await storage.put(key, new TextEncoder().encode('ok'), 'text/plain');
         if ((await storage.get(key))?.toString() !== 'ok') throw new Error('a file written was not read back');
-        await storage.delete(key);
+        // The whole probe prefix goes, so no empty folder is left on local disk.
+        await storage.deleteBrandFiles(PROBE_BRAND);
       })(),
       10_000,
       'the file store',

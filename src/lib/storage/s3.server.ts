@@ -30,6 +30,8 @@ export interface S3Settings {
 /** Parts of a streamed upload: S3's smallest part is 5 MiB; two in flight keep memory at a few parts whatever the file. */
 const PART_BYTES = 5 * 1024 * 1024;
 const PARTS_IN_FLIGHT = 2;
+/** How long to wait for a connection to the store. */
+const CONNECT_MS = 5_000;
 
 const missing = (err: unknown) =>
   err instanceof S3ServiceException && (err.name === 'NoSuchKey' || err.name === 'NotFound' || err.$metadata?.httpStatusCode === 404);
@@ -50,6 +52,9 @@ export class S3Storage implements FileStorage {
       // Checksums only where S3 requires them: S3-compatible stores differ in the newer optional ones.
       requestChecksumCalculation: 'WHEN_REQUIRED',
       responseChecksumValidation: 'WHEN_REQUIRED',
+      // A store that cannot be reached fails the request rather than holding it. No idle limit after that: a slow
+      // visitor's download pauses the store's stream (backpressure), and that pause must not cut the file off.
+      requestHandler: { connectionTimeout: CONNECT_MS },
     });
   }
 
