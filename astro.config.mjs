@@ -25,7 +25,7 @@ export default defineConfig({
   server: { host: '127.0.0.1', port: 4321 },
   vite: {
     plugins: [tailwindcss()],
-    ssr: { external: ['sharp', 'fontkit', 'pg', 'pg-hstore', 'sequelize', 'isomorphic-dompurify', 'nodemailer'] },
+    ssr: { external: ['@aws-sdk/client-s3', '@aws-sdk/lib-storage', 'sharp', 'fontkit', 'pg', 'pg-hstore', 'sequelize', 'isomorphic-dompurify', 'nodemailer'] },
   },
   env: {
     // Every setting is read at run time, so one build serves any port, database or site URL.
@@ -34,6 +34,15 @@ export default defineConfig({
       SITE_URL: envField.string({ context: 'server', access: 'secret', default: 'http://127.0.0.1:4321' }),
       AUTH_SECRET: envField.string({ context: 'server', access: 'secret' }),
       FILES_DIR: envField.string({ context: 'server', access: 'secret', default: '.data/files' }),
+      // Where stored files live (src/lib/storage): `local` disk under FILES_DIR, or `s3`, an S3-compatible object
+      // store shared by every process. Without S3_ENDPOINT, the provider's own address for S3_REGION.
+      STORAGE: envField.enum({ context: 'server', access: 'secret', values: ['local', 's3'], default: 'local' }),
+      S3_ENDPOINT: envField.string({ context: 'server', access: 'secret', optional: true }),
+      S3_BUCKET: envField.string({ context: 'server', access: 'secret', default: 'plumbline-files' }),
+      S3_REGION: envField.string({ context: 'server', access: 'secret', default: 'us-east-1' }),
+      S3_ACCESS_KEY_ID: envField.string({ context: 'server', access: 'secret', optional: true }),
+      S3_SECRET_ACCESS_KEY: envField.string({ context: 'server', access: 'secret', optional: true }),
+      S3_FORCE_PATH_STYLE: envField.boolean({ context: 'server', access: 'secret', default: true }),
       CHROMIUM_PATH: envField.string({ context: 'server', access: 'secret', default: '/usr/bin/chromium' }),
       AUTH_SIGN_IN_LIMIT: envField.number({ context: 'server', access: 'secret', default: 5 }),
       // Proxies whose X-Forwarded-For is believed (comma-separated IPs or CIDRs); empty: only the socket counts.

@@ -8,7 +8,10 @@ import { buildApp, prepareDatabase, startServer } from './lib/prepare';
 import { startCluster } from './lib/postgres';
 import { checkBrowser, checkDatabase, checkMail, checkStorage, formatChecks } from './lib/readiness';
 import { startFakeSmtp } from '@/lib/mail/fake-smtp';
-import { authSecret, dataDir, demoEnabled, filesDir, host, pgPort, port, siteUrl } from './lib/settings';
+import { startFakeS3 } from '@/lib/storage/fake-s3';
+import { openStorage } from '@/lib/storage/open.server';
+import type { StorageSettings } from '@/lib/storage/settings';
+import { authSecret, dataDir, demoEnabled, fakeS3Port, filesDir, host, pgPort, port, s3Settings, siteUrl, storageChoice } from './lib/settings';
 
 const started = Date.now();
 const step = (what: string) => console.log(`\n▸ ${what}`);
@@ -34,8 +37,35 @@ const databaseUrl = process.env.DATABASE_URL ?? startCluster(join(dataDir, 'post
 const secret = authSecret();
 const signInLimit = Number(process.env.AUTH_SIGN_IN_LIMIT ?? 5);
 
+// Stored files: local disk by default; STORAGE=s3 uses S3_ENDPOINT, or without one a local fake kept under .data/s3.
+let choice: ReturnType<typeof storageChoice>;
+try {
+  choice = storageChoice();
+} catch (err) {
+  console.error(`\n${(err as Error).message}\n`);
+  process.exit(1);
+}
+let storageSettings: StorageSettings;
+if (choice.driver === 'local') {
+  storageSettings = { driver: 'local', filesDir };
+} else if (choice.fakeS3) {
+  step(`Local S3-compatible store (data in ${join(dataDir, 's3')})`);
+  const fake = await startFakeS3({ dir: join(dataDir, 's3'), bucket: s3Settings().bucket, port: fakeS3Port });
+  storageSettings = { driver: 's3', ...fake.settings };
+  console.log(`  s3 at ${fake.settings.endpoint}, bucket ${fake.settings.bucket}`);
+} else {
+  storageSettings = { driver: 's3', ...s3Settings() };
+  step(`S3-compatible store at ${storageSettings.endpoint}, bucket ${storageSettings.bucket}`);
+}
+if (choice.driver === 's3' && Number(process.versions.node.split('.')[0]) < 22) {
+  // The SDK warns in seven lines from every process; one line here says the same once.
+  process.env.AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED = 'true';
+  console.log(`  (the AWS SDK's releases after the first week of January 2027 need Node 22; the pinned one runs on Node ${process.versions.node})`);
+}
+const storage = openStorage(storageSettings);
+
 step(demo ? 'Migrations and demo data' : 'Migrations (PLUMBLINE_DEMO=0: no demo data)');
-const { migrations } = await prepareDatabase({ databaseUrl, siteUrl, secret, signInLimit }, { filesDir, seed: demo });
+const { migrations } = await prepareDatabase({ databaseUrl, siteUrl, secret, signInLimit }, { filesDir, storage: storageSettings, seed: demo });
 console.log(migrations.length ? `  applied ${migrations.length} migration(s)` : '  schema up to date');
 
 if (process.env.PLUMBLINE_SKIP_BUILD !== '1') {
@@ -63,20 +93,20 @@ if (process.env.SMTP_HOST) {
 
 step('Starting the server');
 const serverLog = join(dataDir, 'logs', 'server.log');
-const server = await startServer({ host, port, databaseUrl, siteUrl, secret, signInLimit, filesDir, mail }, { logFile: serverLog });
+const server = await startServer({ host, port, databaseUrl, siteUrl, secret, signInLimit, filesDir, storage: storageSettings, mail }, { logFile: serverLog });
 let shareUrl: string | null = null;
 if (demo) {
   try {
     shareUrl = await publishDemo(siteUrl, dataDir);
     // The demo review anchors its comments to the published draft's blocks: seed again now that they exist.
-    await prepareDatabase({ databaseUrl, siteUrl, secret, signInLimit }, { filesDir });
+    await prepareDatabase({ databaseUrl, siteUrl, secret, signInLimit }, { filesDir, storage: storageSettings });
   } catch (err) {
     console.warn(`  (the demo version could not be published: ${(err as Error).message})`);
   }
 }
 
 step('Readiness');
-const checks = await Promise.all([checkDatabase(databaseUrl), checkBrowser(CHROMIUM_PATH), checkMail(mail, siteUrl), Promise.resolve(checkStorage(filesDir))]);
+const checks = await Promise.all([checkDatabase(databaseUrl), checkBrowser(CHROMIUM_PATH), checkMail(mail, siteUrl), checkStorage(storage, storageSettings.driver)]);
 console.log(formatChecks(checks));
 
 /** Demo people left in the database by an earlier start with the demo on. */

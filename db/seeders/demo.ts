@@ -3,6 +3,7 @@ import { betterAuth } from 'better-auth';
 import { QueryTypes, type Sequelize } from 'sequelize';
 import { authOptions, type AuthSettings } from '@/lib/auth/auth-options';
 import type { BrandRole } from '@/lib/auth/roles';
+import type { FileStorage } from '@/lib/storage/storage';
 import { Brand, BrandMember, Studio, StudioMember } from '@db/models';
 import { seedIdentity } from './identity';
 import { seedCollaboration } from './collaboration';
@@ -30,7 +31,8 @@ export const DEMO_BRANDS: { name: string; slug: string; roles: Partial<Record<(t
 ];
 
 /** Create the demo people, studio, brands and memberships that are missing; leave existing ones alone. */
-export async function seedDemo(sequelize: Sequelize, settings: AuthSettings, filesDir: string): Promise<{ created: boolean }> {
+/** `files`: the store the demo's files go to (a folder name means local disk there). */
+export async function seedDemo(sequelize: Sequelize, settings: AuthSettings, files: FileStorage | string): Promise<{ created: boolean }> {
   const options = authOptions(settings);
   const auth = betterAuth(options);
   const ids: Record<string, string> = {};
@@ -81,7 +83,7 @@ export async function seedDemo(sequelize: Sequelize, settings: AuthSettings, fil
           transaction,
         });
       }
-      await seedIdentity(brand, filesDir, transaction);
+      await seedIdentity(brand, files, transaction);
     }
   });
   await seedCollaboration(sequelize, { designer: ids.designer, editor: ids.editor, reviewer: ids.reviewer });

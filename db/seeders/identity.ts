@@ -9,7 +9,7 @@ import { sanitizeSvg } from '@/lib/logo';
 import { drawnBounds } from '@/lib/logo/bounds.server';
 import { thinnestStroke } from '@/lib/logo/stroke.server';
 import { LocalDiskStorage } from '@/lib/storage/local-disk.server';
-import { newKey } from '@/lib/storage/storage';
+import { newKey, type FileStorage } from '@/lib/storage/storage';
 import { fontMetrics } from '@/lib/type';
 import { shippedFont } from '@/lib/type/shipped-fonts';
 import { Brand, BrandColor, BrandLogo, BrandTypeface } from '@db/models';
@@ -58,10 +58,10 @@ export const DEMO_IDENTITIES: Record<string, DemoIdentity> = {
 const filesHere = join(import.meta.dirname, 'files');
 
 /** Give a demo brand its identity when it has none yet (an empty palette is the sign). */
-export async function seedIdentity(brand: Brand, filesDir: string, t: Transaction): Promise<void> {
+export async function seedIdentity(brand: Brand, files: FileStorage | string, t: Transaction): Promise<void> {
   const spec = DEMO_IDENTITIES[brand.slug];
   if (!spec || (await BrandColor.count({ where: { brandId: brand.id }, transaction: t })) > 0) return;
-  const storage = new LocalDiskStorage(filesDir);
+  const storage = typeof files === 'string' ? new LocalDiskStorage(files) : files;
   for (const [position, c] of spec.colors.entries()) {
     const parsed = parseColor(c.value);
     if (!parsed.ok) throw new Error(`demo colour ${c.value}: ${parsed.error.message}`);
@@ -73,7 +73,7 @@ export async function seedIdentity(brand: Brand, filesDir: string, t: Transactio
     const bytes = Buffer.from(clean.svg);
     const bounds = (await drawnBounds(bytes)).box;
     const key = newKey(brand.id, 'logo', 'svg');
-    await storage.put(key, bytes);
+    await storage.put(key, bytes, 'image/svg+xml');
     await BrandLogo.create(
       {
         brandId: brand.id,

@@ -5,18 +5,27 @@ import { connect } from '@db/models';
 import { migrateAll } from '@db/migrate';
 import { seedDemo } from '@db/seeders/demo';
 import type { AuthSettings } from '@/lib/auth/auth-options';
+import { storageEnv, type StorageSettings } from '@/lib/storage/settings';
 import { dirname, join } from 'node:path';
 import { projectRoot } from './settings';
 
 /** Where the build goes (PLUMBLINE_OUT_DIR, default dist/). */
 export const outDir = () => process.env.PLUMBLINE_OUT_DIR ?? join(projectRoot, 'dist');
 
-/** Run migrations and seed the demo against `settings.databaseUrl`. */
-export async function prepareDatabase(settings: AuthSettings, opts: { filesDir: string; seed?: boolean }): Promise<{ migrations: string[] }> {
+/**
+ * Run migrations and seed the demo against `settings.databaseUrl`; the demo's files go to `storage` when given,
+ * otherwise to local disk under `filesDir`.
+ */
+export async function prepareDatabase(
+  settings: AuthSettings,
+  opts: { filesDir: string; storage?: StorageSettings; seed?: boolean },
+): Promise<{ migrations: string[] }> {
   const sequelize = connect(settings.databaseUrl);
   try {
     const migrations = await migrateAll(sequelize, settings);
-    if (opts.seed !== false) await seedDemo(sequelize, settings, opts.filesDir);
+    // The driver is loaded only when asked for: the object-store SDK stays out of the tests' global set-up.
+    const files = opts.storage ? (await import('@/lib/storage/open.server')).openStorage(opts.storage) : opts.filesDir;
+    if (opts.seed !== false) await seedDemo(sequelize, settings, files);
     return { migrations };
   } finally {
     await sequelize.close();
@@ -57,6 +66,8 @@ export interface ServerEnv {
   /** E-mails one account may send per hour (MAIL_SEND_LIMIT). */
   mailSendLimit?: number;
   filesDir?: string;
+  /** Where stored files live (STORAGE, FILES_DIR, S3_*); left out, local disk under `filesDir`. */
+  storage?: StorageSettings;
   /** E-mail: the SMTP relay and, when the local fake keeps the messages, its folder (src/lib/mail). */
   mail?: { smtpHost: string; smtpPort: number; from?: string; captureDir?: string };
   /** Further settings from the astro:env schema by name (e.g. RENDITION_RATE_LIMIT for a test with small limits). */
@@ -86,6 +97,15 @@ export async function startServer(env: ServerEnv, opts: { quiet?: boolean; pipeL
       // The catcher's folder comes from `mail` below or not at all, never from the caller's environment.
       MAIL_CAPTURE_DIR: undefined,
       ...(env.filesDir ? { FILES_DIR: env.filesDir } : {}),
+      // The store comes from `storage` or is local disk, never from the caller's environment.
+      STORAGE: undefined,
+      S3_ENDPOINT: undefined,
+      S3_BUCKET: undefined,
+      S3_REGION: undefined,
+      S3_ACCESS_KEY_ID: undefined,
+      S3_SECRET_ACCESS_KEY: undefined,
+      S3_FORCE_PATH_STYLE: undefined,
+      ...(env.storage ? storageEnv(env.storage) : {}),
       ...(env.mail
         ? {
             SMTP_HOST: env.mail.smtpHost,

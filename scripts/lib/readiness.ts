@@ -1,10 +1,10 @@
 // Before "running": each part of Plumbline tried for real, one line each, and what to do for a part that failed.
 import { randomUUID } from 'node:crypto';
-import { existsSync, mkdirSync, rmSync, writeFileSync } from 'node:fs';
-import { join } from 'node:path';
+import { existsSync } from 'node:fs';
 import nodemailer from 'nodemailer';
 import pg from 'pg';
 import puppeteer from 'puppeteer-core';
+import type { FileStorage } from '@/lib/storage/storage';
 
 export interface Check {
   part: string;
@@ -90,16 +90,30 @@ export async function checkMail(mail: { smtpHost: string; smtpPort: number; capt
   }
 }
 
-/** The files folder takes a write and a delete. */
-export function checkStorage(filesDir: string): Check {
-  const probe = join(filesDir, `.write-check-${randomUUID()}`);
+/** A brand id no brand has (the nil UUID), so the probe's key is one of ours and touches nobody's files. */
+const PROBE_BRAND = '00000000-0000-0000-0000-000000000000';
+
+/** The file store takes a write, gives the bytes back and deletes them, through the same driver the server uses. */
+export async function checkStorage(storage: FileStorage, driver: 'local' | 's3'): Promise<Check> {
+  const key = `${PROBE_BRAND}/readiness-check/${randomUUID()}.txt`;
   try {
-    mkdirSync(filesDir, { recursive: true });
-    writeFileSync(probe, 'ok');
-    rmSync(probe);
-    return { part: 'storage', ok: true, detail: `${filesDir} is writable` };
+    await withTimeout(
+      (async () => {
+        await storage.put(key, new TextEncoder().encode('ok'), 'text/plain');
+        if ((await storage.get(key))?.toString() !== 'ok') throw new Error('a file written was not read back');
+        // The whole probe prefix goes, so no empty folder is left on local disk.
+        await storage.deleteBrandFiles(PROBE_BRAND);
+      })(),
+      10_000,
+      'the file store',
+    );
+    return { part: 'storage', ok: true, detail: `${storage.description} (wrote, read back and removed a test file)` };
   } catch (err) {
-    return { part: 'storage', ok: false, detail: `${filesDir}: ${firstLine(err)}`, fix: 'make that folder writable by this user, or set FILES_DIR' };
+    const fix =
+      driver === 's3'
+        ? 'check S3_ENDPOINT, S3_BUCKET (it must exist), S3_REGION and the key pair, or unset S3_ENDPOINT to use the local fake'
+        : 'make that folder writable by this user, or set FILES_DIR';
+    return { part: 'storage', ok: false, detail: `${storage.description}: ${firstLine(err)}`, fix };
   }
 }
 

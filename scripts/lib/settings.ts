@@ -25,3 +25,27 @@ export const siteUrl = process.env.SITE_URL ?? `http://${host}:${port}`;
 /** PLUMBLINE_DEMO=0 (or false/no/off) leaves the demo studio, brands and people out; `npm start` seeds them by default. */
 export const demoEnabled = (value = process.env.PLUMBLINE_DEMO): boolean => !['0', 'false', 'no', 'off'].includes((value ?? '1').trim().toLowerCase());
 export const filesDir = resolve(process.env.FILES_DIR ?? join(dataDir, 'files'));
+
+/**
+ * Where stored files live: local disk under filesDir (STORAGE=local, the default), or an S3-compatible store
+ * (STORAGE=s3). With STORAGE=s3 and no S3_ENDPOINT, `npm start` runs a local fake under .data/s3 (`fakeS3: true`).
+ */
+export function storageChoice(env: NodeJS.ProcessEnv = process.env): { driver: 'local' } | { driver: 's3'; fakeS3: boolean } {
+  const driver = (env.STORAGE ?? 'local').trim().toLowerCase() || 'local';
+  if (driver === 'local') return { driver };
+  if (driver === 's3') return { driver, fakeS3: !env.S3_ENDPOINT };
+  throw new Error(`STORAGE=${env.STORAGE} is not a storage Plumbline knows: use STORAGE=local (files under FILES_DIR) or STORAGE=s3.`);
+}
+
+/** The S3 settings named by the environment (S3_ENDPOINT, S3_BUCKET, S3_REGION, S3_ACCESS_KEY_ID, S3_SECRET_ACCESS_KEY, S3_FORCE_PATH_STYLE). */
+export function s3Settings(env: NodeJS.ProcessEnv = process.env) {
+  return {
+    endpoint: env.S3_ENDPOINT || undefined,
+    bucket: env.S3_BUCKET || 'plumbline-files',
+    region: env.S3_REGION || 'us-east-1',
+    accessKeyId: env.S3_ACCESS_KEY_ID || undefined,
+    secretAccessKey: env.S3_SECRET_ACCESS_KEY || undefined,
+    forcePathStyle: !['0', 'false', 'no', 'off'].includes((env.S3_FORCE_PATH_STYLE ?? 'true').trim().toLowerCase()),
+  };
+}
+export const fakeS3Port = Number(process.env.PLUMBLINE_S3_PORT ?? 0);

@@ -24,7 +24,7 @@ import { storage } from '@/lib/storage/index.server';
 import { inspectUpload, UploadRejection } from '@/lib/uploads/inspect.server';
 import type { AssetReader } from './access.server';
 import { formatList } from '@/lib/uploads/rules';
-import { canMoveState, FORMAT_INFO, MAX_IMAGE_PIXELS, PHOTO_FORMATS, PREVIEW_MAX_WIDTH, renditionFilename, STANDARD_RENDITIONS, VECTOR_PRINT_RENDITIONS, type AssetFormat, type AssetKind, type AssetState, type RenditionParams, type RenditionQuery } from './kinds';
+import { canMoveState, FORMAT_INFO, MAX_IMAGE_PIXELS, PHOTO_FORMATS, PREVIEW_MAX_WIDTH, renditionFilename, renditionType, STANDARD_RENDITIONS, VECTOR_PRINT_RENDITIONS, type AssetFormat, type AssetKind, type AssetState, type RenditionParams, type RenditionQuery } from './kinds';
 import { cachedRendition, renditionKey, type Rendition } from './render.server';
 import { checkRenditionSize, resolveRendition } from './renditions';
 import { usageNote } from './usage';
@@ -354,6 +354,13 @@ async function admitNewRendition(asset: Asset, paramsKey: string, requester: str
   }
 }
 
+/** The original as stored, streamed: the same bytes as the 'original' rendition, never held whole. */
+async function originalStream(asset: Asset): Promise<DownloadBody> {
+  const stored = await storage.getStream(asset.storageKey);
+  if (!stored) throw new ApiError(404, 'not_found', 'The asset’s file is missing from storage.');
+  return { body: stored.stream, size: stored.size, mime: renditionType('original', asset.format).mime };
+}
+
 async function originalBytes(asset: Asset): Promise<Buffer> {
   const bytes = await storage.get(asset.storageKey);
   if (!bytes) throw new ApiError(404, 'not_found', 'The asset’s file is missing from storage.');
@@ -398,13 +405,16 @@ const logRow = (reader: AssetReader, kind: 'file' | 'bundle', assetId: string | 
 });
 
 /** One file download: the rendition asked for, its name, and a row in the download log. */
-export async function downloadFile(reader: AssetReader, asset: Asset, query: RenditionQuery, requester: string): Promise<{ rendition: Rendition; filename: string; params: RenditionParams }> {
+/** A file to send: whole bytes (a rendition, small) or the stored original as a stream (up to the shelf's cap). */
+export type DownloadBody = Rendition | { body: Readable; size: number; mime: string };
+
+export async function downloadFile(reader: AssetReader, asset: Asset, query: RenditionQuery, requester: string): Promise<{ rendition: DownloadBody; filename: string; params: RenditionParams }> {
   const { preview, ...wanted } = query;
   const params = renditionParams(asset, wanted);
   if (preview && (params.format !== 'png' || !params.width || params.width > PREVIEW_MAX_WIDTH || params.square)) {
     throw new ApiError(400, 'invalid_input', `A preview is a PNG at most ${PREVIEW_MAX_WIDTH} px wide; download anything else without preview=1.`);
   }
-  const rendition = await renditionOf(asset, params, requester);
+  const rendition = params.format === 'original' ? await originalStream(asset) : await renditionOf(asset, params, requester);
   const filename = renditionFilename(reader.brand.slug, asset.name, params, asset.format);
   if (preview) return { rendition, filename, params };
   await AssetDownload.create(
@@ -415,7 +425,7 @@ export async function downloadFile(reader: AssetReader, asset: Asset, query: Ren
       variant: params.variant,
       preset: query.preset ?? null,
       colorSpace: params.colorSpace,
-      bytes: rendition.body.length,
+      bytes: 'size' in rendition ? rendition.size : rendition.body.length,
     }),
   );
   return { rendition, filename, params };

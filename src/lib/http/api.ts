@@ -1,6 +1,7 @@
 // The API's conventions: JSON in and out, one error shape, zod at the boundary.
 import type { APIContext, APIRoute } from 'astro';
 import busboy from 'busboy';
+import { Readable } from 'node:stream';
 import { z } from 'zod';
 import { AppError } from '@/lib/errors';
 import { log } from '@/lib/log.server';
@@ -140,7 +141,8 @@ export interface FormLimits {
 
 /**
  * Read a multipart form as it streams in: 413 once the request passes `maxBytes`, and an error as soon as one
- * file passes `maxFileBytes`, so no oversized body is ever held whole.
+ * file passes `maxFileBytes`, so no oversized body is ever held whole. A file within its cap is kept whole: every
+ * upload is inspected whole before it is stored (inspect.server.ts), so none could go to storage as a stream.
  */
 export async function readForm(request: Request, maxBytes: number, limits: FormLimits = {}): Promise<FormData> {
   const type = request.headers.get('content-type') ?? '';
@@ -207,13 +209,17 @@ export function formFields(form: FormData, skip = 'file'): Record<string, string
   return out;
 }
 
-/** A file download response; `inline` shows it in the browser, otherwise it downloads with the name given. */
-export function fileResponse(body: Buffer, contentType: string, filename: string, opts: { inline?: boolean } = {}): Response {
+/**
+ * A file download response; `inline` shows it in the browser, otherwise it downloads with the name given.
+ * A stream (with its size) is sent as it is read, never held whole.
+ */
+export function fileResponse(body: Buffer | { stream: Readable; size: number }, contentType: string, filename: string, opts: { inline?: boolean } = {}): Response {
   const safe = filename.replace(/[^\w.-]+/g, '-');
-  return new Response(new Uint8Array(body), {
+  const streamed = !Buffer.isBuffer(body);
+  return new Response(streamed ? (Readable.toWeb(body.stream) as ReadableStream<Uint8Array>) : new Uint8Array(body), {
     headers: {
       'content-type': contentType,
-      'content-length': String(body.length),
+      'content-length': String(streamed ? body.size : body.length),
       'content-disposition': `${opts.inline ? 'inline' : 'attachment'}; filename="${safe}"`,
       'cache-control': 'private, no-cache',
       'x-content-type-options': 'nosniff',

@@ -1,4 +1,5 @@
 // Mood boards: images, swatches, type samples and notes sent to a client contact for a decision on direction.
+import type { Readable } from 'node:stream';
 import { Op } from 'sequelize';
 import { Brand, BrandColor } from '@db/models';
 import { MoodBoard, MoodBoardDecision, MoodBoardItem, type Verdict } from '@db/models/collaboration';
@@ -202,11 +203,12 @@ export async function deleteItem(caller: Caller, brand: Brand, boardId: string, 
   if (item.storageKey) await storage.delete(item.storageKey);
 }
 
-async function imageBytes(boardId: string, itemId: string): Promise<{ body: Buffer; contentType: string }> {
+/** An image piece as a stream from storage (a camera original may be 15 MB): never held whole. */
+async function imageBytes(boardId: string, itemId: string): Promise<{ body: { stream: Readable; size: number }; contentType: string }> {
   const item = await MoodBoardItem.findOne({ where: { id: itemId, boardId, kind: 'image' } });
-  const body = item?.storageKey ? await storage.get(item.storageKey) : null;
-  if (!item || !body) throw new ApiError(404, 'not_found', 'That image was not found on this board.');
-  return { body, contentType: item.contentType ?? 'application/octet-stream' };
+  const stored = item?.storageKey ? await storage.getStream(item.storageKey) : null;
+  if (!item || !stored) throw new ApiError(404, 'not_found', 'That image was not found on this board.');
+  return { body: { stream: stored.stream, size: stored.size }, contentType: item.contentType ?? 'application/octet-stream' };
 }
 
 export async function boardImage(brand: Brand, boardId: string, itemId: string) {

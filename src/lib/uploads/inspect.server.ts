@@ -3,6 +3,8 @@
 // font tags), never from its name or the browser's header; the name must agree with the bytes; the caller's kind
 // decides what is accepted and how large it may be (rules.ts). Images are decoded in full, binary files are checked
 // for a second document riding along, SVGs are cleaned, fonts are opened. Anything doubtful is refused with a code.
+// So the inspector takes the whole bytes (sharp decodes them, fontkit opens them, a PDF is scanned end to end, a ZIP's
+// directory is at its end): an upload is held in memory up to its kind's cap (rules.ts, at most 25 MB), never streamed.
 import { fileTypeFromBuffer } from 'file-type';
 import sharp from 'sharp';
 import { AppError } from '@/lib/errors';

@@ -24,7 +24,8 @@ export const GET = endpoint(async (context) => {
   });
   const asset = await assetFor(reader.brand.id, assetId, reader.approvedOnly);
   const { rendition, filename, params: resolved } = await downloadFile(reader, asset, query, renditionRequester(reader, requestClientAddress(context)));
-  const response = fileResponse(rendition.body, rendition.mime, filename, { inline: query.download !== '1' });
+  const body = 'size' in rendition ? { stream: rendition.body, size: rendition.size } : rendition.body;
+  const response = fileResponse(body, rendition.mime, filename, { inline: query.download !== '1' });
   if (resolved.colorSpace === 'cmyk') response.headers.set('x-print-caution', PRINT_CAUTION);
   return response;
 });
