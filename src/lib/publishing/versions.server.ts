@@ -48,6 +48,10 @@ async function copyFiles(brand: Brand, identity: Identity, doc: GuidelineDoc): P
   const wanted = documentRefs(doc, 'image').filter((id) => isAssetRef(id) && approvedImages.has(id));
   const images = wanted.length ? await Asset.findAll({ where: { brandId: brand.id, id: wanted, state: 'approved', kind: ['image', 'photo'] }, attributes: ['id', 'storageKey', 'mime', 'format'] }) : [];
   for (const image of images) await copy(image.id, image.storageKey, image.format, image.mime);
+  // Approved shelf patterns (the pattern block links one; mock-ups draw the first): their tiles travel with the version.
+  const patternIds = (identity.assets ?? []).filter((a) => a.kind === 'pattern').map((a) => a.id);
+  const patterns = patternIds.length ? await Asset.findAll({ where: { brandId: brand.id, id: patternIds, state: 'approved', kind: 'pattern' }, attributes: ['id', 'storageKey', 'mime', 'format'] }) : [];
+  for (const pattern of patterns) await copy(pattern.id, pattern.storageKey, pattern.format, pattern.mime);
   const logos = await BrandLogo.findAll({ where: { brandId: brand.id }, attributes: ['id', 'storageKey', 'format', 'variantFiles'] });
   for (const logo of logos) {
     await copy(logo.id, logo.storageKey, logo.format, logoType(logo.format));
