@@ -178,8 +178,9 @@ export function composeMockup(template: MockupTemplate, identity: Identity, sour
   const page = { x: 0, y: 0, ...trim };
   const pattern = mockupPattern(identity);
   const fill = sources.pattern?.(pattern) ?? null;
-  // CSS px (the pattern's unit) in template units: 25.4 / 96 mm on paper (CSS Values 4), the image density on screens.
-  const unitsPerPx = unit === 'mm' ? 25.4 / 96 : template.density;
+  // CSS px (the pattern's unit) in template units: 25.4 / 96 mm on paper (CSS Values 4), the image density on screens;
+  // times the piece's own pattern scale (a sign is read from across the street).
+  const unitsPerPx = (unit === 'mm' ? 25.4 / 96 : template.density) * template.patternScale;
   const refusals: MockupRefusal[] = [];
   const pages: PlacedPage[] = [];
   for (const spec of template.pages) {

@@ -94,7 +94,7 @@ async function prepareMockup(template: MockupTemplate, identity: Identity, choic
 }
 
 /** Bumped when the drawing code changes, so files kept by an older renderer are drawn again. */
-const RENDERER = 'mockup-renderer-2';
+const RENDERER = 'mockup-renderer-3';
 
 /**
  * Where a drawing is kept: the SHA-256 of the renderer, the format and every input (placed pages with their embedded

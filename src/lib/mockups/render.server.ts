@@ -16,6 +16,17 @@ const PNG_MAX_SIDE = 3600;
 const shell = (fontCss: string, pageCss: string, body: string) =>
   `<!doctype html><html><head><meta charset="utf-8"><style>${fontCss}\n${pageCss}</style></head><body>${body}</body></html>`;
 
+/** Smallest share of its scale size a text may be set at to fit its box. */
+const FIT_FLOOR = 0.7;
+
+/** Text that a brand's larger type scale would clip is set smaller, in small steps down to FIT_FLOOR, so nothing is cut off. */
+function fitText(floor: number): void {
+  for (const el of Array.from(document.querySelectorAll<HTMLElement>('foreignObject > div'))) {
+    const size = parseFloat(el.style.fontSize);
+    for (let scale = 0.96; el.scrollHeight > el.clientHeight + 0.5 && scale >= floor; scale -= 0.04) el.style.fontSize = `${size * scale}px`;
+  }
+}
+
 /** Loads our own HTML into a fresh page; only data: addresses load (the sources are embedded), fonts settle before drawing. */
 async function withPage<T>(html: string, viewport: { width: number; height: number; deviceScaleFactor: number } | null, work: (page: Page) => Promise<T>): Promise<T> {
   let browser;
@@ -31,6 +42,7 @@ async function withPage<T>(html: string, viewport: { width: number; height: numb
     if (viewport) await page.setViewport(viewport);
     await page.setContent(html, { waitUntil: 'load', timeout: 30_000 });
     await page.evaluate(() => document.fonts.ready.then(() => undefined));
+    await page.evaluate(fitText, FIT_FLOOR);
     return await work(page);
   } finally {
     await page.close().catch(() => {});
