@@ -103,3 +103,10 @@ describe('the page’s own drawing', () => {
     expect(svg).toContain(`flood-color="${fill.ink}"`);
   });
 });
+
+describe('a palette of one colour', () => {
+  test('has no ink to set on its only colour: a plain field, not marks invisible on themselves', () => {
+    const one = { ...identity, colors: identity.colors.filter((c) => c.id === 'c-roast-umber') };
+    expect(mockupPattern(one)).toMatchObject({ settings: null, hex: '#4a2e22' });
+  });
+});

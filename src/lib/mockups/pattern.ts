@@ -39,6 +39,8 @@ export function mockupPattern(identity: Identity): MockupPattern {
   const field = colorForRole(identity, 'secondary') ?? colorForRole(identity, 'accent') ?? colorForRole(identity, 'primary');
   if (!mark || !field) return { settings: null, assetId: null, hex: storedHexOr(field?.hex, '#d9d4c7') };
   const ink = inkOn(identity, field.id);
+  // A one-colour palette has no ink to set on its only colour: a plain field.
+  if (!ink) return { settings: null, assetId: null, hex: storedHexOr(field.hex.slice(0, 7), '#d9d4c7') };
   const parsed = patternSettingsSchema.safeParse({ ...DEFAULT_MOCKUP_PATTERN, logoId: mark.id, groundColorId: field.id, inkColorId: ink });
   const settings = parsed.success ? parsed.data : null;
   return { settings, assetId: null, hex: storedHexOr(field.hex.slice(0, 7), '#d9d4c7') };
