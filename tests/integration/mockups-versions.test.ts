@@ -67,7 +67,7 @@ describe('the version keeps its own copies', () => {
     expect(page.body).toContain(`/b/${slug}/v/1/files/${logoId}?variant=black`);
   });
 
-  test('after the live palette, logo and shelf change, the version’s mock-up is the same file; the draft’s is not', async () => {
+  test('after the live palette and shelf change, the version’s mock-up is the same file; the draft’s is not', async () => {
     const before = await bytesOf(visitor, `/b/${slug}/v/1/mockups/business-card?format=png`);
     expect(before.status).toBe(200);
     const draftBefore = await bytesOf(owner, `/api/brands/${brandId}/mockups/business-card?format=png&logoId=${logoId}`);
