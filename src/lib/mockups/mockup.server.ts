@@ -94,14 +94,16 @@ async function prepareMockup(template: MockupTemplate, identity: Identity, choic
 }
 
 /** Bumped when the drawing code changes, so files kept by an older renderer are drawn again. */
-const RENDERER = 'mockup-renderer-3';
+const RENDERER = 'mockup-renderer-4';
 
 /**
  * Where a drawing is kept: the SHA-256 of the renderer, the format and every input (placed pages with their embedded
  * files, font faces), its first 128 bits written in the storage's UUID-shaped key, inside the brand's folder.
  */
 export function mockupCacheKey(brandId: string, format: MockupFormat, layout: MockupLayout, fontCss: string): string {
-  const h = createHash('sha256').update(RENDERER).update('\0').update(format).update('\0').update(JSON.stringify(layout)).update('\0').update(fontCss).digest('hex');
+  // A placed logo's identity record carries addresses that differ between the draft and a version; what is drawn is its embedded file.
+  const drawn = JSON.stringify(layout, (key, value) => (key === 'logo' && value && typeof value === 'object' ? (value as { id: string }).id : value));
+  const h = createHash('sha256').update(RENDERER).update('\0').update(format).update('\0').update(drawn).update('\0').update(fontCss).digest('hex');
   return `${brandId}/mockup/${h.slice(0, 8)}-${h.slice(8, 12)}-${h.slice(12, 16)}-${h.slice(16, 20)}-${h.slice(20, 32)}.${format}`;
 }
 

@@ -56,7 +56,8 @@ export async function mockupPng(layout: MockupLayout, fontCss = ''): Promise<Buf
   const w = layout.trim.width * cssPerUnit;
   const h = layout.trim.height * cssPerUnit;
   const gap = layout.pages.length > 1 ? Math.round(w * 0.06) : 0;
-  const total = { width: Math.ceil(w * layout.pages.length + gap * (layout.pages.length - 1)), height: Math.ceil(h) };
+  // Whole CSS px, rounded down: the last fraction of a pixel of the ground is cut rather than left as a transparent hairline.
+  const total = { width: Math.floor(w * layout.pages.length + gap * (layout.pages.length - 1)), height: Math.floor(h) };
   // Screen pieces are drawn at their own pixels; paper at about 2 device px per CSS px, within the size cap.
   const scale = layout.unit === 'px' ? 1 : Math.min(2, PNG_MAX_SIDE / Math.max(total.width, total.height));
   const svgs = layout.pages.map((p, i) => pageSvg(layout, p, { width: `${w}px`, height: `${h}px`, label: `${layout.template.name}, ${p.name}` }).replace('<svg ', `<svg style="left:${i * (w + gap)}px" `));
