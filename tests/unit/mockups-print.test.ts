@@ -18,7 +18,8 @@ import { thinnestStroke } from '@/lib/logo/stroke.server';
 import { fontFaceCss } from '@/lib/guideline/identity';
 import { composeMockup, requireLayout, type MockupLayout } from '@/lib/mockups/compose';
 import { mockupTemplate } from '@/lib/mockups/templates';
-import { mockupPdf, mockupPng } from '@/lib/mockups/render.server';
+import { FIT_FLOOR, fitText, mockupPdf, mockupPng } from '@/lib/mockups/render.server';
+import { printBrowser, releaseBrowser } from '@/lib/logo/print-files.server';
 import { mockupPattern } from '@/lib/mockups/pattern';
 import { patternTile } from '@/lib/pattern/pattern.server';
 
@@ -240,5 +241,33 @@ describe('the pattern is the mark (the generator’s tile, against librsvg’s o
     expect(Math.abs(share - tileInk)).toBeLessThan(0.06);
     const bleed = inkShare(data, info.channels, info.width, { x0: px(88.4), y0: px(0.2), x1: px(90.8), y1: px(60.8) });
     expect(bleed).toBeGreaterThan(0);
+  }, 60_000);
+});
+
+describe('text a larger scale would clip (CSS Overflow 3: content taller than its box is clipped by overflow: hidden)', () => {
+  /** Three lines at line-height 1 in a box `height` px tall, fitted in Chromium; the size it ends at and whether it still overflows. */
+  async function fitted(height: number) {
+    const browser = await printBrowser();
+    const page = await browser.newPage();
+    try {
+      await page.setContent(`<svg xmlns="http://www.w3.org/2000/svg" width="200" height="200"><foreignObject width="200" height="${height}"><div xmlns="http://www.w3.org/1999/xhtml" style="margin:0;font-size:20px;line-height:1;white-space:pre-line;overflow:hidden;height:${height}px">One\nTwo\nThree</div></foreignObject></svg>`);
+      await page.evaluate(fitText, FIT_FLOOR);
+      return await page.$eval('foreignObject > div', (el) => ({ size: parseFloat((el as HTMLElement).style.fontSize), clipped: el.scrollHeight > el.clientHeight + 0.5 }));
+    } finally {
+      await page.close();
+      releaseBrowser();
+    }
+  }
+
+  test('is set smaller in 4 % steps until it fits: three 20 px lines in 45 px end at 72 % (3 × 14.4 = 43.2 px)', async () => {
+    expect(await fitted(45)).toEqual({ size: expect.closeTo(14.4, 6), clipped: false });
+  }, 60_000);
+
+  test('never below 70 % of its scale size: three 20 px lines in 30 px stay clipped at 72 %', async () => {
+    expect(await fitted(30)).toEqual({ size: expect.closeTo(14.4, 6), clipped: true });
+  }, 60_000);
+
+  test('text that fits is left at its size', async () => {
+    expect(await fitted(80)).toEqual({ size: 20, clipped: false });
   }, 60_000);
 });

@@ -17,10 +17,10 @@ const shell = (fontCss: string, pageCss: string, body: string) =>
   `<!doctype html><html><head><meta charset="utf-8"><style>${fontCss}\n${pageCss}</style></head><body>${body}</body></html>`;
 
 /** Smallest share of its scale size a text may be set at to fit its box. */
-const FIT_FLOOR = 0.7;
+export const FIT_FLOOR = 0.7;
 
 /** Text that a brand's larger type scale would clip is set smaller, in small steps down to FIT_FLOOR, so nothing is cut off. */
-function fitText(floor: number): void {
+export function fitText(floor: number): void {
   for (const el of Array.from(document.querySelectorAll<HTMLElement>('foreignObject > div'))) {
     const size = parseFloat(el.style.fontSize);
     for (let scale = 0.96; el.scrollHeight > el.clientHeight + 0.5 && scale >= floor; scale -= 0.04) el.style.fontSize = `${size * scale}px`;
