@@ -13,6 +13,7 @@ let slug: string;
 let logoId: string;
 let paperId: string;
 let patternId: string;
+let unusedId: string;
 let visitor: Client;
 
 async function bytesOf(client: Client, path: string): Promise<{ status: number; type: string | null; body: Buffer }> {
@@ -35,6 +36,9 @@ beforeAll(async () => {
   expect(saved.status).toBe(201);
   patternId = saved.body.asset.id;
   expect((await owner.patch(`/api/brands/${brandId}/assets/${patternId}`, { state: 'approved' })).status).toBe(200);
+  // Another approved pattern that no block links and the mock-ups do not draw (the first by name is theirs).
+  unusedId = (await owner.post(`/api/brands/${brandId}/patterns`, { settings: { logoId, layout: 'diagonal', scale: 30 }, name: 'Zz spare pattern' })).body.asset.id;
+  expect((await owner.patch(`/api/brands/${brandId}/assets/${unusedId}`, { state: 'approved' })).status).toBe(200);
   const doc = {
     type: 'doc',
     content: [
@@ -54,9 +58,10 @@ afterAll(async () => {
 });
 
 describe('the version keeps its own copies', () => {
-  test('the version copied the approved shelf pattern’s tile with the logos', async () => {
+  test('the version copied the linked shelf pattern’s tile with the logos, and no pattern it does not use', async () => {
     const [row] = await sql<{ files: Record<string, { key: string; contentType: string }> }>('SELECT files FROM guideline_versions WHERE brand_id = $1 AND number = 1', [brandId]);
     expect(row.files[patternId]?.contentType).toBe('image/svg+xml');
+    expect(row.files[unusedId]).toBeUndefined();
     expect(row.files[logoId]).toBeDefined();
   });
 
