@@ -51,6 +51,8 @@ export default defineConfig({
       // custom renditions one caller may have drawn per minute. The pixel caps are constants in kinds.ts.
       RENDITION_CUSTOM_LIMIT: envField.number({ context: 'server', access: 'secret', default: 40 }),
       RENDITION_RATE_LIMIT: envField.number({ context: 'server', access: 'secret', default: 30 }),
+      // Mock-ups (src/lib/mockups): new (uncached) drawings one member may ask the draft route for per minute.
+      MOCKUP_RATE_LIMIT: envField.number({ context: 'server', access: 'secret', default: 20 }),
       // E-mail (src/lib/mail): an SMTP relay; without SMTP_HOST nothing is sent. MAIL_CAPTURE_DIR is set only
       // when the local fake server keeps the messages, and turns on the sent-mail page.
       SMTP_HOST: envField.string({ context: 'server', access: 'secret', optional: true }),

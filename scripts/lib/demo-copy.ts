@@ -29,8 +29,8 @@ export interface DemoShelfPhoto {
   verdict: 'do' | 'dont';
 }
 
-/** The brand-book starter, filled with Larchmere's own copy and photographs; without photographs the imagery block is left out. */
-export function withDemoCopy(doc: { type: 'doc'; content: Node[] }, photos: DemoShelfPhoto[] = []): { type: 'doc'; content: Node[] } {
+/** The brand-book starter, filled with Larchmere's own copy, photographs and shelf pattern; without photographs the imagery block is left out. */
+export function withDemoCopy(doc: { type: 'doc'; content: Node[] }, photos: DemoShelfPhoto[] = [], patternId: string | null = null): { type: 'doc'; content: Node[] } {
   const content: Node[] = [];
   for (const node of doc.content) {
     const text = firstText(node);
@@ -42,6 +42,12 @@ export function withDemoCopy(doc: { type: 'doc'; content: Node[] }, photos: Demo
       if (photos.length === 0) continue;
       const items = photos.map((p) => ({ src: p.id, alt: '', verdict: p.verdict, caption: '' }));
       content.push({ ...node, attrs: { ...node.attrs, items, columns: 3, aspect: '4:3' } });
+    }
+    // The pattern block links the shelf pattern; the mock-ups carry the photographs a designer would approve.
+    else if (node.type === 'pattern' && patternId) content.push({ ...node, attrs: { ...node.attrs, patternId, height: 200 } });
+    else if (node.type === 'applications') {
+      const chosen = photos.filter((p) => p.verdict === 'do').slice(0, 4).map((p) => p.id);
+      content.push({ ...node, attrs: { ...node.attrs, photoIds: chosen } });
     }
     else if (node.type === 'typography') content.push({ ...node, attrs: { ...node.attrs, specimenText: SPECIMEN } });
     else content.push(node);

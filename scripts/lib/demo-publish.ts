@@ -78,6 +78,21 @@ async function stockPhotos(siteUrl: string, cookie: string, brandId: string): Pr
   }
 }
 
+/** The demo's shelf pattern, drawn by the generator from the tree mark (Roast on Crema, columns dropped by half) and approved. */
+async function stockPattern(siteUrl: string, cookie: string, brandId: string): Promise<string | null> {
+  const base = `/api/brands/${brandId}`;
+  const { assets } = await call(siteUrl, cookie, 'GET', `${base}/assets?kind=pattern&state=approved`);
+  if (assets.length) return assets[0].id;
+  const { identity } = await call(siteUrl, cookie, 'GET', `${base}/identity`);
+  const mark = (identity.logos as { id: string; variant: string }[]).find((l) => l.variant === 'mark');
+  const colour = (name: string) => (identity.colors as { id: string; name: string }[]).find((c) => c.name === name)?.id ?? null;
+  if (!mark) return null;
+  const settings = { logoId: mark.id, layout: 'half-drop', scale: 28, spacing: 1, rotation: 0, seed: 1, groundColorId: colour('Crema'), inkColorId: colour('Roast'), opacity: 1 };
+  const { asset } = await call(siteUrl, cookie, 'POST', `${base}/patterns`, { settings, name: 'Larch pattern, half-drop' });
+  await call(siteUrl, cookie, 'PATCH', `${base}/assets/${asset.id}`, { state: 'approved', tags: ['pattern'], usageNotes: 'Behind content on packaging, stationery bands and signs; never under body text.' });
+  return asset.id;
+}
+
 /** The approved demo photographs on the shelf, in the order the imagery block shows them. */
 async function shelfPhotos(siteUrl: string, cookie: string, brandId: string): Promise<DemoShelfPhoto[]> {
   const { assets } = await call(siteUrl, cookie, 'GET', `/api/brands/${brandId}/assets?kind=photo&state=approved`);
@@ -101,7 +116,8 @@ export async function publishDemo(siteUrl: string, dataDir: string): Promise<str
     const draft = await call(siteUrl, cookie, 'GET', `${base}/guideline`);
     if (draft.doc.content.length === 0) {
       const started = await call(siteUrl, cookie, 'POST', `${base}/guideline/template`, { template: 'brand-book', baseRevision: draft.revision });
-      await call(siteUrl, cookie, 'PUT', `${base}/guideline`, { baseRevision: started.revision, doc: withDemoCopy(started.doc, await shelfPhotos(siteUrl, cookie, brand.id)) });
+      const patternId = await stockPattern(siteUrl, cookie, brand.id);
+      await call(siteUrl, cookie, 'PUT', `${base}/guideline`, { baseRevision: started.revision, doc: withDemoCopy(started.doc, await shelfPhotos(siteUrl, cookie, brand.id), patternId) });
     }
     await call(siteUrl, cookie, 'POST', `${base}/versions`, { note: 'First edition of the Larchmere guidelines: logo, colour, type and imagery.' });
   }

@@ -18,7 +18,10 @@ import { thinnestStroke } from '@/lib/logo/stroke.server';
 import { fontFaceCss } from '@/lib/guideline/identity';
 import { composeMockup, requireLayout, type MockupLayout } from '@/lib/mockups/compose';
 import { mockupTemplate } from '@/lib/mockups/templates';
-import { mockupPdf, mockupPng } from '@/lib/mockups/render.server';
+import { FIT_FLOOR, fitText, mockupPdf, mockupPng } from '@/lib/mockups/render.server';
+import { printBrowser, releaseBrowser } from '@/lib/logo/print-files.server';
+import { mockupPattern } from '@/lib/mockups/pattern';
+import { patternTile } from '@/lib/pattern/pattern.server';
 
 const fixture = JSON.parse(readFileSync('tests/fixtures/identity-larchmere.json', 'utf8')) as Identity;
 // MOCKUP_OUT keeps the files for a person to look at; otherwise a fresh temporary folder.
@@ -160,13 +163,111 @@ describe('screen PNGs', () => {
     expect([meta.width, meta.height]).toEqual([width, height]);
   }, 60_000);
 
-  test('a print piece shows its pages side by side at about 2 px per CSS px', async () => {
+  test('a print piece shows its pages side by side at about 2 px per CSS px, with no transparent hairline at its edges', async () => {
     const png = await mockupPng(layoutOf('business-card'), fontCss);
     writeFileSync(join(out, 'business-card.png'), png);
     const meta = await sharp(png).metadata();
+    const { data, info } = await sharp(png).raw().toBuffer({ resolveWithObject: true });
+    // Alpha of the last column and the last row of the back card (its primary ground runs to every edge).
+    const alpha = (x: number, y: number) => data[(y * info.width + x) * info.channels + 3];
+    expect(alpha(info.width - 1, 10)).toBe(255);
+    expect(alpha(info.width - 10, info.height - 1)).toBe(255);
     const cardPx = (85 / 25.4) * 96;
     // Two cards and a gap of 6 % of a card's width, at 2 device px per CSS px (96 CSS px = 1 in).
-    expect(meta.width).toBe(2 * Math.ceil(2 * cardPx + Math.round(cardPx * 0.06)));
-    expect(meta.height).toBe(2 * Math.ceil((55 / 25.4) * 96));
+    expect(meta.width).toBe(2 * Math.floor(2 * cardPx + Math.round(cardPx * 0.06)));
+    expect(meta.height).toBe(2 * Math.floor((55 / 25.4) * 96));
+  }, 60_000);
+});
+
+describe('the pattern is the mark (the generator’s tile, against librsvg’s own drawing of it through sharp)', () => {
+  let tileInk: number;
+  let layout: MockupLayout;
+  let ink: [number, number, number];
+  let ground: [number, number, number];
+  const rgb = (hex: string): [number, number, number] => [1, 3, 5].map((i) => parseInt(hex.slice(i, i + 2), 16)) as [number, number, number];
+  /** Share of pixels nearer the ink than the ground in a region of raw RGB(A) pixels. */
+  const inkShare = (data: Buffer, channels: number, width: number, region: { x0: number; y0: number; x1: number; y1: number }) => {
+    let inked = 0;
+    let all = 0;
+    for (let y = region.y0; y < region.y1; y++) {
+      for (let x = region.x0; x < region.x1; x++) {
+        const i = (y * width + x) * channels;
+        const d = (c: [number, number, number]) => Math.abs(data[i] - c[0]) + Math.abs(data[i + 1] - c[1]) + Math.abs(data[i + 2] - c[2]);
+        if (d(ink) < d(ground)) inked++;
+        all++;
+      }
+    }
+    return inked / all;
+  };
+
+  beforeAll(async () => {
+    const pattern = mockupPattern(identity);
+    const markFile = { bytes: Buffer.from(toSanitizedSvg(readFileSync('db/seeders/files/larchmere-mark.svg', 'utf8')).svg), format: 'svg' as const };
+    const tile = await patternTile(identity, pattern.settings!, { readMark: async () => markFile });
+    ink = rgb(tile.colours.ink.hex);
+    ground = rgb(tile.colours.ground.hex);
+    // librsvg (through sharp) draws the same tile: its ink share is what the piece must show.
+    const drawn = await sharp(Buffer.from(tile.svg), { density: 72 * 4 }).removeAlpha().raw().toBuffer({ resolveWithObject: true });
+    tileInk = inkShare(drawn.data, drawn.info.channels, drawn.info.width, { x0: 0, y0: 0, x1: drawn.info.width, y1: drawn.info.height });
+    const fill = { kind: 'tile' as const, href: dataUri(Buffer.from(tile.svg), 'image/svg+xml'), width: tile.width, height: tile.height };
+    layout = requireLayout(composeMockup(mockupTemplate('business-card')!, identity, { logo: (l, f) => l.files[f] ?? l.files.original, photos: [], pattern: () => fill }));
+  }, 60_000);
+
+  test('the tile itself is the mark on its ground: neither empty nor a flat field', () => {
+    expect(tileInk).toBeGreaterThan(0.05);
+    expect(tileInk).toBeLessThan(0.6);
+  });
+
+  test('the card’s pattern column on screen shows the mark at the tile’s share of ink (Chromium against librsvg)', async () => {
+    const png = await mockupPng(layout, fontCss);
+    writeFileSync(join(out, 'business-card-pattern.png'), png);
+    const { data, info } = await sharp(png).raw().toBuffer({ resolveWithObject: true });
+    // The column [62, 0, 23, 55] mm at 2 device px per CSS px (96 CSS px = 1 in), 1 mm in from its edges.
+    const px = (mm: number) => Math.round((mm / 25.4) * 96 * 2);
+    const share = inkShare(data, info.channels, info.width, { x0: px(63), y0: px(1), x1: px(84), y1: px(54) });
+    expect(Math.abs(share - tileInk)).toBeLessThan(0.06);
+  }, 60_000);
+
+  test('the printed card keeps the pattern in its column and bleed (Ghostscript png16m at 300 dpi)', async () => {
+    const pdf = await mockupPdf(layout, fontCss);
+    writeFileSync(join(out, 'business-card-pattern.pdf'), pdf);
+    const dir = mkdtempSync(join(tmpdir(), 'plumbline-pattern-gs-'));
+    writeFileSync(join(dir, 'card.pdf'), pdf);
+    execFileSync('gs', ['-q', '-dSAFER', '-dBATCH', '-dNOPAUSE', '-sDEVICE=png16m', '-r300', '-dFirstPage=1', '-dLastPage=1', `-sOutputFile=${join(dir, 'front.png')}`, join(dir, 'card.pdf')]);
+    const { data, info } = await sharp(join(dir, 'front.png')).raw().toBuffer({ resolveWithObject: true });
+    const px = (mm: number) => Math.round((mm / 25.4) * 300);
+    // Page = trim + 3 mm bleed: the column runs from 65 mm to the page's right edge (94 mm), top to bottom.
+    const share = inkShare(data, info.channels, info.width, { x0: px(66), y0: px(4), x1: px(87), y1: px(57) });
+    expect(Math.abs(share - tileInk)).toBeLessThan(0.06);
+    const bleed = inkShare(data, info.channels, info.width, { x0: px(88.4), y0: px(0.2), x1: px(90.8), y1: px(60.8) });
+    expect(bleed).toBeGreaterThan(0);
+  }, 60_000);
+});
+
+describe('text a larger scale would clip (CSS Overflow 3: content taller than its box is clipped by overflow: hidden)', () => {
+  /** Three lines at line-height 1 in a box `height` px tall, fitted in Chromium; the size it ends at and whether it still overflows. */
+  async function fitted(height: number) {
+    const browser = await printBrowser();
+    const page = await browser.newPage();
+    try {
+      await page.setContent(`<svg xmlns="http://www.w3.org/2000/svg" width="200" height="200"><foreignObject width="200" height="${height}"><div xmlns="http://www.w3.org/1999/xhtml" style="margin:0;font-size:20px;line-height:1;white-space:pre-line;overflow:hidden;height:${height}px">One\nTwo\nThree</div></foreignObject></svg>`);
+      await page.evaluate(fitText, FIT_FLOOR);
+      return await page.$eval('foreignObject > div', (el) => ({ size: parseFloat((el as HTMLElement).style.fontSize), clipped: el.scrollHeight > el.clientHeight + 0.5 }));
+    } finally {
+      await page.close();
+      releaseBrowser();
+    }
+  }
+
+  test('is set smaller in 4 % steps until it fits: three 20 px lines in 45 px end at 72 % (3 × 14.4 = 43.2 px)', async () => {
+    expect(await fitted(45)).toEqual({ size: expect.closeTo(14.4, 6), clipped: false });
+  }, 60_000);
+
+  test('never below 70 % of its scale size: three 20 px lines in 30 px stay clipped at 72 %', async () => {
+    expect(await fitted(30)).toEqual({ size: expect.closeTo(14.4, 6), clipped: true });
+  }, 60_000);
+
+  test('text that fits is left at its size', async () => {
+    expect(await fitted(80)).toEqual({ size: 20, clipped: false });
   }, 60_000);
 });

@@ -6,6 +6,7 @@ import { composeMockup, type Composed, type MockupSources } from '@/lib/mockups/
 import { mockupTemplate, type MockupTemplate } from '@/lib/mockups/templates';
 import { pageSvg } from '@/lib/mockups/svg';
 import { photoAddresses } from '@/lib/mockups/photos';
+import { pagePatternFill } from '@/lib/mockups/pattern';
 import { mockupDownloadHref } from '@/lib/mockups/links';
 import { MOCKUP_PRINT_NOTE } from '@/lib/cautions';
 import { Caution, EmptyHint, Note, type BlockRenderProps } from '@/components/guideline/parts';
@@ -35,7 +36,11 @@ export function Render({ attrs, identity, mode, editing }: BlockRenderProps<Appl
   const templates = attrs.templates.flatMap((key) => mockupTemplate(key) ?? []);
   if (!templates.length) return editing ? <EmptyHint>Choose the mock-ups to show.</EmptyHint> : null;
   if (!identity.logos.length) return editing ? <EmptyHint>Add a logo on the identity screen; the mock-ups are built around it.</EmptyHint> : null;
-  const sources: MockupSources = { logo: (logo, file) => safeAssetUrl(logo.files[file] ?? logo.files.original), photos: photoAddresses(identity, attrs.photoIds) };
+  const sources: MockupSources = {
+    logo: (logo, file) => safeAssetUrl(logo.files[file] ?? logo.files.original),
+    photos: photoAddresses(identity, attrs.photoIds),
+    pattern: (pattern) => pagePatternFill(identity, pattern),
+  };
   return (
     <div className="grid gap-8">
       {templates.map((template) => {
@@ -50,7 +55,7 @@ export function Render({ attrs, identity, mode, editing }: BlockRenderProps<Appl
                     className="min-w-0 overflow-hidden rounded-sm shadow-[0_1px_4px_rgba(0,0,0,0.18)]"
                     style={{ flex: `1 1 ${Math.round(Math.min(28, Math.max(9, (composed.layout.trim.width / composed.layout.trim.height) * 14)))}rem`, maxWidth: template.pages.length > 1 ? undefined : '36rem' }}
                     // pageSvg escapes every value it writes; colours are parsed #rrggbb and addresses checked.
-                    dangerouslySetInnerHTML={{ __html: pageSvg(composed.layout, page, { width: '100%', label: `${template.name}, ${page.name}` }).replace('<svg ', '<svg style="display:block;height:auto" ') }}
+                    dangerouslySetInnerHTML={{ __html: pageSvg(composed.layout, page, { width: '100%', label: `${template.name}, ${page.name}`, idSuffix: attrs.id }).replace('<svg ', '<svg style="display:block;height:auto" ') }}
                   />
                 ))}
               </div>

@@ -1,6 +1,6 @@
 // A repeat of the brand mark drawn from the pattern generator's layout (the same tile the export and the shelf draw):
 // the one-colour knockout of the mark, tinted with the palette ink, so inner shapes stay open to the ground.
-import { blockPatternSettings, type PatternAttrs } from './definition';
+import { drawnPatternSettings, type PatternAttrs } from './definition';
 import { findLogo } from '@/lib/guideline/identity';
 import { safeAssetUrl } from '@/lib/guideline/links';
 import { patternColours } from '@/lib/pattern/colours';
@@ -9,7 +9,12 @@ import { svgNumber } from '@/lib/pattern/tile';
 import { EmptyHint, Missing, safeHex, type BlockRenderProps } from '@/components/guideline/parts';
 
 export function Render({ attrs, identity, editing, uid }: BlockRenderProps<PatternAttrs> & { uid: string }) {
-  const settings = blockPatternSettings(attrs);
+  const { settings, linked, missing } = drawnPatternSettings(attrs, identity);
+  if (missing) {
+    return editing ? (
+      <Missing what="pattern" detail="It is not approved on the shelf, or its mark or colours have left the identity: approve it again, or choose another." />
+    ) : null;
+  }
   if (!settings) return editing ? <EmptyHint>Choose the mark the pattern repeats.</EmptyHint> : null;
   const logo = findLogo(identity, settings.logoId);
   if (!logo) return <Missing what="logo" />;
@@ -53,6 +58,7 @@ export function Render({ attrs, identity, editing, uid }: BlockRenderProps<Patte
         <rect width="100%" height="100%" fill={ground} />
         <rect width="100%" height="100%" fill={`url(#${id})`} />
       </svg>
+      {linked ? <figcaption className="mt-2 text-sm text-ink-soft" data-shelf-pattern={linked.id}>{linked.name}</figcaption> : null}
       {chosen.ok ? null : <div className="mt-2"><Missing what="colour" detail="The pattern falls back to the brand's own colours." /></div>}
     </figure>
   );

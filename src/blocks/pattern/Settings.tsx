@@ -1,7 +1,8 @@
-// Settings of the pattern: the mark, its layout, size, gap, turn, seed, colours and strength; the tile's export and the shelf.
+// Settings of the pattern: a linked shelf pattern, or the block's own mark, layout, size, gap, turn, seed, colours and
+// strength with the tile's export and a way onto the shelf.
 import { useState } from 'react';
 import type { ReactNodeViewProps } from '@tiptap/react';
-import { attrsFromPatternSettings, blockPatternSettings, type PatternAttrs } from './definition';
+import { attrsFromPatternSettings, blockPatternSettings, drawnPatternSettings, type PatternAttrs } from './definition';
 import { BlockFrame } from '@/components/editor/blocks/BlockFrame';
 import { ColorSelect, LogoSelect, NumberInput, Select } from '@/components/editor/blocks/controls';
 import { useIdentity } from '@/components/editor/IdentityContext';
@@ -37,16 +38,15 @@ function TileExport({ brandId, settings }: { brandId: string; settings: PatternS
 interface ShelfPattern {
   id: string;
   name: string;
-  patternSettings: Record<string, unknown> | null;
 }
 
-/** Start from a pattern kept on the shelf: its settings are copied into the block, which draws them again. */
-function FromShelf({ brandId, onPick }: { brandId: string; onPick: (attrs: Partial<PatternAttrs>) => void }) {
+/** Link an approved shelf pattern: the block keeps its id and draws whatever that pattern is, so the two never drift apart. */
+function FromShelf({ brandId, onPick }: { brandId: string; onPick: (patternId: string) => void }) {
   const [list, setList] = useState<{ loading: boolean; patterns: ShelfPattern[] | null; problem: string | null }>({ loading: false, patterns: null, problem: null });
   const load = async () => {
     setList({ loading: true, patterns: null, problem: null });
     try {
-      const answer = await api<{ assets: ShelfPattern[] }>(`/api/brands/${encodeURIComponent(brandId)}/assets?kind=pattern`);
+      const answer = await api<{ assets: ShelfPattern[] }>(`/api/brands/${encodeURIComponent(brandId)}/assets?kind=pattern&state=approved`);
       setList({ loading: false, patterns: answer.assets, problem: null });
     } catch (err) {
       setList({ loading: false, patterns: null, problem: (err as Error).message });
@@ -55,23 +55,36 @@ function FromShelf({ brandId, onPick }: { brandId: string; onPick: (attrs: Parti
   if (!list.patterns) {
     return (
       <div className="sm:col-span-2 text-sm">
-        <button type="button" className="btn-quiet" disabled={list.loading} onClick={load}>{list.loading ? 'Loading…' : 'Start from a shelf pattern'}</button>
+        <button type="button" className="btn-quiet" disabled={list.loading} onClick={load}>{list.loading ? 'Loading…' : 'Link a shelf pattern'}</button>
         {list.problem ? <p role="alert" className="error-text">{list.problem}</p> : null}
       </div>
     );
   }
-  if (!list.patterns.length) return <p className="sm:col-span-2 hint">No patterns on the shelf yet: set this one up, then “Add to shelf”.</p>;
+  if (!list.patterns.length) return <p className="sm:col-span-2 hint">No approved patterns on the shelf yet: set this one up, “Add to shelf”, and approve it on the shelf.</p>;
   return (
     <Select<string>
       label="Shelf pattern"
       value=""
-      options={[{ value: '', label: 'Choose a saved pattern…' }, ...list.patterns.map((p) => ({ value: p.id, label: p.name }))]}
+      options={[{ value: '', label: 'Choose an approved pattern…' }, ...list.patterns.map((p) => ({ value: p.id, label: p.name }))]}
       onChange={(id) => {
-        const attrs = attrsFromPatternSettings(list.patterns?.find((p) => p.id === id)?.patternSettings);
-        if (attrs) onPick(attrs);
+        if (id) onPick(id);
       }}
-      hint="Copies its settings into this block."
+      hint="The block shows that pattern as the shelf keeps it."
     />
+  );
+}
+
+/** The block while it links a shelf pattern: its name, and a way back to settings of its own (starting from the pattern's). */
+function Linked({ linked, settings, onUnlink }: { linked: { name: string } | null; settings: PatternSettings | null; onUnlink: (attrs: Partial<PatternAttrs>) => void }) {
+  return (
+    <div className="sm:col-span-2 grid gap-2 text-sm" data-linked-pattern>
+      <p>
+        {linked ? <>Shows the shelf pattern <strong>{linked.name}</strong>; change it on the shelf or in its own block.</> : <span className="error-text">The linked shelf pattern cannot be drawn: it is not approved, or its mark or colours have left the identity.</span>}
+      </p>
+      <button type="button" className="btn-quiet justify-self-start" onClick={() => onUnlink({ patternId: null, ...(settings ? attrsFromPatternSettings(settings) : {}) })}>
+        Unlink and set it up here
+      </button>
+    </div>
   );
 }
 
@@ -79,6 +92,21 @@ export function Settings(props: ReactNodeViewProps) {
   const identity = useIdentity();
   const a = props.node.attrs as PatternAttrs;
   const set = (patch: Partial<PatternAttrs>) => props.updateAttributes(patch);
+  const drawn = drawnPatternSettings(a, identity);
+  if (a.patternId) {
+    return (
+      <BlockFrame
+        props={props}
+        startOpen={drawn.missing}
+        settings={
+          <div className="grid gap-4 sm:grid-cols-2">
+            <Linked linked={drawn.linked} settings={drawn.settings} onUnlink={set} />
+            <NumberInput label="Height" unit="px" value={a.height} min={80} max={600} step={10} onChange={(height) => set({ height })} />
+          </div>
+        }
+      />
+    );
+  }
   const settings = blockPatternSettings(a);
   return (
     <BlockFrame
@@ -103,7 +131,7 @@ export function Settings(props: ReactNodeViewProps) {
           ) : null}
           <NumberInput label="Strength" unit="opacity" value={a.opacity} min={0.05} max={1} step={0.01} onChange={(opacity) => set({ opacity })} />
           <NumberInput label="Height" unit="px" value={a.height} min={80} max={600} step={10} onChange={(height) => set({ height })} />
-          <FromShelf brandId={identity.brand.id} onPick={set} />
+          <FromShelf brandId={identity.brand.id} onPick={(patternId) => set({ patternId })} />
           {settings ? <TileExport brandId={identity.brand.id} settings={settings} /> : null}
         </div>
       }

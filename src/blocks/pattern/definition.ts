@@ -3,6 +3,8 @@ import * as z from 'zod';
 import { refIdSchema } from '@/lib/guideline/ids';
 import { PATTERN_LAYOUTS, patternSettingsSchema, PATTERN_LIMITS, type PatternSettings } from '@/lib/pattern/layout';
 import { defineBlock } from '@/blocks/define';
+import type { Identity, IdentityAsset } from '@/lib/identity/types';
+import { shelfPattern, shelfPatternSettings } from '@/lib/pattern/shelf';
 
 const num = (what: string, min: number, max: number, fallback: number) =>
   z.number({ error: `${what} must be a number.` }).min(min, { error: `${what} must be at least ${min}.` }).max(max, { error: `${what} must be at most ${max}.` }).default(fallback);
@@ -14,6 +16,8 @@ export const patternBlock = defineBlock({
   description: 'A seamless repeat of the brand mark: layout, size, spacing, turn and palette colours.',
   group: 'imagery',
   fields: {
+    /** A lasting link to an approved shelf pattern: while set, the block draws that pattern's own settings, not the ones below. */
+    patternId: refIdSchema('asset').nullable().default(null),
     logoId: refIdSchema('logo').nullable().default(null),
     /** How the marks repeat (the pattern generator's layouts). */
     layout: z.enum(PATTERN_LAYOUTS, { error: `layout must be one of ${PATTERN_LAYOUTS.join(', ')}.` }).default('brick'),
@@ -32,7 +36,7 @@ export const patternBlock = defineBlock({
     markColorId: refIdSchema('colour').nullable().default(null),
     height: num('height', 80, 600, 220),
   },
-  refs: { logoId: 'logo', backgroundColorId: 'colour', markColorId: 'colour' },
+  refs: { patternId: 'asset', logoId: 'logo', backgroundColorId: 'colour', markColorId: 'colour' },
   starter: { logoId: '$mark', backgroundColorId: '$background', markColorId: '$primary' },
   // Before layouts, a row shift of 0 drew a plain grid and any other shift rows across: keep what those drafts showed.
   fromStored: (attrs) => {
@@ -43,6 +47,17 @@ export const patternBlock = defineBlock({
 });
 export const patternSchema = patternBlock.schema;
 export type PatternAttrs = ReturnType<typeof patternSchema.parse>;
+
+/**
+ * What the block draws: the linked shelf pattern's settings while it links one (`missing` when that pattern is no longer
+ * approved on the shelf, or no longer draws with this identity), else its own settings.
+ */
+export function drawnPatternSettings(attrs: PatternAttrs, identity: Identity): { settings: PatternSettings | null; linked: IdentityAsset | null; missing: boolean } {
+  if (!attrs.patternId) return { settings: blockPatternSettings(attrs), linked: null, missing: false };
+  const linked = shelfPattern(identity, attrs.patternId) ?? null;
+  const settings = linked ? shelfPatternSettings(identity, linked.pattern) : null;
+  return { settings, linked, missing: !settings };
+}
 
 /** The generator's settings for this block (the same tile the export and the shelf draw), or null without a mark. */
 export function blockPatternSettings(attrs: PatternAttrs): PatternSettings | null {

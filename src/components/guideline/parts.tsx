@@ -17,6 +17,7 @@ const MISSING_TEXT = {
   colour: 'This colour was removed from the identity.',
   logo: 'This logo was removed from the identity.',
   typeface: 'No typeface has this role in the identity yet.',
+  pattern: 'The linked shelf pattern cannot be drawn.',
 } as const;
 
 /** A gentle stand-in where a block points at an identity item that no longer exists. */

@@ -530,7 +530,7 @@ export async function loadIdentity(brand: Brand): Promise<Identity> {
     BrandColor.findAll({ where: { brandId: brand.id }, order: [['position', 'ASC'], ['createdAt', 'ASC']] }),
     BrandLogo.findAll({ where: { brandId: brand.id }, order: [['position', 'ASC'], ['createdAt', 'ASC']] }),
     BrandTypeface.findAll({ where: { brandId: brand.id }, order: [['createdAt', 'ASC']] }),
-    Asset.findAll({ where: { brandId: brand.id, state: 'approved' }, order: [['name', 'ASC']], attributes: ['id', 'name', 'kind', 'format', 'width', 'height', 'altText', 'caption', 'focusX', 'focusY'] }),
+    Asset.findAll({ where: { brandId: brand.id, state: 'approved' }, order: [['name', 'ASC']], attributes: ['id', 'name', 'kind', 'format', 'width', 'height', 'altText', 'caption', 'focusX', 'focusY', 'patternSettings'] }),
   ]);
   const settings: TypeScaleSettings = { ...DEFAULT_TYPE_SCALE, ...(brand.typeScale ?? {}) };
   const body = faces.find((f) => f.role === 'body') ?? faces[0];
@@ -554,6 +554,8 @@ export async function loadIdentity(brand: Brand): Promise<Identity> {
       ...(a.kind === 'photo'
         ? { width: a.width, height: a.height, alt: a.altText, caption: a.caption, focus: a.focusX != null && a.focusY != null ? { x: a.focusX, y: a.focusY } : null }
         : {}),
+      // Patterns carry the settings they were drawn from, so the pattern block and the mock-ups draw the same tile again.
+      ...(a.kind === 'pattern' ? { pattern: a.patternSettings ?? null } : {}),
     })),
     colors: await Promise.all(colors.map(colorView)),
     logos: logos.map(logoView),

@@ -141,6 +141,8 @@ export interface IdentityAsset {
   focus?: { x: number; y: number } | null;
   /** In a published version: the address of the version's own copy, which answers ?w=&aspect= with a cropped rendition. */
   renditions?: string;
+  /** Shelf patterns: the generator's settings the tile was drawn from (read through `patternSettingsSchema`). */
+  pattern?: Record<string, unknown> | null;
 }
 
 export interface Identity {

@@ -6,12 +6,14 @@ import { ptToMm, pxToPt } from '@/lib/type/units';
 import { AppError } from '@/lib/errors';
 import { boxUnit, trimSize, type LogoElement, type MockupElement, type MockupTemplate, type TextElement } from './templates';
 import { isDarkGround, readableOn, roleHex, tint } from './colour';
-import { mockupPattern } from './pattern';
+import { mockupPattern, type MockupPattern, type PatternFill } from './pattern';
 
 export type LogoFile = 'original' | 'white' | 'onDark';
 
 export type PlacedItem =
-  | { kind: 'fill'; role: 'panel' | 'pattern' | 'photo-stand-in'; box: Box; hex: string }
+  | { kind: 'fill'; role: 'panel' | 'photo-stand-in'; box: Box; hex: string }
+  /** The brand's pattern over its ground; `unitsPerPx` turns the tile's CSS px into template units. */
+  | { kind: 'pattern'; box: Box; hex: string; fill: PatternFill | null; unitsPerPx: number }
   | { kind: 'photo'; box: Box; href: string }
   | { kind: 'text'; box: Box; text: string; fontFamily: string; fontSize: number; lineHeight: number; weight: number; hex: string; align: TextElement['align'] }
   | {
@@ -56,6 +58,8 @@ export interface MockupSources {
   logo(logo: IdentityLogo, file: LogoFile): string | null;
   /** The brand's photographs, in the order templates number them. */
   photos: readonly string[];
+  /** The pattern's drawing (the generator's tile on the server, the mark's file on the page); none = the plain ground. */
+  pattern?: (pattern: MockupPattern) => PatternFill | null;
 }
 
 export type Composed = { ok: true; layout: MockupLayout } | { ok: false; refusals: MockupRefusal[] };
@@ -173,6 +177,10 @@ export function composeMockup(template: MockupTemplate, identity: Identity, sour
   const trim = trimSize(template);
   const page = { x: 0, y: 0, ...trim };
   const pattern = mockupPattern(identity);
+  const fill = sources.pattern?.(pattern) ?? null;
+  // CSS px (the pattern's unit) in template units: 25.4 / 96 mm on paper (CSS Values 4), the image density on screens;
+  // times the piece's own pattern scale (a sign is read from across the street).
+  const unitsPerPx = (unit === 'mm' ? 25.4 / 96 : template.density) * template.patternScale;
   const refusals: MockupRefusal[] = [];
   const pages: PlacedPage[] = [];
   for (const spec of template.pages) {
@@ -181,7 +189,7 @@ export function composeMockup(template: MockupTemplate, identity: Identity, sour
     for (const element of spec.elements as MockupElement[]) {
       const box = asBox(element.box);
       if (element.type === 'panel') items.push({ kind: 'fill', role: 'panel', box, hex: roleHex(identity, element.fill) });
-      else if (element.type === 'pattern') items.push({ kind: 'fill', role: 'pattern', box, hex: pattern.hex });
+      else if (element.type === 'pattern') items.push({ kind: 'pattern', box, hex: pattern.hex, fill, unitsPerPx });
       else if (element.type === 'photo') {
         const href = sources.photos.length ? sources.photos[element.index % sources.photos.length] : null;
         // No photographs chosen yet: a panel tinted with the brand's secondary colour holds the place.

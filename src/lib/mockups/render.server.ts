@@ -16,6 +16,17 @@ const PNG_MAX_SIDE = 3600;
 const shell = (fontCss: string, pageCss: string, body: string) =>
   `<!doctype html><html><head><meta charset="utf-8"><style>${fontCss}\n${pageCss}</style></head><body>${body}</body></html>`;
 
+/** Smallest share of its scale size a text may be set at to fit its box. */
+export const FIT_FLOOR = 0.7;
+
+/** Text that a brand's larger type scale would clip is set smaller, in small steps down to FIT_FLOOR, so nothing is cut off. */
+export function fitText(floor: number): void {
+  for (const el of Array.from(document.querySelectorAll<HTMLElement>('foreignObject > div'))) {
+    const size = parseFloat(el.style.fontSize);
+    for (let scale = 0.96; el.scrollHeight > el.clientHeight + 0.5 && scale >= floor; scale -= 0.04) el.style.fontSize = `${size * scale}px`;
+  }
+}
+
 /** Loads our own HTML into a fresh page; only data: addresses load (the sources are embedded), fonts settle before drawing. */
 async function withPage<T>(html: string, viewport: { width: number; height: number; deviceScaleFactor: number } | null, work: (page: Page) => Promise<T>): Promise<T> {
   let browser;
@@ -31,6 +42,7 @@ async function withPage<T>(html: string, viewport: { width: number; height: numb
     if (viewport) await page.setViewport(viewport);
     await page.setContent(html, { waitUntil: 'load', timeout: 30_000 });
     await page.evaluate(() => document.fonts.ready.then(() => undefined));
+    await page.evaluate(fitText, FIT_FLOOR);
     return await work(page);
   } finally {
     await page.close().catch(() => {});
@@ -44,7 +56,8 @@ export async function mockupPng(layout: MockupLayout, fontCss = ''): Promise<Buf
   const w = layout.trim.width * cssPerUnit;
   const h = layout.trim.height * cssPerUnit;
   const gap = layout.pages.length > 1 ? Math.round(w * 0.06) : 0;
-  const total = { width: Math.ceil(w * layout.pages.length + gap * (layout.pages.length - 1)), height: Math.ceil(h) };
+  // Whole CSS px, rounded down: the last fraction of a pixel of the ground is cut rather than left as a transparent hairline.
+  const total = { width: Math.floor(w * layout.pages.length + gap * (layout.pages.length - 1)), height: Math.floor(h) };
   // Screen pieces are drawn at their own pixels; paper at about 2 device px per CSS px, within the size cap.
   const scale = layout.unit === 'px' ? 1 : Math.min(2, PNG_MAX_SIDE / Math.max(total.width, total.height));
   const svgs = layout.pages.map((p, i) => pageSvg(layout, p, { width: `${w}px`, height: `${h}px`, label: `${layout.template.name}, ${p.name}` }).replace('<svg ', `<svg style="left:${i * (w + gap)}px" `));

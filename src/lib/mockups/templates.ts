@@ -48,6 +48,8 @@ export const mockupTemplateSchema = z.strictObject({
   densityNote: z.string().max(300).optional(),
   /** The brand's scale is set for screen; paper reads it at this fraction (body 12.75 pt × 0.8 ≈ 10 pt on a letter). */
   typeScaleFactor: z.number().positive().max(20).default(1),
+  /** The pattern is set for a page held in the hand; a piece read from further away draws it this many times larger. */
+  patternScale: z.number().positive().max(20).default(1),
   pages: z
     .array(z.strictObject({ name: z.string().min(1).max(40), ground: role, elements: z.array(element).max(40) }))
     .min(1)

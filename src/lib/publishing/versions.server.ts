@@ -12,6 +12,7 @@ import type { GuidelineDoc } from '@/lib/guideline/document';
 import { loadIdentity } from '@/lib/identity/identity.server';
 import { log } from '@/lib/log.server';
 import type { Identity, LightParts } from '@/lib/identity/types';
+import { mockupPattern } from '@/lib/mockups/pattern';
 import { notifyPublished } from '@/lib/notices/publish.server';
 import { isAssetRef } from '@/lib/safe/values';
 import { storage } from '@/lib/storage/index.server';
@@ -48,6 +49,11 @@ async function copyFiles(brand: Brand, identity: Identity, doc: GuidelineDoc): P
   const wanted = documentRefs(doc, 'image').filter((id) => isAssetRef(id) && approvedImages.has(id));
   const images = wanted.length ? await Asset.findAll({ where: { brandId: brand.id, id: wanted, state: 'approved', kind: ['image', 'photo'] }, attributes: ['id', 'storageKey', 'mime', 'format'] }) : [];
   for (const image of images) await copy(image.id, image.storageKey, image.format, image.mime);
+  // Shelf patterns the blocks link (declared asset references) and the one the mock-ups draw: their tiles travel with the version.
+  const approvedPatterns = new Set((identity.assets ?? []).filter((a) => a.kind === 'pattern').map((a) => a.id));
+  const patternIds = [...new Set([...documentRefs(doc, 'asset'), mockupPattern(identity).assetId ?? ''])].filter((id) => approvedPatterns.has(id));
+  const patterns = patternIds.length ? await Asset.findAll({ where: { brandId: brand.id, id: patternIds, state: 'approved', kind: 'pattern' }, attributes: ['id', 'storageKey', 'mime', 'format'] }) : [];
+  for (const pattern of patterns) await copy(pattern.id, pattern.storageKey, pattern.format, pattern.mime);
   const logos = await BrandLogo.findAll({ where: { brandId: brand.id }, attributes: ['id', 'storageKey', 'format', 'variantFiles'] });
   for (const logo of logos) {
     await copy(logo.id, logo.storageKey, logo.format, logoType(logo.format));

@@ -15,11 +15,11 @@ const query = z.strictObject({
     .pipe(z.array(z.uuid({ error: 'Expected photograph ids.' })).max(6, { error: 'At most 6 photographs.' })),
 });
 
-/** One mock-up of the brand's identity as a PNG (screen) or a PDF with bleed and crop marks (print pieces). */
+/** One mock-up of the brand's identity as a PNG (screen) or a PDF with bleed and crop marks (print pieces); new drawings count against the member's rate. */
 export const GET = endpoint(async ({ locals, params, url }) => {
-  const { brand } = await authorizeBrand(locals, idParam(params.id), 'draft.read');
+  const { caller, brand } = await authorizeBrand(locals, idParam(params.id), 'draft.read');
   const { format, logoId, photos } = parseWith(query, Object.fromEntries(url.searchParams), 'query');
-  const file = await brandMockup(brand, String(params.template ?? ''), format, { logoId, photoIds: photos });
+  const file = await brandMockup(brand, String(params.template ?? ''), format, { logoId, photoIds: photos }, caller.id);
   return new Response(new Uint8Array(file.body), {
     headers: { 'content-type': file.contentType, 'content-disposition': `attachment; filename="${file.filename}"`, 'cache-control': 'no-store' },
   });
