@@ -1,14 +1,8 @@
-// The reveal presentation of a published version: who may open it, and the version's document and identity it is
-// drawn from (a version never changes, so both are read once per version and kept).
+// The reveal presentation of a published version: who may open it, and the page its build drew.
 import type { APIContext } from 'astro';
-import type { GuidelineDoc } from '@/lib/guideline/document';
-import type { Identity } from '@/lib/identity/types';
-import { notSharedPage, siteAccess, type SiteAccess } from '@/lib/publishing/site-access.server';
-import { withVersionUrls } from '@/lib/publishing/snapshot-urls';
-import { versionSnapshot, type VersionRecord } from '@/lib/publishing/versions.server';
-
-const cache = new Map<string, { doc: GuidelineDoc; identity: Identity }>();
-const MAX_CACHED = 100;
+import { presentationPath } from '@/lib/publishing/build/contract';
+import { notSharedPage, notFoundPage, siteAccess, type SiteAccess } from '@/lib/publishing/site-access.server';
+import { sendVersionFile } from './built.server';
 
 /** The version a visitor may present at /b/:slug[/v/:n]/presentation, or the response to send instead. */
 export async function presentationAccess(context: Pick<APIContext, 'locals' | 'url' | 'redirect' | 'cookies'>, slug: string, number: number | null): Promise<SiteAccess | Response> {
@@ -17,14 +11,21 @@ export async function presentationAccess(context: Pick<APIContext, 'locals' | 'u
   return access.canPresent ? access : notSharedPage();
 }
 
-/** The version's document and its identity with file addresses inside the version. */
-export async function presentationMaterial(version: VersionRecord, slug: string): Promise<{ doc: GuidelineDoc; identity: Identity }> {
-  const key = `${version.id}:${slug}`;
-  const hit = cache.get(key);
-  if (hit) return hit;
-  const snapshot = await versionSnapshot(version);
-  const material = { doc: snapshot.doc, identity: withVersionUrls(snapshot.identity, slug, version.number, version.files ?? {}) };
-  if (cache.size >= MAX_CACHED) cache.delete(cache.keys().next().value!);
-  cache.set(key, material);
-  return material;
+// Nothing from elsewhere: every file the slides show is the version's own.
+const HEADERS = {
+  'cache-control': 'private, no-cache',
+  vary: 'Cookie',
+  'content-security-policy': "default-src 'self'; img-src 'self' data:; font-src 'self' data:; style-src 'self' 'unsafe-inline'; script-src 'self' 'unsafe-inline'; object-src 'none'; base-uri 'none'; form-action 'none'; frame-ancestors 'none'",
+};
+
+/**
+ * /b/:slug/presentation (number null: the current version, whose links lead to the current site) or
+ * /b/:slug/v/:n/presentation; `?print` is the form our PDF step prints.
+ */
+export async function presentationResponse(context: APIContext, number: number | null): Promise<Response> {
+  if (number !== null && (!Number.isInteger(number) || number < 1)) return notFoundPage();
+  const access = await presentationAccess(context, context.params.slug!, number);
+  if (access instanceof Response) return access;
+  const form = context.url.searchParams.has('print') ? 'print' : number === null ? 'current' : 'version';
+  return sendVersionFile(context.request, access, presentationPath(form), HEADERS, notFoundPage);
 }
