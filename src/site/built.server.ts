@@ -28,6 +28,12 @@ export const textAnswer = (status: number, message: string) =>
   new Response(message, { status, headers: { 'content-type': 'text/plain; charset=utf-8', 'cache-control': 'no-store', 'x-content-type-options': 'nosniff' } });
 
 /**
+ * What a file address answers when siteAccess refused: a renamed brand's old address still redirects (a built page
+ * keeps the slug it was built under), anything else is a plain 404 that says nothing about the site.
+ */
+export const fileRefusal = (refusal: Response) => (refusal.status === 301 ? refusal : textAnswer(404, 'Not found'));
+
+/**
  * Stream the stored file for manifest path `path` of the visitor's version, or the answer instead: the "being
  * prepared" page while it builds, `missing()` (a 404) for a path the version does not hold.
  */

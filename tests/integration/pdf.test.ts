@@ -219,7 +219,7 @@ describe('PDF export', () => {
     const latest = await fetchPdf(owner, `/b/${slug}/guideline.pdf?size=a4`);
     expect(latest.polls).toBe(0);
     expect(Buffer.from(latest.bytes).equals(Buffer.from(again.bytes))).toBe(true);
-    const rows = await sql(`SELECT size, state FROM pdf_exports e JOIN guideline_versions v ON v.id = e.version_id JOIN brands b ON b.id = v.brand_id WHERE b.slug = $1 ORDER BY size`, [slug]);
+    const rows = await sql(`SELECT size, e.state FROM pdf_exports e JOIN guideline_versions v ON v.id = e.version_id JOIN brands b ON b.id = v.brand_id WHERE b.slug = $1 ORDER BY size`, [slug]);
     expect(rows).toEqual([{ size: 'a4', state: 'done' }, { size: 'letter', state: 'done' }]);
   });
 

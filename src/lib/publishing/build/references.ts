@@ -94,6 +94,7 @@ export function htmlUrls(html: string): string[] {
  * address elsewhere (another site, another version, a data: URL, the page itself or a fragment of it).
  */
 export function insideVersion(url: string, documentPath: string, versionBase: string): { rest: string; search: string } | null {
+  if (url.startsWith('#')) return null; // a place on the same page
   const origin = 'http://site.invalid';
   let resolved: URL;
   try {

@@ -127,9 +127,16 @@ export const pagesStep: BuildStepDefinition = {
       // Every address under the version that a page or stylesheet refers to, made once.
       const failures: string[] = [];
       const made = new Set(ctx.writer.paths());
-      for (const [documentPath, document] of documents) {
-        const urls = document.kind === 'html' ? htmlUrls(document.text) : cssUrls(document.text);
-        for (const url of urls) {
+      // The identity's own file addresses count as referred to (every logo version, every font), so the live pages
+      // that show a version's identity (downloads, history) and readers following its addresses find them too.
+      const { identity } = material;
+      const declared = [...identity.logos.flatMap((l) => Object.values(l.files)), ...identity.typefaces.map((f) => f.fileUrl), ...(identity.assets ?? []).map((a) => a.url)];
+      const sources: [string, { at: string; urls: string[] }][] = [
+        ['the identity', { at: base, urls: declared.filter((u): u is string => typeof u === 'string' && u !== '') }],
+        ...[...documents].map(([path, d]) => [path, { at: d.at, urls: d.kind === 'html' ? htmlUrls(d.text) : cssUrls(d.text) }] as [string, { at: string; urls: string[] }]),
+      ];
+      for (const [documentPath, document] of sources) {
+        for (const url of document.urls) {
           if (new URL(url, `http://site.invalid${document.at}`).pathname.startsWith('/_astro/')) {
             failures.push(`${documentPath} refers to the app's own build (${url}), which a later release replaces`);
             continue;
@@ -150,7 +157,7 @@ export const pagesStep: BuildStepDefinition = {
       }
       if (failures.length) throw new Unmakeable(failures.slice(0, 5).join('; ') + (failures.length > 5 ? ` (and ${failures.length - 5} more)` : ''));
     } catch (err) {
-      if (err instanceof Unmakeable) throw new Error(`A page of this version refers to a file that cannot be made: ${err.message}.`, { cause: err });
+      if (err instanceof Unmakeable) throw new Error(`Not every file its pages need can be made: ${err.message}.`, { cause: err });
       throw err;
     }
   },

@@ -1,7 +1,7 @@
 import type { APIRoute } from 'astro';
 import { filePath } from '@/lib/publishing/build/contract';
 import { siteAccess } from '@/lib/publishing/site-access.server';
-import { sendVersionFile, textAnswer } from '@/site/built.server';
+import { fileRefusal, sendVersionFile, textAnswer } from '@/site/built.server';
 
 const FILE_HEADERS = {
   // A version's files never change; still private, since access is per viewer.
@@ -17,7 +17,7 @@ const FILE_HEADERS = {
  */
 export const GET: APIRoute = async (context) => {
   const access = await siteAccess(context, context.params.slug!, Number(context.params.number));
-  if (access instanceof Response) return textAnswer(404, 'Not found');
+  if (access instanceof Response) return fileRefusal(access);
   const path = filePath(`files/${context.params.fileId ?? ''}`, context.url.searchParams);
   return sendVersionFile(context.request, access, path, FILE_HEADERS, () => textAnswer(404, 'Not found'));
 };

@@ -1,12 +1,12 @@
 import type { APIRoute } from 'astro';
 import { filePath } from '@/lib/publishing/build/contract';
 import { siteAccess } from '@/lib/publishing/site-access.server';
-import { sendVersionFile, textAnswer } from '@/site/built.server';
+import { fileRefusal, sendVersionFile, textAnswer } from '@/site/built.server';
 
 /** A mock-up a published version shows, as PNG or (print pieces, ?format=pdf) PDF; for readers who may download. */
 export const GET: APIRoute = async (context) => {
   const access = await siteAccess(context, context.params.slug!, Number(context.params.number));
-  if (access instanceof Response) return textAnswer(404, 'Not found');
+  if (access instanceof Response) return fileRefusal(access);
   if (!access.canDownload) return textAnswer(403, 'This link does not allow downloads. Ask the brand’s team for a link that does.');
   const template = context.params.template ?? '';
   const format = context.url.searchParams.get('format') === 'pdf' ? 'pdf' : 'png';
