@@ -140,7 +140,7 @@ describe('serving the stored bytes', () => {
     const plainPage = await fetchBytes(plain, `/b/${slug}`);
     expect(plainPage.body.equals(await stored(pagePath({ latest: true, who: 'link', downloads: false })))).toBe(true);
     expect(plainPage.body.toString()).not.toContain(`/b/${slug}/downloads`);
-    const mockup = (await htmlUrls(plainPage.body.toString())).find((u) => u.includes('/mockups/'))!;
+    const mockup = htmlUrls(plainPage.body.toString()).find((u) => u.includes('/mockups/'))!;
     expect(mockup).toBeTruthy();
     expect((await fetchBytes(plain, mockup)).status).toBe(403);
     const allowed = await open(true);

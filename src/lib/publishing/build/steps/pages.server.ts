@@ -71,7 +71,7 @@ async function ownStylesheet(ctx: BuildContext, css: string): Promise<string> {
 }
 
 /** Make one address under the version that a page refers to, through the function its route used to call. */
-async function makeReferenced(ctx: BuildContext, version: GuidelineVersion, brand: Brand, rest: string, search: string): Promise<{ body: Buffer; type: string } | null> {
+async function makeReferenced(version: GuidelineVersion, brand: Brand, rest: string, search: string): Promise<{ body: Buffer; type: string } | null> {
   const query = new URLSearchParams(search);
   const [head, ...tail] = rest.split('/');
   if (head === 'files' && tail.length === 1) {
@@ -146,7 +146,7 @@ export const pagesStep: BuildStepDefinition = {
           const path = filePath(inside.rest, inside.search);
           if (made.has(path) || LATER_STEPS.has(inside.rest)) continue;
           made.add(path);
-          const file = await makeReferenced(ctx, version, brand, inside.rest, inside.search);
+          const file = await makeReferenced(version, brand, inside.rest, inside.search);
           if (!file) {
             failures.push(`${documentPath} refers to ${base}/${path}, which this version cannot make`);
             continue;
