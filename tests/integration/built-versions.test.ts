@@ -4,7 +4,7 @@
 // exact representation, so two servers sending the same bytes send the same ETag) and §15.4.5 (304 Not Modified on
 // a matching If-None-Match); RFC 9110 §10.2.3 (Retry-After on a 503); the HTML Living Standard for which attributes
 // load or link a resource (src, href, srcset) — every such address under the version must answer 200.
-import { readFile } from 'node:fs/promises';
+import { readFile, rm } from 'node:fs/promises';
 import { join } from 'node:path';
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
@@ -219,3 +219,30 @@ describe('versions over time', () => {
     expect((await fetchBytes(owner, hop.headers.get('location')!)).status).toBe(200);
   });
 });
+
+describe('a build that cannot make a file', () => {
+  test('fails with the file named, never turns ready, and the version answers a readable 503 instead of a page with a broken logo', async () => {
+    const created = (await owner.post('/api/brands', { name: 'Missing File Co' })).body.brand;
+    const own = (p: string) => `/api/brands/${created.id}${p}`;
+    const logo = (await owner.upload(own('/logos'), 'mark.svg', FIXTURE_SVG, 'image/svg+xml')).body.logo;
+    const { revision } = (await owner.get(own('/guideline'))).body;
+    const doc = { type: 'doc', content: [{ type: 'logoShowcase', attrs: { id: 'show', logoIds: [logo.id], brandColorId: null, onDark: 'white', caption: '' } }] };
+    expect((await owner.request('PUT', own('/guideline'), { baseRevision: revision, doc })).status).toBe(200);
+    // The logo's stored file goes missing between upload and publish (a disk fault, a half-finished restore).
+    const [row] = await sql('SELECT storage_key FROM brand_logos WHERE id = $1', [logo.id]);
+    await rm(join(inject('filesDir'), row.storage_key));
+    await owner.post(own('/versions'), { note: 'Broken' });
+    let version: { state: string; build_error: string | null; manifest: unknown } | undefined;
+    for (let i = 0; i < 100 && (!version || version.state === 'building'); i++) {
+      [version] = await sql('SELECT state, build_error, manifest FROM guideline_versions WHERE brand_id = $1 AND number = 1', [created.id]);
+      if (version?.state === 'building') await new Promise((r) => setTimeout(r, 200));
+    }
+    expect(version!.state).toBe('failed');
+    expect(version!.manifest).toBeNull();
+    expect(version!.build_error).toMatch(/logo "mark"/);
+    const page = await fetchBytes(owner, `/b/${created.slug}/v/1`);
+    expect(page.status).toBe(503);
+    expect(page.body.toString()).toContain('could not be prepared');
+  });
+});
+
