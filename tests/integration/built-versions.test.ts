@@ -232,9 +232,10 @@ describe('a build that cannot make a file', () => {
     const [row] = await sql('SELECT storage_key FROM brand_logos WHERE id = $1', [logo.id]);
     await rm(join(inject('filesDir'), row.storage_key));
     await owner.post(own('/versions'), { note: 'Broken' });
-    let version: { state: string; build_error: string | null; manifest: unknown } | undefined;
+    type Row = { state: string; build_error: string | null; manifest: unknown };
+    let version: Row | undefined;
     for (let i = 0; i < 100 && (!version || version.state === 'building'); i++) {
-      [version] = await sql('SELECT state, build_error, manifest FROM guideline_versions WHERE brand_id = $1 AND number = 1', [created.id]);
+      [version] = await sql<Row>('SELECT state, build_error, manifest FROM guideline_versions WHERE brand_id = $1 AND number = 1', [created.id]);
       if (version?.state === 'building') await new Promise((r) => setTimeout(r, 200));
     }
     expect(version!.state).toBe('failed');

@@ -137,7 +137,7 @@ export const pagesStep: BuildStepDefinition = {
       ];
       for (const [documentPath, document] of sources) {
         for (const url of document.urls) {
-          if (new URL(url, `http://site.invalid${document.at}`).pathname.startsWith('/_astro/')) {
+          if (URL.parse(url, `http://site.invalid${document.at}`)?.pathname.startsWith('/_astro/')) {
             failures.push(`${documentPath} refers to the app's own build (${url}), which a later release replaces`);
             continue;
           }
