@@ -145,8 +145,8 @@ describe('brand deletion leaves no stored file behind', () => {
     const filesDir = inject('filesDir');
     const before = walk(filesDir).filter((f) => f.startsWith(`${brandId}/`));
     const kinds = new Set(before.map((f) => f.split('/')[1]));
-    // Each kind of file a brand keeps was there to be deleted.
-    for (const kind of ['logo', 'asset', 'rendition', 'version', 'pdf']) expect([...kinds], kind).toContain(kind);
+    // Each kind of file a brand keeps was there to be deleted (a version's copies and pages live under build/).
+    for (const kind of ['logo', 'asset', 'rendition', 'build', 'pdf']) expect([...kinds], kind).toContain(kind);
 
     expect((await owner.delete(`/api/brands/${brandId}`)).status).toBe(204);
 

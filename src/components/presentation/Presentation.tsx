@@ -1,5 +1,5 @@
 // The reveal presentation's page body: every slide as a labelled region, and the bar that moves between them
-// (shown by deck.ts; without script the slides stand one under the other, which is also how they print).
+// (shown by deck.js; without script the slides stand one under the other, which is also how they print).
 import type { DeckSlide } from './slides';
 
 export interface PresentationProps {

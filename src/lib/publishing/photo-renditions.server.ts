@@ -1,5 +1,5 @@
 // Responsive renditions of a published version's photographs: its own copy, cut around the focal point the version
-// recorded, at one of the widths its page offers. Drawn once through the one rendition function and kept in the store.
+// recorded, at one of the widths its page offers. Drawn through the one rendition function when the version is built.
 import type { AssetFormat, RenditionParams } from '@/lib/assets/kinds';
 import { aspectFromParam, CENTRE, focalCrop, srcsetWidths } from '@/lib/assets/photo';
 import { cachedRendition, type Rendition } from '@/lib/assets/render.server';
@@ -7,17 +7,9 @@ import type { IdentityAsset } from '@/lib/identity/types';
 import { storage } from '@/lib/storage/index.server';
 import { versionSnapshot, type VersionRecord } from './versions.server';
 
-/** The photographs of recently asked versions, so a page's dozen requests read the snapshot once. */
-const photosOf = new Map<string, Map<string, IdentityAsset>>();
-
 async function versionPhotos(version: VersionRecord): Promise<Map<string, IdentityAsset>> {
-  const known = photosOf.get(version.id);
-  if (known) return known;
   const { identity } = await versionSnapshot(version);
-  const photos = new Map((identity.assets ?? []).filter((a) => a.kind === 'photo' && a.width && a.height).map((a) => [a.id, a]));
-  photosOf.set(version.id, photos);
-  if (photosOf.size > 100) photosOf.delete(photosOf.keys().next().value!);
-  return photos;
+  return new Map((identity.assets ?? []).filter((a) => a.kind === 'photo' && a.width && a.height).map((a) => [a.id, a]));
 }
 
 /**

@@ -1,24 +1,18 @@
 // Publishing: one transaction turns the draft and the identity into a numbered, dated, immutable version.
-import { readFile } from 'node:fs/promises';
 import { QueryTypes } from 'sequelize';
-import { join } from 'node:path';
-import { Asset, Brand, BrandLogo, BrandTypeface, GuidelineDraft, GuidelineVersion, type VersionFile } from '@db/models';
+import { Brand, GuidelineDraft, GuidelineVersion } from '@db/models';
 import { audit } from '@/lib/audit.server';
 import type { Caller } from '@/lib/auth/access.server';
 import { sequelize } from '@/lib/db.server';
 import { ApiError } from '@/lib/http/api';
-import { documentRefs, withStoredAttrs } from '@/blocks';
+import { withStoredAttrs } from '@/blocks';
 import type { GuidelineDoc } from '@/lib/guideline/document';
 import { loadIdentity } from '@/lib/identity/identity.server';
 import { log } from '@/lib/log.server';
 import type { Identity, LightParts } from '@/lib/identity/types';
-import { mockupPattern } from '@/lib/mockups/pattern';
 import { notifyPublished } from '@/lib/notices/publish.server';
-import { isAssetRef } from '@/lib/safe/values';
-import { storage } from '@/lib/storage/index.server';
-import { newKey } from '@/lib/storage/storage';
-import { shippedFont } from '@/lib/type/shipped-fonts';
 import { changeSummary, compareSnapshots, type Snapshot } from './diff';
+import { buildNow } from './build/build-now.server';
 import { siteCache } from './site-cache';
 
 export interface VersionView {
@@ -32,47 +26,6 @@ export interface VersionView {
 /** The key of a logo's own version file inside a version's files. */
 export const versionVariantFileId = (logoId: string, slot: string) => `${logoId}~${slot}`;
 
-/** Copy every file the identity refers to, so later edits or deletions cannot reach this version. */
-async function copyFiles(brand: Brand, identity: Identity, doc: GuidelineDoc): Promise<Record<string, VersionFile>> {
-  const files: Record<string, VersionFile> = {};
-  const copy = async (fileId: string, storageKey: string, format: string, contentType: string) => {
-    const bytes = await storage.get(storageKey);
-    if (!bytes) return;
-    const key = newKey(brand.id, 'version', format);
-    await storage.put(key, bytes, contentType);
-    files[fileId] = { key, contentType };
-  };
-  const logoType = (format: 'svg' | 'png') => (format === 'svg' ? 'image/svg+xml' : 'image/png');
-  // Blocks show approved images of the brand's own shelf only (their declared image references), copied like the logos;
-  // a name that is not yet an asset ("photo-to-come-1") has nothing to copy.
-  const approvedImages = new Set((identity.assets ?? []).filter((a) => a.kind === 'image' || a.kind === 'photo').map((a) => a.id));
-  const wanted = documentRefs(doc, 'image').filter((id) => isAssetRef(id) && approvedImages.has(id));
-  const images = wanted.length ? await Asset.findAll({ where: { brandId: brand.id, id: wanted, state: 'approved', kind: ['image', 'photo'] }, attributes: ['id', 'storageKey', 'mime', 'format'] }) : [];
-  for (const image of images) await copy(image.id, image.storageKey, image.format, image.mime);
-  // Shelf patterns the blocks link (declared asset references) and the one the mock-ups draw: their tiles travel with the version.
-  const approvedPatterns = new Set((identity.assets ?? []).filter((a) => a.kind === 'pattern').map((a) => a.id));
-  const patternIds = [...new Set([...documentRefs(doc, 'asset'), mockupPattern(identity).assetId ?? ''])].filter((id) => approvedPatterns.has(id));
-  const patterns = patternIds.length ? await Asset.findAll({ where: { brandId: brand.id, id: patternIds, state: 'approved', kind: 'pattern' }, attributes: ['id', 'storageKey', 'mime', 'format'] }) : [];
-  for (const pattern of patterns) await copy(pattern.id, pattern.storageKey, pattern.format, pattern.mime);
-  const logos = await BrandLogo.findAll({ where: { brandId: brand.id }, attributes: ['id', 'storageKey', 'format', 'variantFiles'] });
-  for (const logo of logos) {
-    await copy(logo.id, logo.storageKey, logo.format, logoType(logo.format));
-    // The designer's own version files travel with the version, under "<logo id>~<slot>".
-    for (const [slot, own] of Object.entries(logo.variantFiles ?? {})) if (own) await copy(versionVariantFileId(logo.id, slot), own.key, own.format, logoType(own.format));
-  }
-  const licensed = new Set(identity.typefaces.filter((f) => f.licence.confirmed).map((f) => f.id));
-  const faces = await BrandTypeface.findAll({ where: { brandId: brand.id } });
-  for (const face of faces) {
-    if (!licensed.has(face.id)) continue; // a font without a confirmed licence is never served
-    const bytes = face.source === 'shipped' ? await readFile(join(process.cwd(), shippedFont(face.shippedKey ?? '')!.file)) : face.storageKey ? await storage.get(face.storageKey) : null;
-    if (!bytes) continue;
-    const key = newKey(brand.id, 'version', face.format);
-    await storage.put(key, bytes, `font/${face.format}`);
-    files[face.id] = { key, contentType: `font/${face.format}` };
-  }
-  return files;
-}
-
 const emptyDraft = () => new ApiError(409, 'empty_draft', 'There is nothing to publish yet: add at least one block to the guidelines first.');
 
 /** Publish the current draft as the next version. */
@@ -81,35 +34,31 @@ export async function publishVersion(caller: Caller, brand: Brand, note: string)
   const current = await GuidelineDraft.findByPk(brand.id, { attributes: ['doc'] });
   if (!current || current.doc.content.length === 0) throw emptyDraft();
   const identity = await loadIdentity(brand);
-  const files = await copyFiles(brand, identity, current.doc as GuidelineDoc);
   let previous: GuidelineVersion | null = null;
-  let version: GuidelineVersion;
-  try {
-    version = await sequelize.transaction(async (t) => {
-      // One publisher at a time per brand, so numbers never collide.
-      await sequelize.query('SELECT pg_advisory_xact_lock(hashtext(:key))', { replacements: { key: `publish:${brand.id}` }, transaction: t });
-      const draft = await GuidelineDraft.findByPk(brand.id, { transaction: t });
-      if (!draft || draft.doc.content.length === 0) throw emptyDraft();
-      previous = await GuidelineVersion.findOne({ where: { brandId: brand.id }, order: [['number', 'DESC']], transaction: t });
-      const created = await GuidelineVersion.create(
-        {
-          brandId: brand.id,
-          number: (previous?.number ?? 0) + 1,
-          note,
-          draftRevision: draft.revision,
-          snapshot: { doc: withStoredAttrs(draft.doc as GuidelineDoc), identity },
-          files,
-          publishedById: caller.id,
-        },
-        { transaction: t },
-      );
-      await audit({ actorId: caller.id, action: 'version.publish', targetType: 'version', targetId: created.id, brandId: brand.id, studioId: brand.studioId, details: { number: created.number, note, draftRevision: draft.revision } }, t);
-      return created;
-    });
-  } catch (err) {
-    await Promise.all(Object.values(files).map((f) => storage.delete(f.key)));
-    throw err;
-  }
+  const version = await sequelize.transaction(async (t) => {
+    // One publisher at a time per brand, so numbers never collide.
+    await sequelize.query('SELECT pg_advisory_xact_lock(hashtext(:key))', { replacements: { key: `publish:${brand.id}` }, transaction: t });
+    const draft = await GuidelineDraft.findByPk(brand.id, { transaction: t });
+    if (!draft || draft.doc.content.length === 0) throw emptyDraft();
+    previous = await GuidelineVersion.findOne({ where: { brandId: brand.id }, order: [['number', 'DESC']], transaction: t });
+    const created = await GuidelineVersion.create(
+      {
+        brandId: brand.id,
+        number: (previous?.number ?? 0) + 1,
+        note,
+        draftRevision: draft.revision,
+        snapshot: { doc: withStoredAttrs(draft.doc as GuidelineDoc), identity },
+        // The build's "files" step copies them (build/steps/files.server.ts).
+        files: {},
+        publishedById: caller.id,
+      },
+      { transaction: t },
+    );
+    await audit({ actorId: caller.id, action: 'version.publish', targetType: 'version', targetId: created.id, brandId: brand.id, studioId: brand.studioId, details: { number: created.number, note, draftRevision: draft.revision } }, t);
+    return created;
+  });
+  // STAND-IN until the build job lands (h-build): build the version in this request.
+  await buildNow(version.id).catch((err) => log.error({ err }, 'publish: build failed'));
   siteCache.forget();
   const prev = previous as GuidelineVersion | null;
   const summary = prev ? changeSummary(compareSnapshots(prev.snapshot as Snapshot, version.snapshot as Snapshot)) : ['First published version'];
@@ -143,7 +92,7 @@ export async function listVersions(brand: Brand): Promise<VersionView[]> {
 }
 
 /** A version's columns without its snapshot: enough to check access and draw the page frame. */
-const LIGHT = ['id', 'brandId', 'number', 'note', 'draftRevision', 'files', 'publishedById', 'publishedAt'] as const;
+const LIGHT = ['id', 'brandId', 'number', 'note', 'draftRevision', 'files', 'publishedById', 'publishedAt', 'state', 'manifest'] as const;
 
 /** One version by number (latest when number is null), or null; the snapshot only when asked for. */
 export async function findVersion(brandId: string, number: number | null, opts: { snapshot?: boolean } = {}): Promise<GuidelineVersion | null> {
@@ -159,19 +108,10 @@ export async function versionSnapshot(version: GuidelineVersion): Promise<{ doc:
   return row!.snapshot as { doc: GuidelineDoc; identity: Identity };
 }
 
-/** Each recently asked version's logos and how their light parts print in one colour (a version never changes). */
-const lightPartsOf = new Map<string, Map<string, LightParts>>();
-
 /** How a version's logo prints its light parts in one colour: as the snapshot recorded, 'holes' for versions from before the setting. */
 export async function versionLogoLightParts(version: GuidelineVersion, logoId: string): Promise<LightParts> {
-  let logos = lightPartsOf.get(version.id);
-  if (!logos) {
-    const { identity } = await versionSnapshot(version);
-    logos = new Map(identity.logos.map((l) => [l.id, l.lightParts ?? 'holes']));
-    lightPartsOf.set(version.id, logos);
-    if (lightPartsOf.size > 100) lightPartsOf.delete(lightPartsOf.keys().next().value!);
-  }
-  return logos.get(logoId) ?? 'holes';
+  const { identity } = await versionSnapshot(version);
+  return identity.logos.find((l) => l.id === logoId)?.lightParts ?? 'holes';
 }
 
 /** The newest version number of a brand, or null. */

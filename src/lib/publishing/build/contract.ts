@@ -57,12 +57,25 @@ export const pagePath = (a: PageAudience) => `page/${a.latest ? 'latest' : 'olde
  * Manifest path of a file URL under the version ("/b/:slug/v/:n/<rest>"): the rest of the path plus its query
  * with parameters sorted, so `files/x?w=960&aspect=3:2` and `files/x?aspect=3:2&w=960` are one entry.
  */
-export function filePath(rest: string, search: URLSearchParams | string = ''): string {
+export function filePath(rest: string, search: URLSearchParams | string | Record<string, string> = ''): string {
   const params = new URLSearchParams(search);
   params.sort();
   const query = params.toString();
   return query ? `${rest}?${query}` : rest;
 }
+
+/** Manifest path of the print edition on one paper size: the address the PDF step prints (…/print?size=a4). */
+export const printPath = (size: 'a4' | 'letter') => filePath('print', { size });
+
+/**
+ * Manifest path of the reveal presentation: as reached through the version (…/v/:n/presentation), as the current
+ * version (/b/:slug/presentation, whose links point at the current site), or as printed (…/presentation?print).
+ */
+export const presentationPath = (form: 'version' | 'current' | 'print') =>
+  form === 'print' ? filePath('presentation', { print: '' }) : form === 'current' ? 'presentation/current.html' : 'presentation';
+
+/** Manifest paths of the version's own copies of the app's stylesheets and scripts (…/v/:n/static/<name>). */
+export const staticPath = (name: string) => `static/${name}`;
 
 /** A strong ETag from a stored file's hash. */
 export const entryEtag = (entry: Pick<ManifestEntry, 'hash'>) => `"${entry.hash.slice(0, 32)}"`;

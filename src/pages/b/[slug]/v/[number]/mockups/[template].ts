@@ -1,26 +1,17 @@
 import type { APIRoute } from 'astro';
-import { AppError } from '@/lib/errors';
-import { log } from '@/lib/log.server';
-import { versionMockup } from '@/lib/mockups/mockup.server';
+import { filePath } from '@/lib/publishing/build/contract';
 import { siteAccess } from '@/lib/publishing/site-access.server';
+import { fileRefusal, sendVersionFile, textAnswer } from '@/site/built.server';
 
-const text = (status: number, message: string) => new Response(message, { status, headers: { 'content-type': 'text/plain; charset=utf-8', 'cache-control': 'no-store' } });
-
-/** A mock-up a published version shows, as PNG or (print pieces) PDF; for readers who may download. */
+/** A mock-up a published version shows, as PNG or (print pieces, ?format=pdf) PDF; for readers who may download. */
 export const GET: APIRoute = async (context) => {
   const access = await siteAccess(context, context.params.slug!, Number(context.params.number));
-  if (access instanceof Response) return text(404, 'Not found');
-  if (!access.canDownload) return text(403, 'This link does not allow downloads. Ask the brand’s team for a link that does.');
+  if (access instanceof Response) return fileRefusal(access);
+  if (!access.canDownload) return textAnswer(403, 'This link does not allow downloads. Ask the brand’s team for a link that does.');
+  const template = context.params.template ?? '';
   const format = context.url.searchParams.get('format') === 'pdf' ? 'pdf' : 'png';
-  try {
-    const file = await versionMockup(access.brand, access.version, context.params.template ?? '', format);
-    return new Response(new Uint8Array(file.body), {
-      headers: { 'content-type': file.contentType, 'content-disposition': `attachment; filename="${file.filename}"`, 'cache-control': 'private, no-store', 'x-content-type-options': 'nosniff' },
-    });
-  } catch (err) {
-    if (err instanceof AppError && err.status < 500) return text(err.status, err.message);
-    if (err instanceof AppError && err.code === 'printer_unavailable') return text(503, err.message);
-    log.error({ err }, 'mockups: version file failed');
-    return text(500, 'The mock-up could not be drawn.');
-  }
+  // Only the version's own mock-ups are in its manifest, so the name in the file name is one of ours.
+  const filename = `${access.brand.slug}-v${access.version.number}-${template.replace(/[^a-z0-9-]/gi, '')}.${format}`;
+  const headers = { 'content-disposition': `attachment; filename="${filename}"`, 'cache-control': 'private, max-age=31536000, immutable', 'x-content-type-options': 'nosniff' };
+  return sendVersionFile(context.request, access, filePath(`mockups/${template}`, context.url.searchParams), headers, () => textAnswer(404, 'This version shows no such mock-up.'));
 };

@@ -1,5 +1,8 @@
 // The presentation in the browser: one slide at a time, moved by keys, buttons and swipes, announced to screen
-// readers. Without this script (or on paper) the slides simply stand one under the other.
+// readers. Without this script (or on paper) the slides simply stand one under the other. Plain JavaScript (types
+// in JSDoc, checked): each built version keeps its own copy of this file, served as it is.
+// @ts-check
+/* global document, history, location */
 
 const NEXT_KEYS = new Set(['ArrowRight', 'ArrowDown', 'PageDown', ' ']);
 const PREVIOUS_KEYS = new Set(['ArrowLeft', 'ArrowUp', 'PageUp']);
@@ -7,17 +10,22 @@ const PREVIOUS_KEYS = new Set(['ArrowLeft', 'ArrowUp', 'PageUp']);
 const SWIPE_MIN_PX = 48;
 
 /** Wire up the deck in `root`; returns the function that shows slide `n` (0-based). */
-export function startDeck(root: HTMLElement): (n: number) => void {
-  const slides = [...root.querySelectorAll<HTMLElement>('[data-slide]')];
-  const bar = document.querySelector<HTMLElement>('[data-deck-bar]');
-  const counter = document.querySelector<HTMLElement>('[data-deck-count]');
-  const live = document.querySelector<HTMLElement>('[data-deck-live]');
-  const previous = document.querySelector<HTMLButtonElement>('[data-deck-previous]');
-  const next = document.querySelector<HTMLButtonElement>('[data-deck-next]');
-  const full = document.querySelector<HTMLButtonElement>('[data-deck-full]');
+/**
+ * @param {HTMLElement} root
+ * @returns {(n: number) => void}
+ */
+export function startDeck(root) {
+  const slides = /** @type {HTMLElement[]} */ ([...root.querySelectorAll('[data-slide]')]);
+  const bar = /** @type {HTMLElement | null} */ (document.querySelector('[data-deck-bar]'));
+  const counter = /** @type {HTMLElement | null} */ (document.querySelector('[data-deck-count]'));
+  const live = /** @type {HTMLElement | null} */ (document.querySelector('[data-deck-live]'));
+  const previous = /** @type {HTMLButtonElement | null} */ (document.querySelector('[data-deck-previous]'));
+  const next = /** @type {HTMLButtonElement | null} */ (document.querySelector('[data-deck-next]'));
+  const full = /** @type {HTMLButtonElement | null} */ (document.querySelector('[data-deck-full]'));
   let current = -1;
 
-  const show = (wanted: number, announce = true) => {
+  /** @type {(wanted: number, announce?: boolean) => void} */
+  const show = (wanted, announce = true) => {
     const n = Math.max(0, Math.min(slides.length - 1, wanted));
     if (n === current) return;
     current = n;
@@ -39,14 +47,15 @@ export function startDeck(root: HTMLElement): (n: number) => void {
 
   document.addEventListener('keydown', (e) => {
     if (e.altKey || e.ctrlKey || e.metaKey) return;
-    const target = e.target as HTMLElement | null;
+    const target = /** @type {HTMLElement | null} */ (e.target);
     // Space and Enter on a focused button or link belong to that control.
     if ((e.key === ' ' || e.key === 'Enter') && target?.closest('button, a, input, select, textarea')) return;
     if (e.key === 'Escape') {
       if (document.fullscreenElement) void document.exitFullscreen();
       return;
     }
-    let to: number | null = null;
+    /** @type {number | null} */
+    let to = null;
     if (NEXT_KEYS.has(e.key)) to = e.key === ' ' && e.shiftKey ? current - 1 : current + 1;
     else if (PREVIOUS_KEYS.has(e.key)) to = current - 1;
     else if (e.key === 'Home') to = 0;
@@ -73,7 +82,8 @@ export function startDeck(root: HTMLElement): (n: number) => void {
     });
   }
 
-  let start: { x: number; y: number } | null = null;
+  /** @type {{ x: number; y: number } | null} */
+  let start = null;
   root.addEventListener('pointerdown', (e) => {
     if (e.pointerType !== 'mouse') start = { x: e.clientX, y: e.clientY };
   });
