@@ -6,6 +6,7 @@ import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
 import type { Sequelize } from 'sequelize';
 import { connect } from '@db/models';
 import { runAssetExpiry } from '@/lib/assets/expiry.server';
+import { Client } from '../support/client';
 import { closeDb, sql } from '../support/db';
 import { makeBrand, makeCast, type Cast, type Fixture } from './fixtures';
 
@@ -124,6 +125,29 @@ describe('hostile query strings are answered 400 with the JSON error shape', () 
     expect(past.body.error.code).toBe('expired');
     const [row] = await sql('SELECT rights, credit, expires_on::text AS expires_on, state FROM assets WHERE id = $1', [ids.A]);
     expect(row).toEqual({ rights: 'Owned outright by the client.', credit: null, expires_on: null, state: 'approved' });
+  });
+});
+
+describe('share-link visitors see rights beside the download', () => {
+  test('rights, credit and expiry are shown escaped, with the caution that the licence decides', async () => {
+    const owner = cast.clients.owner;
+    const hostile = 'Web only. <img src=x onerror=alert(1)> & "print" needs a new licence.';
+    expect((await owner.patch(`${shelf()}/${ids.E}`, { rights: hostile })).status).toBe(200);
+    expect((await owner.post(`/api/brands/${brand.brandId}/versions`, { note: 'With rights' })).status).toBe(201);
+    const { url } = (await owner.post(`/api/brands/${brand.brandId}/share-links`, { allowDownloads: true })).body.shareLink;
+    const visitor = new Client();
+    expect((await visitor.get(new URL(url).pathname)).status).toBe(303);
+    const slug = (await owner.get(`/api/brands/${brand.brandId}`)).body.brand.slug;
+    const page = await visitor.get(`/b/${slug}/downloads`);
+    expect(page.status).toBe(200);
+    const html = String(page.body);
+    const block = html.slice(html.indexOf(`data-asset-rights="${ids.E}"`), html.indexOf('</dl>', html.indexOf(`data-asset-rights="${ids.E}"`)));
+    // OWASP XSS Prevention, rule 1: text in HTML is entity-encoded.
+    expect(block).toContain('Web only. &lt;img src=x onerror=alert(1)&gt; &amp; &quot;print&quot; needs a new licence.');
+    expect(block).toContain('Studio archive');
+    expect(html).not.toContain('<img src=x');
+    expect(html).toContain('not legal advice');
+    expect(html).not.toContain('Dock photo'); // a draft never reaches the site
   });
 });
 

@@ -131,6 +131,18 @@ function Shelf(props: ShelfProps) {
             <h2 id="shelf-title" className="text-xl font-bold">On the shelf</h2>
             <p className="mt-1 text-sm text-ink-soft">{seesDrafts ? 'Drafts are seen by the studio and reviewers; only approved files reach partners and share links.' : 'Approved files of this brand, ready to download.'}</p>
           </div>
+          <fieldset>
+            <legend className="label">Preview on</legend>
+            <div className="flex gap-1" role="radiogroup">
+              {(['light', 'dark', 'brand'] as Backdrop[]).map((b) => (
+                <button key={b} type="button" role="radio" aria-checked={backdrop === b} onClick={() => setBackdrop(b)} className={`rounded-md border px-3 py-1.5 text-sm ${backdrop === b ? 'border-plumb bg-plumb-wash text-plumb-deep' : 'border-rule-strong bg-card text-ink-soft'}`}>
+                  {b === 'brand' ? (props.brandColors[0]?.name ?? 'Brand') : b === 'light' ? 'Light' : 'Dark'}
+                </button>
+              ))}
+            </div>
+          </fieldset>
+        </div>
+        <div className="flex flex-wrap items-end gap-4 border-b border-rule px-6 py-4" role="search" aria-label="Find and filter the shelf">
           <div>
             <label htmlFor="f-q" className="label">Find</label>
             <input id="f-q" type="search" className="field w-48 py-1.5 text-sm" value={words} onChange={(e) => setWords(e.target.value)} placeholder="Name, tag, rights, credit" maxLength={100} />
@@ -188,16 +200,6 @@ function Shelf(props: ShelfProps) {
             </div>
           </div>
           {params.toString() && <button type="button" className="btn-quiet px-3 py-1.5 text-sm" onClick={() => { setWords(''); setFilters(EMPTY_FILTERS); }}>Clear filters</button>}
-          <fieldset>
-            <legend className="label">Preview on</legend>
-            <div className="flex gap-1" role="radiogroup">
-              {(['light', 'dark', 'brand'] as Backdrop[]).map((b) => (
-                <button key={b} type="button" role="radio" aria-checked={backdrop === b} onClick={() => setBackdrop(b)} className={`rounded-md border px-3 py-1.5 text-sm ${backdrop === b ? 'border-plumb bg-plumb-wash text-plumb-deep' : 'border-rule-strong bg-card text-ink-soft'}`}>
-                  {b === 'brand' ? (props.brandColors[0]?.name ?? 'Brand') : b === 'light' ? 'Light' : 'Dark'}
-                </button>
-              ))}
-            </div>
-          </fieldset>
         </div>
 
         <div className="flex flex-wrap items-center gap-3 border-b border-rule px-6 py-3 text-sm">
