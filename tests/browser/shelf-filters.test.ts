@@ -8,10 +8,13 @@ import { launchOptions, settled } from '../support/browser';
 let browser: Browser;
 let owner: BrowserContext;
 let brandId: string;
+let client: Awaited<ReturnType<typeof signIn>>;
+const ids: Record<string, string> = {};
+const inDays = (n: number) => new Date(Date.now() + n * 86_400_000).toISOString().slice(0, 10);
 const svg = (fill: string) => `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 100 50"><rect x="10" y="10" width="80" height="30" fill="${fill}"/></svg>`;
 
 beforeAll(async () => {
-  const client = await signIn(DEMO_PEOPLE[0].email);
+  client = await signIn(DEMO_PEOPLE[0].email);
   const created = await client.post('/api/brands', { name: 'Shelf Address Brand' });
   brandId = created.body.brand.id;
   // Invented demo files: two marks with rights and expiry, one without.
@@ -19,10 +22,12 @@ beforeAll(async () => {
     ['harbour-navy.svg', '#1d2a44', { name: 'Harbour navy', rights: 'Owned outright by the client.', credit: 'Drawn by the studio', expiresOn: '2031-06-30', tags: ['primary'] }],
     ['harbour-white.svg', '#e9e4da', { name: 'Harbour white', tags: ['reverse'] }],
     ['crate.svg', '#c8553d', { name: 'Crate pattern' }],
+    ['quay.svg', '#2f6f8f', { name: 'Quay sign', credit: 'Lettering: the studio', rights: 'Licensed for signage in the home market; print runs need the type foundry’s print licence.', expiresOn: inDays(4), tags: ['signage'] }],
   ];
   for (const [file, fill, patch] of files) {
     const up = await client.upload(`/api/brands/${brandId}/assets`, file, svg(fill), 'image/svg+xml');
     expect(up.status).toBe(201);
+    ids[String(patch.name)] = up.body.assets[0].id;
     expect((await client.patch(`/api/brands/${brandId}/assets/${up.body.assets[0].id}`, patch)).status).toBe(200);
   }
   browser = await chromium.launch(launchOptions());
@@ -41,7 +46,7 @@ test('a filtered shelf keeps its filters in the address and reloads to the same 
   await page.setViewportSize({ width: 1440, height: 1000 });
   await page.goto(`${baseUrl()}/app/brands/${brandId}/assets`);
   await page.locator('ul[aria-label="Assets"]').waitFor();
-  expect(await names(page)).toEqual(['Crate pattern', 'Harbour navy', 'Harbour white']);
+  expect(await names(page)).toEqual(['Crate pattern', 'Harbour navy', 'Harbour white', 'Quay sign']);
 
   await page.locator('#f-q').fill('harbour');
   await page.locator('#f-rights').selectOption('with');
@@ -66,4 +71,31 @@ test('a filtered shelf keeps its filters in the address and reloads to the same 
   await shared.locator('ul[aria-label="Assets"]').waitFor();
   expect(await shared.locator('#f-expiry').inputValue()).toBe('none');
   expect(await names(shared)).toEqual(['Crate pattern', 'Harbour white']);
+});
+
+test('an asset expiring soon is flagged on the shelf, and its rights reach the published downloads with the caution', async () => {
+  const page = await owner.newPage();
+  await page.setViewportSize({ width: 1440, height: 1000 });
+  await page.goto(`${baseUrl()}/app/brands/${brandId}/assets?expiry=expiring&days=7`);
+  await page.locator('ul[aria-label="Assets"]').waitFor();
+  expect(await names(page)).toEqual(['Quay sign']);
+  await expect.poll(() => page.locator(`[data-asset-rights="${ids['Quay sign']}"]`).textContent()).toContain('· soon');
+  await page.getByText('Tags, usage notes, rights and expiry').first().click();
+  expect(await page.locator(`#expires-${ids['Quay sign']}`).inputValue()).toBe(inDays(4));
+  if (process.env.SHELF_SCREENSHOTS) await page.screenshot({ path: `${process.env.SHELF_SCREENSHOTS}/shelf-expiring.png`, fullPage: true });
+
+  for (const name of ['Harbour navy', 'Quay sign']) expect((await client.patch(`/api/brands/${brandId}/assets/${ids[name]}`, { state: 'approved' })).status).toBe(200);
+  await client.request('PUT', `/api/brands/${brandId}/guideline`, {
+    baseRevision: 0,
+    doc: { type: 'doc', content: [{ type: 'sectionHeading', attrs: { id: 'dl', title: 'Files', eyebrow: '', intro: '' } }, { type: 'downloads', attrs: { id: 'files', title: 'Files to download', assetIds: [], note: '' } }] },
+  });
+  expect((await client.post(`/api/brands/${brandId}/versions`, { note: 'With files' })).status).toBe(201);
+  const slug = (await client.get(`/api/brands/${brandId}`)).body.brand.slug;
+  const site = await owner.newPage();
+  await site.setViewportSize({ width: 1280, height: 900 });
+  await site.goto(`${baseUrl()}/b/${slug}/downloads`);
+  await site.locator(`[data-asset-rights="${ids['Quay sign']}"]`).waitFor();
+  expect(await site.locator(`[data-asset-rights="${ids['Quay sign']}"]`).textContent()).toContain('print runs need the type foundry’s print licence');
+  expect(await site.locator('[data-rights-caution]').textContent()).toContain('not legal advice');
+  if (process.env.SHELF_SCREENSHOTS) await site.screenshot({ path: `${process.env.SHELF_SCREENSHOTS}/downloads-rights.png`, fullPage: true });
 });
