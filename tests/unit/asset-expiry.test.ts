@@ -71,3 +71,19 @@ describe('the shelf query schema', () => {
     expect(assetPatchSchema.safeParse({ expiresOn: null }).success).toBe(true);
   });
 });
+
+describe('the expiry notice', () => {
+  // OWASP XSS Prevention, rule 1: values in HTML are entity-encoded; the text part keeps them as written.
+  test('says which notice it is, and escapes the names in HTML', async () => {
+    const { renderMail } = await import('@/lib/mail/templates');
+    const data = { siteUrl: 'https://plumbline.test', brandName: 'Quay & Co', assetName: 'Ferry <mark>', day: '10 March 2031', days: 7, link: 'https://plumbline.test/app/brands/b/assets?expiry=expired' };
+    const ahead = renderMail('asset-expiry', { ...data, ahead: true, due: false, retired: false });
+    expect(ahead.subject).toBe('Expires 10 March 2031: Ferry <mark> (Quay & Co)');
+    expect(ahead.html).toContain('Ferry &lt;mark&gt; expires on 10 March 2031');
+    expect(ahead.html).not.toContain('<mark>');
+    const due = renderMail('asset-expiry', { ...data, ahead: false, due: true, retired: true });
+    expect(due.subject).toBe('Expired 10 March 2031: Ferry <mark> (Quay & Co)');
+    expect(due.text).toContain('Plumbline has retired it');
+    expect(due.text).toContain('the licence itself decides');
+  });
+});
