@@ -213,6 +213,11 @@ describe('the expiry job on a fixed clock', () => {
     expect(notices).toEqual([{ notice: 'ahead', day: EXPIRES, recipients: 1 }, { notice: 'due', day: EXPIRES, recipients: 1 }]);
   });
 
+  test('the server schedules the job hourly with pg-boss and has run it once at start', async () => {
+    await expect.poll(async () => (await sql(`SELECT cron, timezone FROM pgboss.schedule WHERE name = 'asset-expiry'`)), { timeout: 20_000 }).toEqual([{ cron: '7 * * * *', timezone: 'UTC' }]);
+    await expect.poll(async () => (await sql(`SELECT count(*)::int AS n FROM pgboss.job WHERE name = 'asset-expiry' AND state = 'completed'`))[0].n, { timeout: 20_000 }).toBeGreaterThan(0);
+  });
+
   test('a retired asset is gone from the partner’s shelf and cannot be approved again until its date moves', async () => {
     expect((await cast.clients.partner.get(`${shelf()}/${ids.G}`)).status).toBe(404);
     // The real today is long before 2031, so moving it back to approved is allowed again: the check is against today.

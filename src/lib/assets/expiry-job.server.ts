@@ -29,9 +29,9 @@ export function startAssetExpiry(): Promise<void> {
     await boss.start();
     const { name, retryLimit, retryDelay, expireInSeconds } = assetExpiryJob;
     await boss.createQueue(name, { name, retryLimit, retryDelay, expireInSeconds });
-    await boss.work(name, { batchSize: 1, pollingIntervalSeconds: 30 }, () => assetExpiryJob.run());
+    await boss.work(name, { batchSize: 1, pollingIntervalSeconds: 5 }, () => assetExpiryJob.run());
     await boss.schedule(name, ASSET_EXPIRY_CRON, {}, { tz: 'UTC' });
-    await boss.send(name, {}, { singletonKey: 'start' , singletonSeconds: 60 });
+    await boss.send(name, {}, { singletonKey: 'start', singletonSeconds: 60 });
   })().catch((err) => {
     started = null;
     log.error({ err }, 'asset expiry: the job could not start');
