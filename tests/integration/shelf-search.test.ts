@@ -2,6 +2,7 @@
 // query strings refused with the JSON error shape, and the expiry job run on a fixed clock. Dates are ISO 8601 calendar
 // dates (YYYY-MM-DD, ISO 8601-1:2019 §5.2.2.1), counted in UTC.
 import sharp from 'sharp';
+import yauzl from 'yauzl';
 import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
 import type { Sequelize } from 'sequelize';
 import { connect } from '@db/models';
@@ -41,6 +42,24 @@ beforeAll(async () => {
   await put('E', { name: 'signage.png', bytes: await png(200), type: 'image/png' }, { name: 'Signage photo', tags: ['outdoor'], credit: 'Studio archive', expiresOn: shift(5), state: 'approved' });
 });
 afterAll(closeDb);
+
+/** The text of a zip's first entry. */
+function firstEntryText(zip: Buffer): Promise<string> {
+  return new Promise((resolve, reject) => {
+    yauzl.fromBuffer(zip, { lazyEntries: true }, (err, archive) => {
+      if (err || !archive) return reject(err);
+      archive.once('entry', (entry: yauzl.Entry) => {
+        archive.openReadStream(entry, (e, stream) => {
+          if (e || !stream) return reject(e);
+          const chunks: Buffer[] = [];
+          stream.on('data', (c: Buffer) => chunks.push(c));
+          stream.on('end', () => resolve(Buffer.concat(chunks).toString('utf8')));
+        });
+      });
+      archive.readEntry();
+    });
+  });
+}
 
 /** The labels of the assets a query returns, sorted. */
 async function found(query: string, who: 'owner' | 'partner' = 'owner'): Promise<string[]> {
@@ -148,6 +167,23 @@ describe('share-link visitors see rights beside the download', () => {
     expect(html).not.toContain('<img src=x');
     expect(html).toContain('not legal advice');
     expect(html).not.toContain('Dock photo'); // a draft never reaches the site
+  });
+
+  test('a bundle’s USAGE.txt lists rights and credits with the caution', async () => {
+    const res = await fetch(`${inject('baseUrl')}/api/brands/${brand.brandId}/bundles`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json', cookie: cast.clients.partner.cookieHeader(), origin: inject('baseUrl') },
+      body: JSON.stringify({ assetIds: [ids.E, ids.A] }),
+    });
+    expect(res.status).toBe(200);
+    const zip = Buffer.from(await res.arrayBuffer());
+    // USAGE.txt is the first entry, stored with deflate; read it with yauzl as the bundle tests do.
+    const usage = await firstEntryText(zip);
+    expect(usage).toContain('RIGHTS AND CREDITS');
+    expect(usage).toContain('Usage rights: Owned outright by the client.');
+    expect(usage).toContain('Credit: Studio archive');
+    expect(usage).toContain(`Expires on ${shift(5)}`);
+    expect(usage).toContain('not legal advice');
   });
 });
 

@@ -534,7 +534,11 @@ export async function bundle(reader: AssetReader, request: { assetIds?: string[]
   const note = Buffer.from(
     usageNote(
       identity,
-      plan.map((p) => ({ path: p.path, name: p.asset.name, notes: p.path.includes('/original/') ? p.asset.usageNotes : null })),
+      plan.map((p) => {
+        const original = p.path.includes('/original/');
+        const rights = original ? { rights: p.asset.rights ?? null, credit: p.asset.credit ?? null, expiresOn: p.asset.expiresOn ?? null } : null;
+        return { path: p.path, name: p.asset.name, notes: original ? p.asset.usageNotes : null, rights };
+      }),
       new Date(),
     ),
   );
