@@ -3,6 +3,7 @@
 import type { APIContext, MiddlewareNext } from 'astro';
 import { defineMiddleware } from 'astro:middleware';
 import { forgetSession, sessionFor } from './lib/auth/sessions.server';
+import { startAssetExpiry } from './lib/assets/expiry-job.server';
 import { startChangeNotices } from './lib/live/notices.server';
 import { log, requestIdFrom, serveLogged } from './lib/log.server';
 import { shareGrants } from './lib/publishing/grant-cache';
@@ -10,6 +11,8 @@ import { linkForToken, linkState, SHARE_COOKIE, tokenFromCookie } from './lib/pu
 
 // Sessions and share grants are kept in memory by change notices, which this process starts listening for now.
 startChangeNotices();
+// The shelf's expiry job: hourly, and once now (src/lib/assets/expiry-job.server.ts).
+void startAssetExpiry();
 /** Every session cookie the request carries, name and value: all that better-auth reads to find the session. */
 const sessionKey = (cookie: string) => [...cookie.matchAll(/(?:^|;)\s*([^=;\s]*session_token)=([^;]*)/g)].map((m) => `${m[1]}=${m[2]}`).join('; ') || null;
 

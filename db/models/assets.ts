@@ -30,6 +30,12 @@ export class Asset extends Model<InferAttributes<Asset>, InferCreationAttributes
   /** A photograph's focal point as fractions of its width and height; null is the centre. */
   declare focusX: CreationOptional<number | null>;
   declare focusY: CreationOptional<number | null>;
+  /** Usage rights or licence text: the studio's record of the licence, not the licence itself. */
+  declare rights: CreationOptional<string | null>;
+  /** The credit line to print beside the asset (photographer, agency, foundry). */
+  declare credit: CreationOptional<string | null>;
+  /** The calendar day (ISO 8601 date, UTC) the asset stops being usable; the expiry job retires it that day. */
+  declare expiresOn: CreationOptional<string | null>;
   declare uploadedById: string | null;
   declare stateChangedAt: Date | null;
   declare stateChangedById: string | null;
@@ -57,6 +63,15 @@ export class AssetDownload extends Model<InferAttributes<AssetDownload>, InferCr
   declare shareLinkId: string | null;
   declare details: Record<string, unknown>;
   declare createdAt: CreationOptional<Date>;
+}
+
+/** One expiry notice sent for an asset and the expiry date it was about ('ahead': days before; 'due': on the day). */
+export class AssetExpiryNotice extends Model<InferAttributes<AssetExpiryNotice>, InferCreationAttributes<AssetExpiryNotice>> {
+  declare assetId: string;
+  declare notice: 'ahead' | 'due';
+  declare expiresOn: string;
+  declare recipients: number;
+  declare sentAt: Date;
 }
 
 const id = { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true };
@@ -89,6 +104,9 @@ export function initAssetModels(sequelize: Sequelize): void {
       caption: { type: DataTypes.TEXT, allowNull: true },
       focusX: { type: DataTypes.DOUBLE, allowNull: true },
       focusY: { type: DataTypes.DOUBLE, allowNull: true },
+      rights: { type: DataTypes.TEXT, allowNull: true },
+      credit: { type: DataTypes.TEXT, allowNull: true },
+      expiresOn: { type: DataTypes.DATEONLY, allowNull: true },
       uploadedById: { type: DataTypes.TEXT, allowNull: true },
       stateChangedAt: { type: DataTypes.DATE, allowNull: true },
       stateChangedById: { type: DataTypes.TEXT, allowNull: true },
@@ -120,5 +138,15 @@ export function initAssetModels(sequelize: Sequelize): void {
       createdAt: DataTypes.DATE,
     },
     { ...common, tableName: 'asset_downloads', updatedAt: false },
+  );
+  AssetExpiryNotice.init(
+    {
+      assetId: { type: DataTypes.UUID, allowNull: false, primaryKey: true },
+      notice: { type: DataTypes.STRING(8), allowNull: false, primaryKey: true },
+      expiresOn: { type: DataTypes.DATEONLY, allowNull: false, primaryKey: true },
+      recipients: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+      sentAt: { type: DataTypes.DATE, allowNull: false },
+    },
+    { ...common, tableName: 'asset_expiry_notices', timestamps: false },
   );
 }

@@ -29,6 +29,8 @@ import { cachedRendition, renditionKey, type Rendition } from './render.server';
 import { checkRenditionSize, resolveRendition } from './renditions';
 import { usageNote } from './usage';
 import { ALT_TEXT_REQUIRED, type FocalPoint } from './photo';
+import { addDays, dayOf, EXPIRING_DEFAULT_DAYS, expiryStatus, type ExpiryStatus } from './expiry';
+import { searchWords, type AssetListQuery } from './schemas';
 
 export interface AssetView {
   id: string;
@@ -52,6 +54,11 @@ export interface AssetView {
   createdAt: string;
   updatedAt: string;
   stateChangedAt: string | null;
+  /** Usage rights or licence text (the studio's record), a credit line, the expiry day (ISO 8601 date) and where it stands today. */
+  rights: string | null;
+  credit: string | null;
+  expiresOn: string | null;
+  expiry: ExpiryStatus | null;
   /** Whether renditions (width, format, variants) can be asked for. */
   renderable: boolean;
   files: { original: string; preview: string | null };
@@ -85,6 +92,10 @@ export function assetView(row: Asset): AssetView {
     createdAt: row.createdAt.toISOString(),
     updatedAt: row.updatedAt.toISOString(),
     stateChangedAt: row.stateChangedAt?.toISOString() ?? null,
+    rights: row.rights ?? null,
+    credit: row.credit ?? null,
+    expiresOn: row.expiresOn ?? null,
+    expiry: expiryStatus(row.expiresOn ?? null, dayOf(new Date())),
     renderable,
     files: { original: file, preview: renderable ? `${file}?format=png&width=${PREVIEW_MAX_WIDTH}&preview=1` : null },
     patternSettings: row.patternSettings ?? null,
@@ -197,19 +208,35 @@ export async function uploadAssets(caller: Caller, brand: Brand, files: File[], 
 
 // ---------------------------------------------------------------- reading and editing
 
-export interface AssetFilters {
-  state?: AssetState;
-  tag?: string;
-  kind?: AssetKind;
-}
+export type AssetFilters = Partial<Omit<AssetListQuery, 'state' | 'kind'>> & { state?: AssetState; kind?: AssetKind };
 
-export async function listAssets(reader: AssetReader, filters: AssetFilters): Promise<AssetView[]> {
+/**
+ * The words a shelf search looks in, as one PostgreSQL text-search document ('simple' configuration: no stemming, so
+ * brand names and tags are matched as written, in any language): name, rights, credit and every tag.
+ */
+const SEARCH_DOCUMENT = `(to_tsvector('simple', coalesce("Asset"."name", '') || ' ' || coalesce("Asset"."rights", '') || ' ' || coalesce("Asset"."credit", '')) || jsonb_to_tsvector('simple', "Asset"."tags", '["string"]'))`;
+
+/** The shelf a reader may see, narrowed by the filters (all of them must hold); `today` is the calendar day expiry is judged on. */
+export async function listAssets(reader: AssetReader, filters: AssetFilters, today: string = dayOf(new Date())): Promise<AssetView[]> {
   const where: WhereOptions<Asset> & Record<string, unknown> = { brandId: reader.brand.id };
+  const and: unknown[] = [];
+  const replacements: Record<string, string> = {};
   if (reader.approvedOnly) where.state = 'approved';
   if (filters.state) where.state = reader.approvedOnly && filters.state !== 'approved' ? '__none__' : filters.state;
   if (filters.kind) where.kind = filters.kind;
-  if (filters.tag) where.tags = { [Op.contains]: [filters.tag] };
-  const rows = await Asset.findAll({ where, order: [['createdAt', 'DESC'], ['name', 'ASC']] });
+  if (filters.format) where.format = filters.format;
+  if (filters.tag) where.tags = { [Op.contains]: [filters.tag.trim().toLowerCase()] };
+  if (filters.rights) where.rights = filters.rights === 'with' ? { [Op.ne]: null } : { [Op.is]: null };
+  if (filters.expiry === 'none') where.expiresOn = { [Op.is]: null };
+  if (filters.expiry === 'expired') where.expiresOn = { [Op.lte]: today };
+  if (filters.expiry === 'expiring') where.expiresOn = { [Op.gt]: today, [Op.lte]: addDays(today, filters.days ?? EXPIRING_DEFAULT_DAYS) };
+  // Each word is letters and digits only and travels as a bound value; ':*' matches it as the start of a word.
+  searchWords(filters.q ?? '').forEach((word, i) => {
+    replacements[`w${i}`] = word;
+    and.push(sequelize.literal(`${SEARCH_DOCUMENT} @@ to_tsquery('simple', :w${i} || ':*')`));
+  });
+  if (and.length) Object.assign(where, { [Op.and]: and });
+  const rows = await Asset.findAll({ where, replacements, order: [['createdAt', 'DESC'], ['name', 'ASC']] });
   return rows.map(assetView);
 }
 
@@ -230,6 +257,9 @@ export interface AssetChanges {
   altText?: string | null;
   caption?: string | null;
   focus?: FocalPoint | null;
+  rights?: string | null;
+  credit?: string | null;
+  expiresOn?: string | null;
 }
 
 export async function updateAsset(caller: Caller, brand: Brand, assetId: string, body: AssetChanges): Promise<AssetView> {
@@ -255,13 +285,22 @@ export async function updateAsset(caller: Caller, brand: Brand, assetId: string,
   }
   if (body.altText !== undefined) changes.altText = body.altText || null;
   if (body.caption !== undefined) changes.caption = body.caption || null;
+  if (body.rights !== undefined) changes.rights = body.rights || null;
+  if (body.credit !== undefined) changes.credit = body.credit || null;
+  if (body.expiresOn !== undefined) changes.expiresOn = body.expiresOn || null;
   if (body.focus !== undefined) Object.assign(changes, { focusX: body.focus?.x ?? null, focusY: body.focus?.y ?? null });
   // WCAG 2.2 SC 1.1.1: an approved photograph always has a text alternative, so every page that shows it can say what it shows.
   const kindAfter = changes.kind ?? asset.kind;
   const stateAfter = changes.state ?? asset.state;
   const altAfter = changes.altText !== undefined ? changes.altText : asset.altText;
   if (kindAfter === 'photo' && stateAfter === 'approved' && !altAfter?.trim()) throw new ApiError(422, 'alt_text_required', ALT_TEXT_REQUIRED, { path: 'altText' });
-  const before = { state: asset.state, name: asset.name };
+  // An asset past its expiry day cannot be handed out again until the date moves on (the expiry job would retire it anyway).
+  const expiresAfter = changes.expiresOn !== undefined ? changes.expiresOn : asset.expiresOn;
+  const expiryTouched = changes.state === 'approved' || changes.expiresOn !== undefined;
+  if (expiryTouched && stateAfter === 'approved' && expiryStatus(expiresAfter ?? null, dayOf(new Date())) === 'expired') {
+    throw new ApiError(422, 'expired', `This asset expired on ${expiresAfter}; an approved asset needs a later expiry date (or none); retire it instead.`, { path: 'expiresOn' });
+  }
+  const before = { state: asset.state, name: asset.name, expiresOn: asset.expiresOn ?? null };
   await sequelize.transaction(async (t) => {
     await asset.update(changes, { transaction: t });
     await audit(brandAudit(caller, brand, changes.state ? 'asset.state' : 'asset.update', asset.id, { before, changes: body }), t);
@@ -505,7 +544,11 @@ export async function bundle(reader: AssetReader, request: { assetIds?: string[]
   const note = Buffer.from(
     usageNote(
       identity,
-      plan.map((p) => ({ path: p.path, name: p.asset.name, notes: p.path.includes('/original/') ? p.asset.usageNotes : null })),
+      plan.map((p) => {
+        const original = p.path.includes('/original/');
+        const rights = original ? { rights: p.asset.rights ?? null, credit: p.asset.credit ?? null, expiresOn: p.asset.expiresOn ?? null } : null;
+        return { path: p.path, name: p.asset.name, notes: original ? p.asset.usageNotes : null, rights };
+      }),
       new Date(),
     ),
   );

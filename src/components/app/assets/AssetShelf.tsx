@@ -1,10 +1,12 @@
 // The brand's asset shelf: drop files in, approve them, pick a rendition, pack a bundle; owners also see who downloaded what.
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { useRef, useState, type DragEvent } from 'react';
+import { useEffect, useRef, useState, type DragEvent } from 'react';
 import { api } from '@/lib/client/api';
 import { formatFileSize, SITE_LOCALE } from '@/lib/format';
 import type { FocalPoint } from '@/lib/assets/photo';
-import { ACCEPT_ATTRIBUTE, ASSET_KINDS, PHOTO_ACCEPT_ATTRIBUTE, STATE_LABELS, type AssetKind, type AssetState } from '@/lib/assets/kinds';
+import { EXPIRING_DEFAULT_DAYS, formatDay, RIGHTS_CAUTION, type ExpiryStatus } from '@/lib/assets/expiry';
+import { EMPTY_FILTERS, filterParams, type ShelfFilters } from '@/lib/assets/filters';
+import { ACCEPT_ATTRIBUTE, ASSET_FORMATS, ASSET_KINDS, PHOTO_ACCEPT_ATTRIBUTE, STATE_LABELS, type AssetKind, type AssetState } from '@/lib/assets/kinds';
 import { QueryRoot } from '@/components/app/QueryRoot';
 import { DownloadLog } from './DownloadLog';
 import { PhotoDetails } from './PhotoDetails';
@@ -27,6 +29,10 @@ export interface ShelfAsset {
   altText: string | null;
   caption: string | null;
   focus: FocalPoint | null;
+  rights: string | null;
+  credit: string | null;
+  expiresOn: string | null;
+  expiry: ExpiryStatus | null;
   renderable: boolean;
   files: { original: string; preview: string | null };
 }
@@ -38,6 +44,10 @@ export interface ShelfProps {
   canApprove: boolean;
   seesDrafts: boolean;
   canReadLog: boolean;
+  /** The filters in the page's address when it was opened (already checked by the shelf's query schema). */
+  initialFilters: ShelfFilters;
+  /** Why the address's filters were not used, when they were not. */
+  filterProblem: string | null;
 }
 
 type Backdrop = 'light' | 'dark' | 'brand';
@@ -55,19 +65,26 @@ const size = (bytes: number) => formatFileSize(bytes, SITE_LOCALE);
 function Shelf(props: ShelfProps) {
   const { brandId, canUpload, canApprove, seesDrafts } = props;
   const queryClient = useQueryClient();
-  const [state, setState] = useState<AssetState | ''>('');
-  const [kind, setKind] = useState<AssetKind | ''>('');
-  const [tag, setTag] = useState('');
+  const [filters, setFilters] = useState<ShelfFilters>(props.initialFilters);
+  const [words, setWords] = useState(props.initialFilters.q);
+  const set = (patch: Partial<ShelfFilters>) => setFilters((f) => ({ ...f, ...patch }));
+  // Typing settles for a moment before the search is asked for.
+  useEffect(() => {
+    const t = setTimeout(() => setFilters((f) => (f.q === words ? f : { ...f, q: words })), 250);
+    return () => clearTimeout(t);
+  }, [words]);
   const [backdrop, setBackdrop] = useState<Backdrop>('light');
   const [selected, setSelected] = useState<Set<string>>(new Set());
   const [openId, setOpenId] = useState<string | null>(null);
   const [notice, setNotice] = useState<{ kind: 'ok' | 'error'; text: string } | null>(null);
   const [bundleProgress, setBundleProgress] = useState<number | null>(null);
 
-  const params = new URLSearchParams();
-  if (state) params.set('state', state);
-  if (kind) params.set('kind', kind);
-  if (tag.trim()) params.set('tag', tag.trim().toLowerCase());
+  // The same parameters drive the API and the page's address, so a filtered shelf can be shared and reloaded.
+  const params = filterParams(filters);
+  const search = params.toString();
+  useEffect(() => {
+    if (search !== window.location.search.replace(/^\?/, '')) window.history.replaceState(null, '', `${window.location.pathname}${search ? `?${search}` : ''}`);
+  }, [search]);
   const key = ['assets', brandId, params.toString()];
   const assets = useQuery({ queryKey: key, queryFn: () => api<{ assets: ShelfAsset[] }>(`/api/brands/${brandId}/assets?${params}`) });
   const refresh = () => queryClient.invalidateQueries({ queryKey: ['assets', brandId] });
@@ -114,26 +131,6 @@ function Shelf(props: ShelfProps) {
             <h2 id="shelf-title" className="text-xl font-bold">On the shelf</h2>
             <p className="mt-1 text-sm text-ink-soft">{seesDrafts ? 'Drafts are seen by the studio and reviewers; only approved files reach partners and share links.' : 'Approved files of this brand, ready to download.'}</p>
           </div>
-          {seesDrafts && (
-            <div>
-              <label htmlFor="f-state" className="label">State</label>
-              <select id="f-state" className="field py-1.5 text-sm" value={state} onChange={(e) => setState(e.target.value as AssetState | '')}>
-                <option value="">Any</option>
-                {(Object.keys(STATE_LABELS) as AssetState[]).map((s) => <option key={s} value={s}>{STATE_LABELS[s].label}</option>)}
-              </select>
-            </div>
-          )}
-          <div>
-            <label htmlFor="f-kind" className="label">Kind</label>
-            <select id="f-kind" className="field py-1.5 text-sm" value={kind} onChange={(e) => setKind(e.target.value as AssetKind | '')}>
-              <option value="">Any</option>
-              {ASSET_KINDS.map((k) => <option key={k} value={k}>{KIND_LABEL[k]}</option>)}
-            </select>
-          </div>
-          <div>
-            <label htmlFor="f-tag" className="label">Tag</label>
-            <input id="f-tag" className="field w-36 py-1.5 text-sm" value={tag} onChange={(e) => setTag(e.target.value)} placeholder="e.g. print" />
-          </div>
           <fieldset>
             <legend className="label">Preview on</legend>
             <div className="flex gap-1" role="radiogroup">
@@ -144,6 +141,65 @@ function Shelf(props: ShelfProps) {
               ))}
             </div>
           </fieldset>
+        </div>
+        <div className="flex flex-wrap items-end gap-4 border-b border-rule px-6 py-4" role="search" aria-label="Find and filter the shelf">
+          <div>
+            <label htmlFor="f-q" className="label">Find</label>
+            <input id="f-q" type="search" className="field w-48 py-1.5 text-sm" value={words} onChange={(e) => setWords(e.target.value)} placeholder="Name, tag, rights, credit" maxLength={100} />
+          </div>
+          {seesDrafts && (
+            <div>
+              <label htmlFor="f-state" className="label">State</label>
+              <select id="f-state" className="field py-1.5 text-sm" value={filters.state} onChange={(e) => set({ state: e.target.value as AssetState | '' })}>
+                <option value="">Any</option>
+                {(Object.keys(STATE_LABELS) as AssetState[]).map((s) => <option key={s} value={s}>{STATE_LABELS[s].label}</option>)}
+              </select>
+            </div>
+          )}
+          <div>
+            <label htmlFor="f-kind" className="label">Kind</label>
+            <select id="f-kind" className="field py-1.5 text-sm" value={filters.kind} onChange={(e) => set({ kind: e.target.value as AssetKind | '' })}>
+              <option value="">Any</option>
+              {ASSET_KINDS.map((k) => <option key={k} value={k}>{KIND_LABEL[k]}</option>)}
+            </select>
+          </div>
+          <div>
+            <label htmlFor="f-tag" className="label">Tag</label>
+            <input id="f-tag" className="field w-32 py-1.5 text-sm" value={filters.tag} onChange={(e) => set({ tag: e.target.value })} placeholder="e.g. print" />
+          </div>
+          <div>
+            <label htmlFor="f-format" className="label">Format</label>
+            <select id="f-format" className="field py-1.5 text-sm" value={filters.format} onChange={(e) => set({ format: e.target.value as ShelfFilters['format'] })}>
+              <option value="">Any</option>
+              {ASSET_FORMATS.map((f) => <option key={f} value={f}>{f.toUpperCase()}</option>)}
+            </select>
+          </div>
+          <div>
+            <label htmlFor="f-rights" className="label">Usage rights</label>
+            <select id="f-rights" className="field py-1.5 text-sm" value={filters.rights} onChange={(e) => set({ rights: e.target.value as ShelfFilters['rights'] })}>
+              <option value="">Any</option>
+              <option value="with">Written down</option>
+              <option value="without">Not written down</option>
+            </select>
+          </div>
+          <div>
+            <label htmlFor="f-expiry" className="label">Expiry</label>
+            <div className="flex items-center gap-1">
+              <select id="f-expiry" className="field py-1.5 text-sm" value={filters.expiry} onChange={(e) => set({ expiry: e.target.value as ShelfFilters['expiry'], days: e.target.value === 'expiring' ? (filters.days || EXPIRING_DEFAULT_DAYS) : 0 })}>
+                <option value="">Any</option>
+                <option value="expired">Expired</option>
+                <option value="expiring">Expiring within…</option>
+                <option value="none">No expiry date</option>
+              </select>
+              {filters.expiry === 'expiring' && (
+                <>
+                  <input type="number" min={1} max={3660} className="field w-20 py-1.5 text-sm" aria-label="Days ahead" value={filters.days || ''} onChange={(e) => set({ days: Number(e.target.value) || 0 })} />
+                  <span className="text-sm text-ink-soft">days</span>
+                </>
+              )}
+            </div>
+          </div>
+          {params.toString() && <button type="button" className="btn-quiet px-3 py-1.5 text-sm" onClick={() => { setWords(''); setFilters(EMPTY_FILTERS); }}>Clear filters</button>}
         </div>
 
         <div className="flex flex-wrap items-center gap-3 border-b border-rule px-6 py-3 text-sm">
@@ -159,6 +215,7 @@ function Shelf(props: ShelfProps) {
           )}
         </div>
 
+        {props.filterProblem && <p className="px-6 pt-4 text-sm text-warn" role="status">The address held filters the shelf does not know ({props.filterProblem}); showing everything instead.</p>}
         {assets.isPending && <p className="px-6 py-8 text-ink-soft" role="status">Loading the shelf…</p>}
         {assets.isError && <p className="px-6 py-8 text-danger" role="alert">The shelf could not be loaded: {assets.error.message}</p>}
         {assets.isSuccess && list.length === 0 && (
@@ -193,6 +250,7 @@ function Shelf(props: ShelfProps) {
                   </div>
                   {a.tags.length > 0 && <p className="text-xs text-ink-faint">{a.tags.map((t) => `#${t}`).join(' ')}</p>}
                   {a.usageNotes && <p className="text-sm text-ink-soft">{a.usageNotes}</p>}
+                  <RightsSummary asset={a} />
                   {a.kind === 'photo' && !a.altText && <p className="text-sm text-warn">No alt text yet: add it under “Photo details” before approving.</p>}
                   <div className="mt-auto flex flex-wrap gap-2 pt-2">
                     <button type="button" className="btn-quiet px-3 py-1.5" aria-expanded={openId === a.id} onClick={() => setOpenId(openId === a.id ? null : a.id)}>Get a file</button>
@@ -216,17 +274,47 @@ function Shelf(props: ShelfProps) {
   );
 }
 
+const EXPIRY_BADGE: Record<ExpiryStatus, string> = { expired: 'bg-danger-wash text-danger', expiring: 'bg-warn-wash text-warn', valid: 'bg-paper text-ink-soft' };
+
+/** Rights, credit and expiry day of one asset, as its card shows them. */
+function RightsSummary({ asset }: { asset: ShelfAsset }) {
+  if (!asset.rights && !asset.credit && !asset.expiresOn) return null;
+  return (
+    <dl className="space-y-1 rounded-md bg-paper px-3 py-2 text-xs" data-asset-rights={asset.id}>
+      {asset.expiresOn && asset.expiry && (
+        <div className="flex items-center gap-2">
+          <dt className="font-semibold">Expires</dt>
+          <dd><span className={`rounded px-1.5 py-0.5 font-semibold ${EXPIRY_BADGE[asset.expiry]}`}>{formatDay(asset.expiresOn, SITE_LOCALE)}{asset.expiry === 'expired' ? ' · expired' : asset.expiry === 'expiring' ? ' · soon' : ''}</span></dd>
+        </div>
+      )}
+      {asset.credit && <div><dt className="inline font-semibold">Credit </dt><dd className="inline">{asset.credit}</dd></div>}
+      {asset.rights && <div><dt className="inline font-semibold">Rights </dt><dd className="inline line-clamp-3 whitespace-pre-line" title={asset.rights}>{asset.rights}</dd></div>}
+    </dl>
+  );
+}
+
 function DetailsEditor({ asset, onSave }: { asset: ShelfAsset; onSave: (body: Record<string, unknown>) => void }) {
   const [tags, setTags] = useState(asset.tags.join(', '));
   const [notes, setNotes] = useState(asset.usageNotes ?? '');
+  const [rights, setRights] = useState(asset.rights ?? '');
+  const [credit, setCredit] = useState(asset.credit ?? '');
+  const [expiresOn, setExpiresOn] = useState(asset.expiresOn ?? '');
+  const save = () => onSave({ tags: tags.split(',').map((t) => t.trim()).filter(Boolean), usageNotes: notes.trim() || null, rights: rights.trim() || null, credit: credit.trim() || null, expiresOn: expiresOn || null });
   return (
     <details className="text-sm">
-      <summary className="cursor-pointer text-ink-soft">Tags and usage notes</summary>
-      <form className="mt-2 space-y-2" onSubmit={(e) => { e.preventDefault(); onSave({ tags: tags.split(',').map((t) => t.trim()).filter(Boolean), usageNotes: notes.trim() || null }); }}>
+      <summary className="cursor-pointer text-ink-soft">Tags, usage notes, rights and expiry</summary>
+      <form className="mt-2 space-y-2" onSubmit={(e) => { e.preventDefault(); save(); }}>
         <label className="label" htmlFor={`tags-${asset.id}`}>Tags, separated by commas</label>
         <input id={`tags-${asset.id}`} className="field py-1.5 text-sm" value={tags} onChange={(e) => setTags(e.target.value)} />
         <label className="label" htmlFor={`notes-${asset.id}`}>Usage notes (shown to partners and packed into bundles)</label>
         <textarea id={`notes-${asset.id}`} className="field py-1.5 text-sm" rows={2} value={notes} onChange={(e) => setNotes(e.target.value)} />
+        <label className="label" htmlFor={`rights-${asset.id}`}>Usage rights or licence terms (shown next to the download)</label>
+        <textarea id={`rights-${asset.id}`} className="field py-1.5 text-sm" rows={3} maxLength={4000} value={rights} onChange={(e) => setRights(e.target.value)} aria-describedby={`rights-hint-${asset.id}`} />
+        <p id={`rights-hint-${asset.id}`} className="hint">{RIGHTS_CAUTION}</p>
+        <label className="label" htmlFor={`credit-${asset.id}`}>Credit line</label>
+        <input id={`credit-${asset.id}`} className="field py-1.5 text-sm" maxLength={200} value={credit} onChange={(e) => setCredit(e.target.value)} placeholder="e.g. Photo: A. Person for the studio" />
+        <label className="label" htmlFor={`expires-${asset.id}`}>Expires on (retired automatically that day; owners are told a week before)</label>
+        <input id={`expires-${asset.id}`} type="date" className="field py-1.5 text-sm" value={expiresOn} onChange={(e) => setExpiresOn(e.target.value)} />
         <button className="btn-quiet px-3 py-1.5">Save details</button>
       </form>
     </details>
