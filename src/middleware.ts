@@ -1,8 +1,9 @@
 // Gives each request its id and log scope, then resolves the session and the share link into locals and nothing
-// else: authorisation lives in src/lib/auth/policy.ts (members) and src/lib/publishing/site-access.server.ts (sites).
+// else (besides starting this process's job worker once): authorisation lives in src/lib/auth/policy.ts (members) and src/lib/publishing/site-access.server.ts (sites).
 import type { APIContext, MiddlewareNext } from 'astro';
 import { defineMiddleware } from 'astro:middleware';
 import { auth } from './lib/auth/auth.server';
+import { startJobs } from './lib/jobs.server';
 import { log, requestIdFrom, serveLogged } from './lib/log.server';
 import { shareGrants } from './lib/publishing/grant-cache';
 import { linkForToken, linkState, SHARE_COOKIE, tokenFromCookie } from './lib/publishing/share-links.server';
@@ -11,6 +12,9 @@ import { linkForToken, linkState, SHARE_COOKIE, tokenFromCookie } from './lib/pu
 const sessionKey = (cookie: string) => /session_token=([^;]+)/.exec(cookie)?.[1] ?? null;
 
 export const onRequest = defineMiddleware((context, next) => {
+  // The web process works the job queue too (builds, notices) unless QUEUE_WORKER is off; started once, on the
+  // first request (serve.mjs sends one as soon as it listens), never waited for.
+  if (!context.isPrerendered) void startJobs();
   const requestId = requestIdFrom(context.request.headers.get('x-request-id'));
   context.locals.requestId = requestId;
   // Prerendering runs at build time: there is no request to log.

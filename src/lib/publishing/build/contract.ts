@@ -64,6 +64,18 @@ export function filePath(rest: string, search: URLSearchParams | string = ''): s
   return query ? `${rest}?${query}` : rest;
 }
 
+/** Manifest path of the print edition on a paper size, as the pages step writes it and the PDF step prints it. */
+export const printPagePath = (size: 'a4' | 'letter') => filePath('print', `size=${size}`);
+
+/** Manifest path of the presentation's print form (the URL …/presentation?print), printed as the slides PDF. */
+export const presentationPrintPath = () => filePath('presentation', 'print');
+
+/** Manifest path of a version's PDF: the guidelines on a paper size, or the presentation's slides. */
+export const pdfPath = (edition: 'a4' | 'letter' | 'slides') => (edition === 'slides' ? 'presentation.pdf' : filePath('guideline.pdf', `size=${edition}`));
+
+/** Manifest path of a design-token file in one format (see TOKEN_FORMATS). */
+export const tokenPath = (format: string) => filePath('tokens', `format=${format}`);
+
 /** A strong ETag from a stored file's hash. */
 export const entryEtag = (entry: Pick<ManifestEntry, 'hash'>) => `"${entry.hash.slice(0, 32)}"`;
 
@@ -81,6 +93,8 @@ export interface BuildWriter {
   read(path: string): Promise<Buffer | null>;
   /** Manifest paths written so far. */
   paths(): string[];
+  /** The entry written under a path so far (its key, hash, size and type), or null. */
+  entry(path: string): ManifestEntry | null;
 }
 
 /** What a step knows of the version it builds; it loads anything else it needs through src/lib. */
@@ -93,6 +107,14 @@ export interface BuildContext {
   writer: BuildWriter;
   /** Report the number of files this step has written so far (shown on the publishing screen). */
   progress(count: number): Promise<void>;
+}
+
+/**
+ * A step that cannot succeed however often the job retries it (e.g. no Chromium to print with): the build fails at
+ * once with this reason; the publishing screen offers a retry for when whoever runs the server has fixed it.
+ */
+export class BuildBlocked extends Error {
+  override name = 'BuildBlocked';
 }
 
 /** One step of the build, run in order by the build job; a throw fails the build with the step named. */

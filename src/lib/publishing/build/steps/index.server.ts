@@ -1,0 +1,7 @@
+// The build's steps in the order the job runs them: files → pages → tokens → pdf (the PDF step prints the pages
+// an earlier step wrote). Each step writes only through ctx.writer.
+import type { BuildStepDefinition } from '../contract';
+import { pdfStep } from './pdf.server';
+import { tokensStep } from './tokens.server';
+
+export const BUILD_STEPS: readonly BuildStepDefinition[] = [tokensStep, pdfStep];
