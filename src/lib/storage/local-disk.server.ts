@@ -1,5 +1,4 @@
 // Files on local disk under FILES_DIR (default .data/files), outside public/.
-import { createReadStream } from 'node:fs';
 import { mkdir, open, readFile, rm, writeFile, rename } from 'node:fs/promises';
 import type { Readable } from 'node:stream';
 import { dirname, join, resolve } from 'node:path';
@@ -44,8 +43,13 @@ export class LocalDiskStorage implements FileStorage {
       throw err;
     });
     if (!handle) return null;
-    const { size } = await handle.stat();
-    return { stream: createReadStream('', { fd: handle.fd, autoClose: true }), size };
+    // The stream owns the FileHandle and closes it: a bare fd closed by the stream would leave the handle to be
+    // closed again on garbage collection, which fails with EBADF and ends the process.
+    const { size } = await handle.stat().catch(async (err) => {
+      await handle.close();
+      throw err;
+    });
+    return { stream: handle.createReadStream({ autoClose: true }), size };
   }
 
   async delete(key: string): Promise<void> {

@@ -4,7 +4,7 @@
 // help); a killed process leaves the version `building`, and the next worker start queues it again.
 import { DATABASE_URL } from 'astro:env/server';
 import pg from 'pg';
-import { QueryTypes, type Transaction } from 'sequelize';
+import type { Transaction } from 'sequelize';
 import { Brand, GuidelineVersion } from '@db/models';
 import { sequelize } from '@/lib/db.server';
 import { ApiError } from '@/lib/http/api';
@@ -17,9 +17,9 @@ import { createBuildWriter } from './writer.server';
 
 /** pg-boss's connection for a job sent inside one of our transactions: the job exists only if the transaction commits. */
 export function inTransaction(t: Transaction) {
-  return {
-    executeSql: async (text: string, values: unknown[]) => ({ rows: await sequelize.query<Record<string, unknown>>(text, { bind: values, transaction: t, type: QueryTypes.SELECT }) }),
-  };
+  // The transaction's own pg client (Sequelize keeps it on the transaction), so pg-boss's SQL goes through untouched.
+  const client = (t as unknown as { connection: pg.ClientBase }).connection;
+  return { executeSql: (text: string, values: unknown[]) => client.query(text, values) };
 }
 
 /** Jobs told that a version turned ready (publish notices); registered by their owners, sent with the ready update. */
