@@ -10,6 +10,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { signUpFresh, type Client, joinBrand } from '../support/client';
 import { closeDb, sql } from '../support/db';
 import { lastMailTo, mailTo } from '../support/mailbox';
+import { publishAndWait } from '../support/publish';
 
 let owner: Client;
 let follower: Client;
@@ -38,9 +39,8 @@ async function saveDraft(content: unknown[]) {
 
 /** Publish the draft and return the published page's HTML. */
 async function publishAndRead(note: string): Promise<string> {
-  const v = await owner.post(api('/versions'), { note });
-  expect(v.status).toBe(201);
-  const page = await owner.get(`/b/${slug}/v/${v.body.version.number}`);
+  const { version } = await publishAndWait(owner, brandId, note);
+  const page = await owner.get(`/b/${slug}/v/${version.number}`);
   expect(page.status).toBe(200);
   return page.body as string;
 }
