@@ -78,9 +78,10 @@ async function stop(child: ChildProcess | undefined): Promise<void> {
   child.kill('SIGTERM');
   await Promise.race([exited, new Promise((r) => setTimeout(r, 5000))]);
   if (child.exitCode === null) await killHard(child);
+  // Whatever the stopped server left of its browser goes too.
   for (const pid of tree) {
     try {
-      process.kill(pid, 0) && process.kill(pid, 'SIGKILL');
+      process.kill(pid, 'SIGKILL');
     } catch {
       // already gone
     }

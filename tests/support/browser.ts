@@ -2,7 +2,6 @@
 import { existsSync, readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import type { LaunchOptions, Page } from 'playwright-core';
-import { expect } from 'vitest';
 import { DEMO_BRANDS } from '@db/seeders/demo';
 import type { Client } from './client';
 import { publishAndWait, waitForBuild } from './publish';
