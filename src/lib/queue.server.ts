@@ -53,7 +53,7 @@ export function queue(): Promise<PgBoss> {
 }
 
 /** Queue one job of a kind; `db` sends inside a caller's transaction, so the job exists only if it commits. */
-export async function sendJob<Data extends object>(kind: JobKind<Data>, data: Data, opts: { db?: PgBoss.Db; singletonKey?: string } = {}): Promise<string | null> {
+export async function sendJob<Data extends object>(kind: JobKind<Data>, data: Data, opts: { db?: PgBoss.Db; singletonKey?: string; priority?: number } = {}): Promise<string | null> {
   return (await queue()).send(kind.name, data, { retryLimit: kind.retryLimit, retryDelay: kind.retryDelay, expireInSeconds: kind.expireInSeconds, ...opts });
 }
 

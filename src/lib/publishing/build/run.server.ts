@@ -125,14 +125,19 @@ export const buildJob = defineJob<{ versionId: string }>({
   },
 });
 
-/** Queue a version's build (inside the publishing transaction when `t` is given). */
-export const queueBuild = (versionId: string, t?: Transaction) => sendJob(buildJob, { versionId }, t ? { db: inTransaction(t) } : {});
+/**
+ * Queue a version's build (inside the publishing transaction when `t` is given). When builds wait in line, the
+ * newest publish goes first (pg-boss takes the highest priority first): its designer is watching the screen, and a
+ * backlog of older ones drains behind it. Builds queued again after a restart come last.
+ */
+export const queueBuild = (versionId: string, t?: Transaction, opts: { recovery?: boolean } = {}) =>
+  sendJob(buildJob, { versionId }, { ...(t ? { db: inTransaction(t) } : {}), priority: opts.recovery ? 0 : Math.floor((Date.now() - Date.UTC(2026, 0, 1)) / 1000) });
 
 // A process killed mid-build left its versions `building`: each worker start queues them again (the lock and the
 // state check make a duplicate job a no-op). Versions published before builds existed are built the same way.
 onWorkerStart(async () => {
   const waiting = await GuidelineVersion.findAll({ where: { state: 'building' }, attributes: ['id'], order: [['publishedAt', 'ASC']] });
-  for (const v of waiting) await queueBuild(v.id);
+  for (const v of waiting) await queueBuild(v.id, undefined, { recovery: true });
   if (waiting.length) log.info({ versions: waiting.length }, 'build: queued versions left building');
 });
 
