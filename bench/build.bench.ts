@@ -78,10 +78,10 @@ export default async function buildBench(): Promise<void> {
   const cookie = await server.signUp('bench-build');
   const brand = await brandWithPhotos(server, cookie);
 
-  // Two publishes of the same draft: the first also warms the server's Chromium; the median of the rest is reported.
+  // Five publishes of the same draft: the first also warms the server's Chromium; the median of the rest is reported.
   const runs: number[] = [];
   let last = 0;
-  for (let i = 0; i < 3; i++) {
+  for (let i = 0; i < 5; i++) {
     const { ms, number } = await publishToReady(server, cookie, brand.id, `Bench ${i + 1}`);
     if (i > 0) runs.push(ms);
     last = number;
@@ -91,8 +91,12 @@ export default async function buildBench(): Promise<void> {
   // The floor, part 1: the same bytes written to the same storage (write then rename, as the local-disk driver does).
   const db = new pg.Client({ connectionString: server.databaseUrl });
   await db.connect();
-  const { rows } = await db.query(`SELECT manifest FROM guideline_versions WHERE brand_id = $1 AND number = $2`, [brand.id, last]);
+  const { rows } = await db.query(`SELECT manifest, published_at, built_at, build_steps FROM guideline_versions WHERE brand_id = $1 AND number = $2`, [brand.id, last]);
   await db.end();
+  // Where the last run's time went: waiting for a worker, then each step, then the ready update.
+  const steps = rows[0].build_steps as { id: string; startedAt: string; finishedAt: string }[];
+  const at = (iso: string | Date) => new Date(iso).getTime();
+  const parts = [`queue ${at(steps[0].startedAt) - at(rows[0].published_at)} ms`, ...steps.map((st) => `${st.id} ${at(st.finishedAt) - at(st.startedAt)} ms`), `ready ${at(rows[0].built_at) - at(steps[steps.length - 1].finishedAt)} ms`];
   const entries = Object.entries(rows[0].manifest.entries as Record<string, { key: string; size: number; type: string }>);
   const files = await Promise.all(entries.map(async ([path, e]) => ({ path, bytes: await readFile(join(server.filesDir, e.key)) })));
   const scratch = join(server.filesDir, brand.id, 'bench-floor');
@@ -130,6 +134,7 @@ export default async function buildBench(): Promise<void> {
   const bytes = files.reduce((n, f) => n + f.bytes.byteLength, 0);
 
   console.log(`publish-to-ready, ${SECTIONS} sections, ${PHOTOS} photos, A4 + Letter + slides PDFs: ${product.toFixed(0)} ms (median of ${runs.length}; runs ${runs.map((r) => r.toFixed(0)).join(', ')} ms)`);
+  console.log(`last run, by part: ${parts.join(', ')}`);
   console.log(`floor: write the same ${files.length} files (${(bytes / 1024 / 1024).toFixed(1)} MB) ${write.toFixed(0)} ms + print the same print HTML once, warm ${print.toFixed(0)} ms = ${floor.toFixed(0)} ms`);
   console.log(`ratio publish-to-ready / floor: ${(product / floor).toFixed(2)}`);
 }
