@@ -9,7 +9,7 @@ import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { signUpFresh, type Client, joinBrand } from '../support/client';
 import { closeDb, sql } from '../support/db';
-import { lastMailTo, mailTo } from '../support/mailbox';
+import { lastMailTo, mailTo, waitForMail } from '../support/mailbox';
 import { publishAndWait } from '../support/publish';
 
 let owner: Client;
@@ -168,6 +168,7 @@ describe('e-mail', () => {
     for (const name of ['{{{note}}}', '<img src=x onerror=alert(5)>']) expect((await owner.post(api('/colors'), { name, value: '#a33b20' })).status).toBe(201);
     const before = mailTo(followerEmail).length;
     await publishAndRead('<b>raw note</b> {{{note}}}');
+    await waitForMail(followerEmail, before); // the notice goes out from a queue job once the version is ready
     expect(mailTo(followerEmail).length).toBe(before + 1);
     const mail = lastMailTo(followerEmail);
     // The note is shown once, escaped; the colour names stay literal text, never rendered a second time.

@@ -154,7 +154,7 @@ describe('a build killed mid-way', () => {
     row = await versionRow(1);
     await expectStored(row.manifest);
     // The build lock went with the killed process's connection: none is held now.
-    const locks = await db.query(`SELECT count(*)::int AS n FROM pg_locks WHERE locktype = 'advisory' AND granted`);
+    const locks = await db.query(`SELECT count(*)::int AS n FROM pg_locks l JOIN pg_database d ON d.oid = l.database WHERE l.locktype = 'advisory' AND l.granted AND d.datname = current_database()`);
     expect(locks.rows[0].n).toBe(0);
     const tokens = await owner.get(`/b/${slug}/tokens?format=css`);
     expect(tokens.status).toBe(200);

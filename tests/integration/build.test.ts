@@ -95,8 +95,9 @@ describe('the build job', () => {
   });
 
   test('followers are e-mailed by the queue once the version is ready, once', async () => {
-    for (let i = 0; i < 40 && mailTo(follower.email).filter((m) => /version 1/i.test(m.subject)).length === 0; i++) await new Promise((r) => setTimeout(r, 250));
-    const notices = mailTo(follower.email).filter((m) => /version 1/i.test(m.subject));
+    const notice = () => mailTo(follower.email).filter((m) => /version 1/i.test(m.subject));
+    for (let i = 0; i < 100 && notice().length === 0; i++) await new Promise((r) => setTimeout(r, 100));
+    const notices = notice();
     expect(notices).toHaveLength(1);
     expect(notices[0].text).toContain(`/b/${slug}`);
   });

@@ -2,7 +2,7 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { Client, joinBrand, signUpFresh } from '../support/client';
 import { closeDb, sql } from '../support/db';
-import { lastMailTo, linkIn, mailTo } from '../support/mailbox';
+import { lastMailTo, linkIn, mailTo, waitForMail } from '../support/mailbox';
 import { publishAndWait } from '../support/publish';
 
 let designer: Client;
@@ -98,8 +98,7 @@ describe('publish notices', () => {
     expect((await reviewer.get(`${b()}/follow`)).body).toEqual({ following: true });
     const before = mailTo(reviewerEmail).length;
     await publishAndWait(designer, brandId, 'Colour section settled.');
-    // The notice goes out from a queue job once the version is ready.
-    for (let i = 0; i < 40 && mailTo(reviewerEmail).length === before; i++) await new Promise((r) => setTimeout(r, 250));
+    await waitForMail(reviewerEmail, before); // the notice goes out from a queue job once the version is ready
     const mail = lastMailTo(reviewerEmail);
     expect(mailTo(reviewerEmail).length).toBe(before + 1);
     expect(mail.subject).toMatch(/^Brackwater Rowing Club guidelines: version \d+ is out$/);

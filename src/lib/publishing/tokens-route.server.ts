@@ -29,6 +29,7 @@ export async function tokensResponse(context: APIContext, number: number | null)
   if (!format) return errorResponse(new ApiError(400, 'invalid_input', `Choose a format: ${TOKEN_FORMATS.join(', ')}.`));
   const built = builtTokens(context.request, access.version, format, access.brand.slug);
   if (built) return built;
+  if (access.version.state === 'ready') return simplePage(404, 'No token file in this format', `Version ${access.version.number} was published without its ${format} design tokens: a value in it could not be written as a token. The studio can correct it and publish again.`);
   if (access.version.state === 'failed') return simplePage(500, 'This version could not be built', 'The studio can try its build again from the publishing page.');
   return simplePage(202, 'The tokens are being prepared', `Version ${access.version.number} is still being built; its design tokens are ready in a moment.`);
 }

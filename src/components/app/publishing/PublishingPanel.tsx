@@ -8,7 +8,7 @@ import { QueryRoot } from '@/components/app/QueryRoot';
 import { When } from '@/components/ui/When';
 import { formatDate } from '@/lib/format';
 
-interface BuildStepView { id: string; label: string; state: 'waiting' | 'running' | 'done' | 'failed'; count?: number }
+interface BuildStepView { id: string; label: string; state: 'waiting' | 'running' | 'done' | 'failed'; count?: number; note?: string }
 interface Version {
   number: number;
   publishedAt: string;
@@ -158,7 +158,7 @@ function BuildProgress({ brandId, version, canPublish }: { brandId: string; vers
           {version.buildSteps.map((step) => (
             <li key={step.id} className="flex gap-3">
               <span className={`w-16 shrink-0 ${step.state === 'done' ? 'text-ok' : step.state === 'failed' ? 'text-danger' : step.state === 'running' ? 'font-semibold text-ink' : 'text-ink-faint'}`}>{STEP_STATE[step.state]}</span>
-              <span className="text-ink">{step.label}{step.count ? <span className="text-ink-soft"> · {step.count} file{step.count === 1 ? '' : 's'}</span> : null}</span>
+              <span className="text-ink">{step.label}{step.count ? <span className="text-ink-soft"> · {step.count} file{step.count === 1 ? '' : 's'}</span> : null}{step.note ? <span className="block text-warn">{step.note}</span> : null}</span>
             </li>
           ))}
         </ol>
@@ -200,6 +200,7 @@ function Versions({ brandId, slug, versions, pdfProblem, canPublish }: { brandId
             )}
             <p className="w-full text-sm">{v.note}</p>
             {v.state !== 'ready' && <BuildProgress brandId={brandId} version={v} canPublish={canPublish} />}
+            {v.state === 'ready' && v.buildSteps.filter((s) => s.note).map((s) => <p key={s.id} className="w-full text-sm text-warn">{s.note}</p>)}
           </li>
         ))}
       </ol>

@@ -13,6 +13,8 @@ export interface BuildStep {
   state: 'waiting' | 'running' | 'done' | 'failed';
   /** Files written so far by this step (optional, for the progress line). */
   count?: number;
+  /** Something the step left out without failing the build, in words for the publishing screen. */
+  note?: string;
   startedAt?: string;
   finishedAt?: string;
 }
@@ -107,6 +109,8 @@ export interface BuildContext {
   writer: BuildWriter;
   /** Report the number of files this step has written so far (shown on the publishing screen). */
   progress(count: number): Promise<void>;
+  /** Say what the step left out without failing (shown beside the step on the publishing screen). */
+  note(text: string): void;
 }
 
 /**

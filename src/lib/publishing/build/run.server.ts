@@ -82,6 +82,7 @@ export async function buildVersion(versionId: string, opts: { steps?: readonly B
             flushed = performance.now();
             await save();
           },
+          note: (text) => void (mine.note = text),
         });
       } catch (err) {
         const message = String((err as Error)?.message ?? err).slice(0, 800);
