@@ -64,6 +64,9 @@ export default defineConfig({
       // E-mails one account may send per hour: invitations, resends, briefs, mood boards, review requests.
       MAIL_SEND_LIMIT: envField.number({ context: 'server', access: 'secret', default: 60 }),
       // The logger's level (src/lib/log.server.ts): JSON lines on stdout at this level and above.
+      // Whether this process works the job queue (builds, PDFs, notices). Off in a web process when a worker of its
+      // own runs beside it; on by default, so one `npm start` process does everything.
+      QUEUE_WORKER: envField.boolean({ context: 'server', access: 'secret', default: true }),
       LOG_LEVEL: envField.enum({ context: 'server', access: 'secret', values: ['trace', 'debug', 'info', 'warn', 'error', 'fatal', 'silent'], default: 'info' }),
     },
   },

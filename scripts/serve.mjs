@@ -79,5 +79,9 @@ const server = http.createServer((req, res) => {
   handler(req, res, undefined, { socketAddress: req.socket.remoteAddress });
 });
 
-server.listen(port, host, () => log.info({ url: `http://${host}:${port}` }, 'Plumbline listening'));
+server.listen(port, host, () => {
+  log.info({ url: `http://${host}:${port}` }, 'Plumbline listening');
+  // The app starts its job worker on its first request (it resumes builds a stopped process left): send one now.
+  fetch(`http://${host.includes(':') ? `[${host}]` : host}:${port}/`, { redirect: 'manual', headers: { 'x-request-id': 'boot' } }).catch(() => undefined);
+});
 for (const signal of ['SIGINT', 'SIGTERM']) process.on(signal, () => process.exit(0));

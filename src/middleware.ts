@@ -1,22 +1,23 @@
 // Gives each request its id and log scope, then resolves the session and the share link into locals and nothing
-// else: authorisation lives in src/lib/auth/policy.ts (members) and src/lib/publishing/site-access.server.ts (sites).
+// else (besides starting this process's job worker once): authorisation lives in src/lib/auth/policy.ts (members) and src/lib/publishing/site-access.server.ts (sites).
 import type { APIContext, MiddlewareNext } from 'astro';
 import { defineMiddleware } from 'astro:middleware';
 import { forgetSession, sessionFor } from './lib/auth/sessions.server';
-import { startAssetExpiry } from './lib/assets/expiry-job.server';
 import { startChangeNotices } from './lib/live/notices.server';
+import { startJobs } from './lib/jobs.server';
 import { log, requestIdFrom, serveLogged } from './lib/log.server';
 import { shareGrants } from './lib/publishing/grant-cache';
 import { linkForToken, linkState, SHARE_COOKIE, tokenFromCookie } from './lib/publishing/share-links.server';
 
 // Sessions and share grants are kept in memory by change notices, which this process starts listening for now.
 startChangeNotices();
-// The shelf's expiry job: hourly, and once now (src/lib/assets/expiry-job.server.ts).
-void startAssetExpiry();
 /** Every session cookie the request carries, name and value: all that better-auth reads to find the session. */
 const sessionKey = (cookie: string) => [...cookie.matchAll(/(?:^|;)\s*([^=;\s]*session_token)=([^;]*)/g)].map((m) => `${m[1]}=${m[2]}`).join('; ') || null;
 
 export const onRequest = defineMiddleware((context, next) => {
+  // The web process works the job queue too (builds, notices) unless QUEUE_WORKER is off; started once, on the
+  // first request (serve.mjs sends one as soon as it listens), never waited for.
+  if (!context.isPrerendered) void startJobs();
   const requestId = requestIdFrom(context.request.headers.get('x-request-id'));
   context.locals.requestId = requestId;
   // Prerendering runs at build time: there is no request to log.

@@ -10,6 +10,8 @@ import { dropCluster, freePort, startCluster } from '../../scripts/lib/postgres'
 export interface BenchServer {
   baseUrl: string;
   databaseUrl: string;
+  /** The server's FILES_DIR (local-disk storage). */
+  filesDir: string;
   /** A signed-in cookie of a fresh designer who owns a fresh brand. */
   signUp(label: string): Promise<string>;
 }
@@ -33,6 +35,7 @@ export function benchServer(): Promise<BenchServer> {
     return {
       baseUrl,
       databaseUrl: cluster.url,
+      filesDir: join(dir, 'files'),
       async signUp(label: string) {
         const email = `${label}-${Date.now()}@bench.example`;
         const r = await fetch(`${baseUrl}/api/auth/sign-up/email`, {

@@ -1,5 +1,6 @@
 // Published versions, share links, PDF exports and our own rate counters.
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import type { BuildStep, Manifest, VersionState } from '@/lib/publishing/build/contract';
 
 export interface VersionFile {
   /** Storage key of the version's own copy. */
@@ -19,10 +20,10 @@ export class GuidelineVersion extends Model<InferAttributes<GuidelineVersion>, I
   declare publishedById: string | null;
   declare publishedAt: CreationOptional<Date>;
   /** building → ready (every file written, manifest set) or failed (buildError says why); see src/lib/publishing/build/contract.ts. */
-  declare state: CreationOptional<'building' | 'ready' | 'failed'>;
+  declare state: CreationOptional<VersionState>;
   declare buildError: CreationOptional<string | null>;
-  declare buildSteps: CreationOptional<unknown[]>;
-  declare manifest: CreationOptional<unknown | null>;
+  declare buildSteps: CreationOptional<BuildStep[]>;
+  declare manifest: CreationOptional<Manifest | null>;
   declare builtAt: CreationOptional<Date | null>;
 }
 

@@ -102,7 +102,20 @@ async function shelfPhotos(siteUrl: string, cookie: string, brandId: string): Pr
   });
 }
 
-/** Make sure the first demo brand is published and stocked; returns the demo share link URL. */
+/** Wait until the brand's newest version is built (the server's job builds it after publishing); says how it ended. */
+async function waitForBuilt(siteUrl: string, cookie: string, brandId: string, timeoutMs = 300_000): Promise<void> {
+  const until = Date.now() + timeoutMs;
+  for (;;) {
+    const { versions } = await call(siteUrl, cookie, 'GET', `/api/brands/${brandId}/versions`);
+    const newest = versions[0] as { number: number; state: string; buildError: string | null } | undefined;
+    if (!newest || newest.state === 'ready') return;
+    if (newest.state === 'failed') throw new Error(`version ${newest.number} could not be built: ${newest.buildError}`);
+    if (Date.now() > until) throw new Error(`version ${newest.number} was still building after ${timeoutMs / 1000} s`);
+    await new Promise((r) => setTimeout(r, 500));
+  }
+}
+
+/** Make sure the first demo brand is published, built and stocked; returns the demo share link URL. */
 export async function publishDemo(siteUrl: string, dataDir: string): Promise<string | null> {
   const cookie = await signIn(siteUrl, DEMO_PEOPLE[0].email);
   const { brands } = await call(siteUrl, cookie, 'GET', '/api/brands');
@@ -121,6 +134,8 @@ export async function publishDemo(siteUrl: string, dataDir: string): Promise<str
     }
     await call(siteUrl, cookie, 'POST', `${base}/versions`, { note: 'First edition of the Larchmere guidelines: logo, colour, type and imagery.' });
   }
+  // The share link printed at start must open a built version.
+  await waitForBuilt(siteUrl, cookie, brand.id);
   if (!existsSync(linkFile)) {
     const { shareLink } = await call(siteUrl, cookie, 'POST', `${base}/share-links`, { label: 'Demo link for the signage agency', allowDownloads: true, allowPresentation: true });
     writeFileSync(linkFile, shareLink.url);

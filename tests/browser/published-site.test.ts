@@ -6,6 +6,7 @@ import { afterAll, beforeAll, expect, test } from 'vitest';
 import { baseUrl, signIn } from '../support/client';
 import { launchOptions } from '../support/browser';
 import { DEMO_BRANDS, DEMO_PEOPLE } from '@db/seeders/demo';
+import { publishAndWait, waitForBuild } from '../support/publish';
 
 const axeSource = readFileSync(createRequire(import.meta.url).resolve('axe-core/axe.min.js'), 'utf8');
 let browser: Browser;
@@ -17,10 +18,13 @@ beforeAll(async () => {
   const owner = await signIn(DEMO_PEOPLE[0].email);
   const brand = (await owner.get('/api/brands')).body.brands.find((b: { slug: string }) => b.slug === DEMO_BRANDS[0].slug);
   const base = `/api/brands/${brand.id}`;
-  if ((await owner.get(`${base}/versions`)).body.versions.length === 0) {
+  const versions = (await owner.get(`${base}/versions`)).body.versions;
+  if (versions.length === 0) {
     const draft = (await owner.get(`${base}/guideline`)).body;
     if (draft.doc.content.length === 0) await owner.post(`${base}/guideline/template`, { template: 'brand-book', baseRevision: draft.revision });
-    expect((await owner.post(`${base}/versions`, { note: 'For the browser walk' })).status).toBe(201);
+    await publishAndWait(owner, brand.id, 'For the browser walk');
+  } else {
+    await waitForBuild(owner, brand.id, versions[0].number);
   }
   shareUrl = (await owner.post(`${base}/share-links`, { label: 'Browser walk' })).body.shareLink.url;
 });

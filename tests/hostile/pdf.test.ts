@@ -8,6 +8,7 @@ import { afterAll, beforeAll, expect, it } from 'vitest';
 import { baseUrl, signUpFresh, type Client } from '../support/client';
 import { closeDb, sql } from '../support/db';
 import { FIXTURE_SVG } from '../integration/fixtures';
+import { publishAndWait } from '../support/publish';
 
 let owner: Client;
 let recorder: Server;
@@ -64,7 +65,7 @@ it('OWASP SSRF Prevention Cheat Sheet / ASVS 5.0 V1.3.6 (allow list for server-s
     ],
   };
   expect((await owner.request('PUT', `${base}/guideline`, { baseRevision: 0, doc })).status).toBe(200);
-  expect((await owner.post(`${base}/versions`, { note: 'Trap' })).status).toBe(201);
+  await publishAndWait(owner, brand.id, 'Trap');
 
   // What an attacker stores: image addresses on loopback, and CSS smuggled into names that reach style attributes
   // and the running heads (a newline ends a CSS string, so what follows would be read as a declaration).

@@ -14,6 +14,7 @@ import { startServer } from '../../scripts/lib/prepare';
 import { FIXTURE_SVG } from '../integration/fixtures';
 import { Client } from '../support/client';
 import { closeDb, sql } from '../support/db';
+import { publishAndWait } from '../support/publish';
 
 const CUSTOM_LIMIT = 3;
 const RATE_LIMIT = 5;
@@ -219,7 +220,7 @@ describe('how many renditions a caller can make us draw and keep', () => {
       baseRevision: 0,
       doc: { type: 'doc', content: [{ type: 'sectionHeading', attrs: { id: 'dl', title: 'Files', eyebrow: '', intro: '' } }] },
     });
-    expect((await owner.post(`/api/brands/${brandId}/versions`, { note: 'For visitors' })).status).toBe(201);
+    await publishAndWait(owner, brandId, 'For visitors');
     holder = await visitor();
     const asks = [
       [assetB, 100],

@@ -131,7 +131,7 @@ describe('brand deletion leaves no stored file behind', () => {
     // A rendition, cached in storage.
     const rendition = await fetch(`${baseUrl()}/api/assets/${assets[0].id}/file?format=png&width=64`, { headers: { cookie: owner.cookieHeader() } });
     expect(rendition.status).toBe(200);
-    // The version's PDF, kept in storage once printed.
+    // The version's built files (its PDFs among them), in storage once the build job has made it ready.
     for (let i = 0; i < 240; i++) {
       const r = await fetch(`${baseUrl()}/b/${slug}/v/1/guideline.pdf?size=a4`, { headers: { accept: 'application/json', cookie: owner.cookieHeader() } });
       if (r.headers.get('content-type')?.includes('application/pdf')) break;
@@ -145,8 +145,8 @@ describe('brand deletion leaves no stored file behind', () => {
     const filesDir = inject('filesDir');
     const before = walk(filesDir).filter((f) => f.startsWith(`${brandId}/`));
     const kinds = new Set(before.map((f) => f.split('/')[1]));
-    // Each kind of file a brand keeps was there to be deleted (a version's copies and pages live under build/).
-    for (const kind of ['logo', 'asset', 'rendition', 'build', 'pdf']) expect([...kinds], kind).toContain(kind);
+    // Each kind of file a brand keeps was there to be deleted (a version's copies, pages and PDFs live under build/).
+    for (const kind of ['logo', 'asset', 'rendition', 'build']) expect([...kinds], kind).toContain(kind);
 
     expect((await owner.delete(`/api/brands/${brandId}`)).status).toBe(204);
 

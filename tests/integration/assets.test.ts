@@ -7,6 +7,7 @@ import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { baseUrl } from '../support/client';
 import { closeDb, sql } from '../support/db';
 import { FIXTURE_SVG, makeBrand, makeCast, type Cast, type Fixture } from './fixtures';
+import { waitForBuild } from '../support/publish';
 
 const corpus = (name: string) => readFileSync(join(process.cwd(), 'tests/fixtures/files', name));
 
@@ -40,6 +41,8 @@ let brand: Fixture;
 beforeAll(async () => {
   cast = await makeCast();
   brand = await makeBrand(cast, 'Shelf Brand');
+  // Its version's build writes files under the brand: done before the checks that nothing else is stored.
+  await waitForBuild(cast.clients.owner, brand.brandId, 1);
 });
 afterAll(closeDb);
 

@@ -3,6 +3,7 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { Client, signUpFresh } from '../support/client';
 import { closeDb } from '../support/db';
+import { publishAndWait } from '../support/publish';
 
 let owner: Client;
 let other: Client;
@@ -20,7 +21,7 @@ beforeAll(async () => {
   const { revision } = (await owner.get(api('/guideline'))).body;
   const doc = { type: 'doc', content: [{ type: 'sectionHeading', attrs: { id: 's1', title: 'Colour', eyebrow: '', intro: '' } }, { type: 'colorPalette', attrs: { id: 'p1', colorIds: [colorId], showPrint: true, note: '' } }] };
   expect((await owner.request('PUT', api('/guideline'), { baseRevision: revision, doc })).status).toBe(200);
-  expect((await owner.post(api('/versions'), { note: 'First' })).status).toBe(201);
+  await publishAndWait(owner, brandId, 'First');
 });
 afterAll(closeDb);
 

@@ -8,6 +8,7 @@ import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { baseUrl, signUpFresh, type Client } from '../support/client';
 import { closeDb } from '../support/db';
+import { publishAndWait } from '../support/publish';
 
 const TREE = readFileSync(join(__dirname, '../fixtures/knockout/disc-tree.svg'), 'utf8');
 const LETTERS = readFileSync(join(__dirname, '../fixtures/knockout/letters.svg'), 'utf8').replace('fill="#111"', 'fill="#000"');
@@ -83,8 +84,7 @@ describe("the designer's own version file wins", () => {
     // Published versions carry the file with them.
     const doc = { type: 'doc', content: [{ type: 'paragraph', attrs: { id: 'p1' }, content: [{ type: 'text', text: 'Our mark.' }] }] };
     expect((await owner.request('PUT', `/api/brands/${brandId}/guideline`, { baseRevision: 0, doc })).status).toBe(200);
-    const published1 = await owner.post(`/api/brands/${brandId}/versions`, { note: 'With own white' });
-    expect(published1.status, JSON.stringify(published1.body)).toBe(201);
+    await publishAndWait(owner, brandId, 'With own white');
     const published = await bytes(owner, `/b/${slug}/v/1/files/${treeId}?variant=white`);
     expect(published.status).toBe(200);
     expect(published.body.toString()).toContain('<rect');

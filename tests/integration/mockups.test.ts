@@ -7,6 +7,7 @@ import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { FIXTURE_SVG } from './fixtures';
 import { baseUrl, Client, signUpFresh } from '../support/client';
 import { closeDb } from '../support/db';
+import { publishAndWait } from '../support/publish';
 
 let owner: Client;
 let brandId: string;
@@ -39,7 +40,7 @@ beforeAll(async () => {
     baseRevision: 0,
     doc: { type: 'doc', content: [{ type: 'applications', attrs: { id: 'apps', templates: ['business-card', 'social-post'], logoId, photoIds: [], note: '' } }] },
   });
-  expect((await owner.post(`/api/brands/${brandId}/versions`, { note: 'Mock-ups' })).status).toBe(201);
+  await publishAndWait(owner, brandId, 'Mock-ups');
 });
 afterAll(closeDb);
 

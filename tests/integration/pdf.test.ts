@@ -6,6 +6,7 @@ import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { baseUrl, signUpFresh, type Client } from '../support/client';
 import { closeDb, sql } from '../support/db';
 import { FIXTURE_SVG } from './fixtures';
+import { publishAndWait } from '../support/publish';
 
 let owner: Client;
 let slug: string;
@@ -86,7 +87,7 @@ beforeAll(async () => {
   content.push({ type: 'sectionHeading', attrs: { id: 's4', title: TITLES[4], eyebrow: '', intro: '' } });
   content.push(para('end', 6));
   expect((await owner.request('PUT', `${base}/guideline`, { baseRevision: 0, doc: { type: 'doc', content } })).status).toBe(200);
-  expect((await owner.post(`${base}/versions`, { note: 'For print' })).status).toBe(201);
+  await publishAndWait(owner, brand.id, 'For print');
   a4 = (await fetchPdf(owner, `/b/${slug}/v/1/guideline.pdf?size=a4`)).bytes;
   pdf = await open(a4);
 });
@@ -213,14 +214,15 @@ describe('PDF export', () => {
     }
   });
 
-  test('a second request is served from the cache at once, and the latest address gives the same file', async () => {
+  test('the built PDF is served at once, the latest address gives the same file, and both sizes are in the manifest', async () => {
     const again = await fetchPdf(owner, `/b/${slug}/v/1/guideline.pdf?size=a4`);
     expect(again.polls).toBe(0);
     const latest = await fetchPdf(owner, `/b/${slug}/guideline.pdf?size=a4`);
     expect(latest.polls).toBe(0);
     expect(Buffer.from(latest.bytes).equals(Buffer.from(again.bytes))).toBe(true);
-    const rows = await sql(`SELECT e.size, e.state FROM pdf_exports e JOIN guideline_versions v ON v.id = e.version_id JOIN brands b ON b.id = v.brand_id WHERE b.slug = $1 ORDER BY size`, [slug]);
-    expect(rows).toEqual([{ size: 'a4', state: 'done' }, { size: 'letter', state: 'done' }]);
+    const [row] = await sql(`SELECT v.manifest FROM guideline_versions v JOIN brands b ON b.id = v.brand_id WHERE b.slug = $1 AND v.number = 1`, [slug]);
+    expect(Object.keys(row.manifest.entries)).toEqual(expect.arrayContaining(['guideline.pdf?size=a4', 'guideline.pdf?size=letter', 'presentation.pdf']));
+    expect(row.manifest.entries['guideline.pdf?size=a4'].size).toBe(again.bytes.byteLength);
   });
 
   test('a browser gets a progress page while the PDF is made; an unknown size is a 400', async () => {

@@ -5,6 +5,7 @@ import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { baseUrl, Client, signUpFresh } from '../support/client';
 import { closeDb } from '../support/db';
+import { publishAndWait } from '../support/publish';
 
 let owner: Client;
 let brandId: string;
@@ -77,7 +78,7 @@ describe('the imagery block on the published page', () => {
     const saved = await owner.request('PUT', api('/guideline'), { baseRevision: revision, doc: { type: 'doc', content: [imagery] } });
     expect(saved.status).toBe(200);
     expect((await owner.get(api('/guideline'))).body.doc.content[0].attrs.items[0].src).toBe(photoId);
-    expect((await owner.post(api('/versions'), { note: 'With a photograph' })).status).toBe(201);
+    await publishAndWait(owner, brandId, 'With a photograph');
 
     const page = await owner.get(`/b/${slug}/v/1`);
     expect(page.status).toBe(200);

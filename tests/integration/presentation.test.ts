@@ -6,6 +6,7 @@ import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { baseUrl, Client, signUpFresh } from '../support/client';
 import { closeDb, sql } from '../support/db';
 import { FIXTURE_SVG } from './fixtures';
+import { publishAndWait } from '../support/publish';
 
 let owner: Client;
 let slug: string;
@@ -58,7 +59,7 @@ beforeAll(async () => {
     { type: 'pattern', attrs: { id: 'pat', logoId: logo.id } },
   ];
   expect((await owner.request('PUT', `${base}/guideline`, { baseRevision: 0, doc: { type: 'doc', content } })).status).toBe(200);
-  expect((await owner.post(`${base}/versions`, { note: 'To reveal' })).status).toBe(201);
+  await publishAndWait(owner, brand.id, 'To reveal');
 });
 afterAll(closeDb);
 

@@ -2,6 +2,7 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { Client, baseUrl, joinBrand, signUpFresh } from '../support/client';
 import { closeDb, sql } from '../support/db';
+import { waitForBuild } from '../support/publish';
 
 let owner: Client;
 let brandId: string;
@@ -39,6 +40,7 @@ describe('versions', () => {
     expect(v1.status).toBe(201);
     expect(v1.body.version).toMatchObject({ number: 1, note: 'First edition' });
     expect(Date.parse(v1.body.version.publishedAt)).not.toBeNaN();
+    expect((await waitForBuild(owner, brandId, 1)).state).toBe('ready');
 
     const v1Page = await owner.get(`/b/${slug}/v/1`);
     expect(v1Page.status).toBe(200);
@@ -48,6 +50,7 @@ describe('versions', () => {
     await saveDraft([section('colour', 'Colour'), palette('pal', [colorId]), section('type', 'Typography')]);
     const v2 = await owner.post(api('/versions'), { note: 'Deeper harbour blue' });
     expect(v2.body.version.number).toBe(2);
+    expect((await waitForBuild(owner, brandId, 2)).state).toBe('ready');
 
     const v1Again = await owner.get(`/b/${slug}/v/1`);
     expect(v1Again.body).toContain('#1f6f8b');

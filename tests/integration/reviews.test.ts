@@ -2,7 +2,8 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { Client, joinBrand, signUpFresh } from '../support/client';
 import { closeDb, sql } from '../support/db';
-import { lastMailTo, linkIn, mailTo } from '../support/mailbox';
+import { lastMailTo, linkIn, mailTo, waitForMail } from '../support/mailbox';
+import { publishAndWait } from '../support/publish';
 
 let designer: Client;
 let designerEmail: string;
@@ -96,8 +97,8 @@ describe('publish notices', () => {
     expect((await reviewer.request('PUT', `${b()}/follow`)).body).toEqual({ following: true });
     expect((await reviewer.get(`${b()}/follow`)).body).toEqual({ following: true });
     const before = mailTo(reviewerEmail).length;
-    const published = await designer.post(`${b()}/versions`, { note: 'Colour section settled.' });
-    if (published.status !== 201) return; // publishing belongs to another part of the product; skip if not built yet.
+    await publishAndWait(designer, brandId, 'Colour section settled.');
+    await waitForMail(reviewerEmail, before); // the notice goes out from a queue job once the version is ready
     const mail = lastMailTo(reviewerEmail);
     expect(mailTo(reviewerEmail).length).toBe(before + 1);
     expect(mail.subject).toMatch(/^Brackwater Rowing Club guidelines: version \d+ is out$/);

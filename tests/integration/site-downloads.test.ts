@@ -4,6 +4,7 @@ import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { FIXTURE_SVG } from './fixtures';
 import { Client, signUpFresh } from '../support/client';
 import { closeDb, sql } from '../support/db';
+import { publishAndWait } from '../support/publish';
 
 let owner: Client;
 let brandId: string;
@@ -32,7 +33,7 @@ beforeAll(async () => {
     baseRevision: 0,
     doc: { type: 'doc', content: [{ type: 'sectionHeading', attrs: { id: 'dl', title: 'Files', eyebrow: '', intro: '' } }, { type: 'downloads', attrs: { id: 'files', title: 'Files to download', assetIds: [], note: '' } }] },
   });
-  expect((await owner.post(`/api/brands/${brandId}/versions`, { note: 'With files' })).status).toBe(201);
+  await publishAndWait(owner, brandId, 'With files');
 });
 afterAll(closeDb);
 

@@ -2,9 +2,9 @@
 import { existsSync, readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import type { LaunchOptions, Page } from 'playwright-core';
-import { expect } from 'vitest';
 import { DEMO_BRANDS } from '@db/seeders/demo';
 import type { Client } from './client';
+import { publishAndWait, waitForBuild } from './publish';
 
 /** Launch options for headless chromium on a closed network. */
 export function launchOptions(): LaunchOptions {
@@ -58,10 +58,13 @@ export async function settled(page: Page): Promise<void> {
 export async function publishedDemoBrand(owner: Client): Promise<string> {
   const brand = (await owner.get('/api/brands')).body.brands.find((b: { slug: string }) => b.slug === DEMO_BRANDS[0].slug);
   const base = `/api/brands/${brand.id}`;
-  if ((await owner.get(`${base}/versions`)).body.versions.length === 0) {
+  const versions = (await owner.get(`${base}/versions`)).body.versions;
+  if (versions.length === 0) {
     const draft = (await owner.get(`${base}/guideline`)).body;
     if (draft.doc.content.length === 0) await owner.post(`${base}/guideline/template`, { template: 'brand-book', baseRevision: draft.revision });
-    expect((await owner.post(`${base}/versions`, { note: 'For the browser walks' })).status).toBe(201);
+    await publishAndWait(owner, brand.id, 'For the browser walks');
+  } else {
+    await waitForBuild(owner, brand.id, versions[0].number);
   }
   return brand.id;
 }

@@ -5,6 +5,16 @@ import { listCaptured, type CapturedMail } from '@/lib/mail/captured';
 /** Every message to `address`, newest first. The app awaits the SMTP reply, so a message exists once its request returned. */
 export const mailTo = (address: string): CapturedMail[] => listCaptured(inject('mailDir'), { to: address });
 
+/** Wait (10 s at most) until `address` has more than `count` messages: mail sent by a queue job, e.g. publish notices. */
+export async function waitForMail(address: string, count: number): Promise<CapturedMail[]> {
+  for (let i = 0; i < 100; i++) {
+    const mails = mailTo(address);
+    if (mails.length > count) return mails;
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  throw new Error(`no new e-mail reached ${address} within 10 s`);
+}
+
 /** The newest message to `address`, or a clear failure. */
 export function lastMailTo(address: string): CapturedMail {
   // Only the newest is read: the role matrix sends the same people hundreds of invitations.

@@ -1,8 +1,14 @@
-// Told when a version is published, so followers can be e-mailed the note and the what-changed summary.
-import { QueryTypes } from 'sequelize';
+// Told when a version is published and built, so followers can be e-mailed the note and the what-changed summary.
+// The e-mails go out from a queue job sent in the same transaction that turns the version ready: never before its
+// pages exist, never twice for one version.
+import { Op, QueryTypes } from 'sequelize';
+import { Brand, GuidelineVersion } from '@db/models';
 import { sequelize } from '@/lib/db.server';
 import { log } from '@/lib/log.server';
 import { sendTemplate, siteLink } from '@/lib/mail/mail.server';
+import { changeSummary, compareSnapshots, type Snapshot } from '@/lib/publishing/diff';
+import { inTransaction, onVersionReady } from '@/lib/publishing/build/run.server';
+import { defineJob, sendJob } from '@/lib/queue.server';
 
 export interface PublishedNotice {
   brandId: string;
@@ -49,3 +55,37 @@ export async function notifyPublished(notice: PublishedNotice): Promise<{ notifi
   }
   return { notified, failed };
 }
+
+/** The notice for a ready version: what changed since the version before it that readers could open. */
+async function noticeFor(versionId: string): Promise<PublishedNotice | null> {
+  const version = await GuidelineVersion.findByPk(versionId);
+  const brand = version && (await Brand.findByPk(version.brandId, { attributes: ['id', 'name', 'slug'] }));
+  if (!version || !brand || version.state !== 'ready') return null;
+  const previous = await GuidelineVersion.findOne({ where: { brandId: brand.id, state: 'ready', number: { [Op.lt]: version.number } }, order: [['number', 'DESC']], attributes: ['snapshot'] });
+  const [publisher] = version.publishedById
+    ? await sequelize.query<{ name: string }>('SELECT name FROM "user" WHERE id = :id', { replacements: { id: version.publishedById }, type: QueryTypes.SELECT })
+    : [];
+  return {
+    brandId: brand.id,
+    brandName: brand.name,
+    slug: brand.slug,
+    versionNumber: version.number,
+    note: version.note,
+    publishedBy: { id: version.publishedById ?? '', name: publisher?.name ?? 'The studio' },
+    summary: previous ? changeSummary(compareSnapshots(previous.snapshot as Snapshot, version.snapshot as Snapshot)) : ['First published version'],
+  };
+}
+
+/** One job per ready version; not retried, so a follower is never e-mailed twice about one version. */
+export const publishNoticesJob = defineJob<{ versionId: string }>({
+  name: 'publish-notices',
+  retryLimit: 0,
+  retryDelay: 0,
+  expireInSeconds: 10 * 60,
+  async run({ versionId }) {
+    const notice = await noticeFor(versionId);
+    if (notice) await notifyPublished(notice);
+  },
+});
+
+onVersionReady({ send: (versionId, t) => sendJob(publishNoticesJob, { versionId }, { db: inTransaction(t) }) });

@@ -1,24 +1,17 @@
-// Print-ready PDFs: a pg-boss job prints a version's print edition as a book in one warm Chromium; each PDF is
-// kept per version and paper size, since a version never changes.
+// Print-ready PDFs: the build job (steps/pdf.server.ts) prints a version's built print edition as a book, and its
+// presentation as slides, in one warm Chromium; each PDF is written once with the version's other files.
 import { existsSync } from 'node:fs';
-import { CHROMIUM_PATH, DATABASE_URL, SITE_URL } from 'astro:env/server';
-import PgBoss from 'pg-boss';
+import { CHROMIUM_PATH } from 'astro:env/server';
 import { ParseSpeeds, PDFArray, PDFDict, PDFDocument, PDFHexString, PDFName, PDFRef, PDFString } from 'pdf-lib';
-import puppeteer, { type Browser } from 'puppeteer-core';
-import { Brand, GuidelineVersion, PdfExport, Studio } from '@db/models';
+import puppeteer, { type Browser, type HTTPRequest, type Page } from 'puppeteer-core';
 import { formatLongDate, SITE_LOCALE } from '@/lib/format';
 import { log } from '@/lib/log.server';
-import { storage } from '@/lib/storage/index.server';
-import { newKey } from '@/lib/storage/storage';
-import { PRINT_COOKIE, printPass } from './print-grant.server';
 import { printRequestAllowed } from './print-requests';
-import { versionPath } from './snapshot-urls';
 
 export const PAPER_SIZES = ['a4', 'letter'] as const;
 export type PaperSize = (typeof PAPER_SIZES)[number];
 /** What a PDF export prints: the print edition on a paper size, or the reveal presentation's 16:9 slides. */
 export type PdfEdition = PaperSize | 'slides';
-const QUEUE = 'pdf-export';
 
 let browser: Promise<Browser> | null = null;
 /** The last time Chromium failed to start, remembered for a minute so readers get the reason at once. */
@@ -73,27 +66,63 @@ export interface BookMeta {
 }
 
 /**
+ * Where Chromium reads a page to print. `built` answers the version's own requests (the page, its CSS, fonts and
+ * images) from the files a build wrote, so printing never goes through the web server; without it, or with
+ * `serverFallback` for a file the build did not write, an allowed request goes to the server with the print pass.
+ */
+export interface PrintSource {
+  url: string;
+  cookie?: { name: string; value: string };
+  built?: (url: URL) => Promise<{ body: Buffer; type: string } | null>;
+  serverFallback?: boolean;
+}
+
+/**
+ * A page of the warm Chromium loaded from `source` with scripts off, allowed only the version's own files
+ * (printRequestAllowed), fonts settled. `blocked` collects what was refused, for the log.
+ */
+async function openPrintPage(source: PrintSource): Promise<{ page: Page; blocked: string[] }> {
+  const page = await (await warmBrowser()).newPage();
+  const blocked: string[] = [];
+  const refuse = (request: HTTPRequest) => {
+    blocked.push(request.url().slice(0, 120));
+    return request.abort('blockedbyclient');
+  };
+  try {
+    await page.setJavaScriptEnabled(false);
+    await page.setRequestInterception(true);
+    page.on('request', (request) => {
+      void (async () => {
+        if (!printRequestAllowed(request.url(), request.method(), source.url)) return refuse(request);
+        if (source.built && !request.url().startsWith('data:')) {
+          const hit = await source.built(new URL(request.url()));
+          if (hit) return request.respond({ status: 200, contentType: hit.type, body: hit.body });
+          if (!source.serverFallback) return refuse(request);
+        }
+        return request.continue();
+      })().catch((err) => log.warn({ err, url: request.url().slice(0, 120) }, 'pdf: a print request failed'));
+    });
+    if (source.cookie) await page.setCookie({ ...source.cookie, url: new URL(source.url).origin, httpOnly: true });
+    await page.goto(source.url, { waitUntil: 'load', timeout: 60_000 });
+    await page.evaluate(() => document.fonts.ready.then(() => undefined));
+    return { page, blocked };
+  } catch (err) {
+    await page.close();
+    throw err;
+  }
+}
+
+/**
  * Print a version's print edition as a book, in two passes on one loaded page: the body first (running heads,
  * folios from 1, an outline from its section headings), then the cover and contents with the page each section
  * starts on, read back from the body's outline; pdf-lib puts the front matter before the body and sets the metadata.
  * Chromium may fetch only that version's own files (printRequestAllowed); scripts never run.
  */
-export async function printBook(url: string, cookie: { name: string; value: string } | undefined, meta: BookMeta, onProgress?: (percent: number) => Promise<unknown>): Promise<Buffer> {
-  const page = await (await warmBrowser()).newPage();
-  const blocked: string[] = [];
+export async function printBook(source: PrintSource, meta: BookMeta, onProgress?: (percent: number) => Promise<unknown>): Promise<Buffer> {
   const t0 = performance.now();
+  const { page, blocked } = await openPrintPage(source);
   const times: number[] = [];
   try {
-    await page.setJavaScriptEnabled(false);
-    await page.setRequestInterception(true);
-    page.on('request', (request) => {
-      if (printRequestAllowed(request.url(), request.method(), url)) return void request.continue();
-      blocked.push(request.url().slice(0, 120));
-      return void request.abort('blockedbyclient');
-    });
-    if (cookie) await page.setCookie({ ...cookie, url: new URL(url).origin, httpOnly: true });
-    await page.goto(url, { waitUntil: 'load', timeout: 60_000 });
-    await page.evaluate(() => document.fonts.ready.then(() => undefined));
     await page.evaluate(() => void (document.documentElement.dataset.part = 'body'));
     const titles = await page.evaluate(() => [...document.querySelectorAll('.print-body section[data-print-page] > header > h1')].map((h) => h.textContent ?? ''));
     times.push(performance.now());
@@ -110,10 +139,11 @@ export async function printBook(url: string, cookie: { name: string; value: stri
     }, starts.map((p) => p + 1));
     const front = await PDFDocument.load(await page.pdf({ preferCSSPageSize: true, printBackground: true, tagged: false, timeout: 60_000 }), { parseSpeed: ParseSpeeds.Fastest });
     times.push(performance.now());
-    if (blocked.length) log.warn({ path: new URL(url).pathname, blocked: blocked.length, first: blocked.slice(0, 3) }, 'pdf: requests blocked while printing');
+    const path = new URL(source.url).pathname;
+    if (blocked.length) log.warn({ path, blocked: blocked.length, first: blocked.slice(0, 3) }, 'pdf: requests blocked while printing');
     const bound = Buffer.from(await bindBook(book, front, starts, meta));
     const ms = (a: number, b: number) => Math.round(b - a);
-    log.info({ path: new URL(url).pathname, loadMs: ms(t0, times[0]), bodyMs: ms(times[0], times[1]), frontMs: ms(times[1], times[2]), bindMs: ms(times[2], performance.now()) }, 'pdf: printed');
+    log.info({ path, loadMs: ms(t0, times[0]), bodyMs: ms(times[0], times[1]), frontMs: ms(times[1], times[2]), bindMs: ms(times[2], performance.now()) }, 'pdf: printed');
     return bound;
   } finally {
     await page.close();
@@ -124,21 +154,10 @@ export async function printBook(url: string, cookie: { name: string; value: stri
  * Print the reveal presentation: one 16:9 page per slide (the page size is the presentation's own @page rule),
  * under the same rules as the book: scripts off, only the version's own files, then the metadata set by pdf-lib.
  */
-export async function printSlides(url: string, cookie: { name: string; value: string } | undefined, meta: BookMeta): Promise<Buffer> {
-  const page = await (await warmBrowser()).newPage();
-  let blocked = 0;
+export async function printSlides(source: PrintSource, meta: BookMeta): Promise<Buffer> {
+  const { page, blocked } = await openPrintPage(source);
   try {
-    await page.setJavaScriptEnabled(false);
-    await page.setRequestInterception(true);
-    page.on('request', (request) => {
-      if (printRequestAllowed(request.url(), request.method(), url)) return void request.continue();
-      blocked++;
-      return void request.abort('blockedbyclient');
-    });
-    if (cookie) await page.setCookie({ ...cookie, url: new URL(url).origin, httpOnly: true });
-    await page.goto(url, { waitUntil: 'load', timeout: 60_000 });
-    await page.evaluate(() => document.fonts.ready.then(() => undefined));
-    if (blocked) log.warn({ path: new URL(url).pathname, blocked }, 'pdf: requests blocked while printing slides');
+    if (blocked.length) log.warn({ path: new URL(source.url).pathname, blocked: blocked.length, first: blocked.slice(0, 3) }, 'pdf: requests blocked while printing slides');
     const pdf = await page.pdf({ preferCSSPageSize: true, printBackground: true, tagged: true, timeout: 120_000 });
     const doc = await PDFDocument.load(pdf, { updateMetadata: false, parseSpeed: ParseSpeeds.Fastest });
     describe(doc, meta);
@@ -211,23 +230,6 @@ async function bindBook(book: PDFDocument, front: PDFDocument, starts: number[],
   return book.save({ objectsPerTick: Infinity });
 }
 
-let boss: Promise<PgBoss> | null = null;
-
-/** pg-boss on our PostgreSQL, with this process working the PDF queue one job at a time. */
-function queue(): Promise<PgBoss> {
-  boss ??= (async () => {
-    // Chromium starts while pg-boss does, so the first PDF does not wait for both in turn.
-    Promise.resolve().then(warmBrowser).catch(() => undefined);
-    const b = new PgBoss({ connectionString: DATABASE_URL, schema: 'pgboss', max: 3 });
-    b.on('error', (err) => log.error({ err }, 'pdf: queue error'));
-    await b.start();
-    await b.createQueue(QUEUE);
-    await b.work<{ exportId: string }>(QUEUE, { batchSize: 1, pollingIntervalSeconds: 0.5 }, async ([job]) => renderExport(job.data.exportId));
-    return b;
-  })();
-  return boss;
-}
-
 /** Title, author (the studio), subject and keywords of a version's PDF. */
 export function bookMeta(brandName: string, studioName: string, number: number, published: Date): BookMeta {
   const date = formatLongDate(published, SITE_LOCALE);
@@ -249,59 +251,4 @@ export function slidesMeta(brandName: string, studioName: string, number: number
     keywords: [brandName, 'brand identity', 'presentation', `version ${number}`],
     published,
   };
-}
-
-async function renderExport(exportId: string): Promise<void> {
-  const job = await PdfExport.findByPk(exportId);
-  if (!job) return;
-  const version = await GuidelineVersion.findByPk(job.versionId);
-  const brand = version && (await Brand.findByPk(version.brandId));
-  if (!version || !brand) return;
-  await job.update({ state: 'rendering', progress: 20 });
-  try {
-    const studio = await Studio.findByPk(brand.studioId, { attributes: ['name'] });
-    const author = studio?.name ?? brand.name;
-    const pass = { name: PRINT_COOKIE, value: printPass(version.id) };
-    const pdf =
-      job.size === 'slides'
-        ? await printSlides(`${SITE_URL}${versionPath(brand.slug, version.number)}/presentation?print`, pass, slidesMeta(brand.name, author, version.number, version.publishedAt))
-        : await printBook(`${SITE_URL}${versionPath(brand.slug, version.number)}/print?size=${job.size}`, pass, bookMeta(brand.name, author, version.number, version.publishedAt), (progress) => job.update({ progress }));
-    await job.update({ progress: 95 });
-    const key = newKey(brand.id, 'pdf', 'pdf');
-    await storage.put(key, pdf, 'application/pdf');
-    await job.update({ state: 'done', progress: 100, storageKey: key, error: null });
-  } catch (err) {
-    log.error({ err, exportId }, 'pdf: render failed');
-    await job.update({ state: 'failed', error: String((err as Error).message).slice(0, 500) });
-  }
-}
-
-export interface PdfStatus {
-  state: PdfExport['state'];
-  progress: number;
-  error: string | null;
-  /** True when the server has no working browser to print with (the reason is in `error`). */
-  printerMissing?: boolean;
-}
-
-/** The PDF of a version at a size (or its slides): its bytes when ready, otherwise its progress (queued on first ask). */
-export async function versionPdf(version: GuidelineVersion, size: PdfEdition): Promise<{ pdf: Buffer } | { status: PdfStatus }> {
-  const [job, created] = await PdfExport.findOrCreate({ where: { versionId: version.id, size }, defaults: { versionId: version.id, size, state: 'queued', progress: 0, storageKey: null, error: null } });
-  if (job.state === 'done' && job.storageKey) {
-    const pdf = await storage.get(job.storageKey);
-    if (pdf) return { pdf };
-  }
-  // No browser to print with: say so now, naming it, instead of queueing a job that can only fail.
-  const problem = pdfPrinterProblem();
-  if (problem) return { status: { state: 'failed', progress: 0, error: problem, printerMissing: true } };
-  // A failure is shown for a minute, then the next ask tries again.
-  const stale = Date.now() - job.updatedAt.getTime() > 60_000;
-  const retry = (job.state === 'failed' && stale) || (job.state === 'done' && !created);
-  if (created || retry) {
-    if (retry) await job.update({ state: 'queued', progress: 0, error: null });
-    await (await queue()).send(QUEUE, { exportId: job.id }, { retryLimit: 1 });
-  } else {
-    await queue(); // make sure this process works the queue too
-  }
-  return { status: { state: job.state, progress: job.progress, error: job.error } };
 }

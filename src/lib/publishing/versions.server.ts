@@ -1,4 +1,5 @@
-// Publishing: one transaction turns the draft and the identity into a numbered, dated, immutable version.
+// Publishing: one transaction turns the draft and the identity into a numbered, dated, immutable version in the
+// `building` state and queues its build; readers see it once the build job has made it `ready`.
 import { QueryTypes } from 'sequelize';
 import { Brand, GuidelineDraft, GuidelineVersion } from '@db/models';
 import { audit } from '@/lib/audit.server';
@@ -8,11 +9,10 @@ import { ApiError } from '@/lib/http/api';
 import { withStoredAttrs } from '@/blocks';
 import type { GuidelineDoc } from '@/lib/guideline/document';
 import { loadIdentity } from '@/lib/identity/identity.server';
-import { log } from '@/lib/log.server';
 import type { Identity, LightParts } from '@/lib/identity/types';
-import { notifyPublished } from '@/lib/notices/publish.server';
+import type { BuildStep, VersionState } from './build/contract';
+import { queueBuild } from './build/run.server';
 import { changeSummary, compareSnapshots, type Snapshot } from './diff';
-import { buildNow } from './build/build-now.server';
 import { siteCache } from './site-cache';
 
 export interface VersionView {
@@ -21,6 +21,12 @@ export interface VersionView {
   note: string;
   author: { id: string | null; name: string | null };
   draftRevision: number;
+  /** building until the build job has written every file; only ready versions are served as "latest". */
+  state: VersionState;
+  /** Why the build failed (the step and its reason), or null. */
+  buildError: string | null;
+  buildSteps: BuildStep[];
+  builtAt: string | null;
 }
 
 /** The key of a logo's own version file inside a version's files. */
@@ -30,17 +36,16 @@ const emptyDraft = () => new ApiError(409, 'empty_draft', 'There is nothing to p
 
 /** Publish the current draft as the next version. */
 export async function publishVersion(caller: Caller, brand: Brand, note: string): Promise<VersionView> {
-  // Refuse an empty draft before copying any file (checked again under the lock below).
+  // Refuse an empty draft at once (checked again under the lock below).
   const current = await GuidelineDraft.findByPk(brand.id, { attributes: ['doc'] });
   if (!current || current.doc.content.length === 0) throw emptyDraft();
   const identity = await loadIdentity(brand);
-  let previous: GuidelineVersion | null = null;
   const version = await sequelize.transaction(async (t) => {
     // One publisher at a time per brand, so numbers never collide.
     await sequelize.query('SELECT pg_advisory_xact_lock(hashtext(:key))', { replacements: { key: `publish:${brand.id}` }, transaction: t });
     const draft = await GuidelineDraft.findByPk(brand.id, { transaction: t });
     if (!draft || draft.doc.content.length === 0) throw emptyDraft();
-    previous = await GuidelineVersion.findOne({ where: { brandId: brand.id }, order: [['number', 'DESC']], transaction: t });
+    const previous = await GuidelineVersion.findOne({ where: { brandId: brand.id }, order: [['number', 'DESC']], attributes: ['number'], transaction: t });
     const created = await GuidelineVersion.create(
       {
         brandId: brand.id,
@@ -51,54 +56,59 @@ export async function publishVersion(caller: Caller, brand: Brand, note: string)
         // The build's "files" step copies them (build/steps/files.server.ts).
         files: {},
         publishedById: caller.id,
+        state: 'building',
       },
       { transaction: t },
     );
     await audit({ actorId: caller.id, action: 'version.publish', targetType: 'version', targetId: created.id, brandId: brand.id, studioId: brand.studioId, details: { number: created.number, note, draftRevision: draft.revision } }, t);
+    // The build job exists exactly when the version does; the follower notices go out once it is ready.
+    await queueBuild(created.id, t);
     return created;
   });
-  // STAND-IN until the build job lands (h-build): build the version in this request.
-  await buildNow(version.id).catch((err) => log.error({ err }, 'publish: build failed'));
   siteCache.forget();
-  const prev = previous as GuidelineVersion | null;
-  const summary = prev ? changeSummary(compareSnapshots(prev.snapshot as Snapshot, version.snapshot as Snapshot)) : ['First published version'];
-  await notifyPublished({
-    brandId: brand.id,
-    brandName: brand.name,
-    slug: brand.slug,
-    versionNumber: version.number,
-    note,
-    publishedBy: { id: caller.id, name: caller.name },
-    summary,
-  }).catch((err) => log.error({ err }, 'publish: notice failed'));
-  return { number: version.number, publishedAt: version.publishedAt.toISOString(), note, author: { id: caller.id, name: caller.name }, draftRevision: version.draftRevision };
+  return viewOf(version, { id: caller.id, name: caller.name });
 }
 
-/** Every version of a brand, newest first, with its author's name. */
+/** A version row as the API shows it. */
+function viewOf(v: GuidelineVersion, author: VersionView['author']): VersionView {
+  return {
+    number: v.number,
+    publishedAt: new Date(v.publishedAt).toISOString(),
+    note: v.note,
+    author,
+    draftRevision: v.draftRevision,
+    state: v.state,
+    buildError: v.buildError ?? null,
+    buildSteps: v.buildSteps ?? [],
+    builtAt: v.builtAt ? new Date(v.builtAt).toISOString() : null,
+  };
+}
+
+/** Every version of a brand, newest first, with its author's name and its build's state. */
 export async function listVersions(brand: Brand): Promise<VersionView[]> {
-  const rows = await sequelize.query<{ number: number; published_at: Date; note: string; published_by_id: string | null; name: string | null; draft_revision: number }>(
-    `SELECT v.number, v.published_at, v.note, v.published_by_id, u.name, v.draft_revision
-       FROM guideline_versions v LEFT JOIN "user" u ON u.id = v.published_by_id
-      WHERE v.brand_id = :brandId ORDER BY v.number DESC`,
-    { replacements: { brandId: brand.id }, type: QueryTypes.SELECT },
-  );
-  return rows.map((r) => ({
-    number: r.number,
-    publishedAt: new Date(r.published_at).toISOString(),
-    note: r.note,
-    author: { id: r.published_by_id, name: r.name },
-    draftRevision: r.draft_revision,
-  }));
+  const rows = await GuidelineVersion.findAll({ where: { brandId: brand.id }, order: [['number', 'DESC']], attributes: ['number', 'note', 'draftRevision', 'publishedById', 'publishedAt', 'state', 'builtAt', 'buildSteps', 'buildError'] });
+  const ids = [...new Set(rows.map((r) => r.publishedById).filter((id): id is string => Boolean(id)))];
+  const people = ids.length ? await sequelize.query<{ id: string; name: string }>('SELECT id, name FROM "user" WHERE id IN (:ids)', { replacements: { ids }, type: QueryTypes.SELECT }) : [];
+  const names = new Map(people.map((p) => [p.id, p.name]));
+  return rows.map((r) => viewOf(r, { id: r.publishedById, name: r.publishedById ? (names.get(r.publishedById) ?? null) : null }));
+}
+
+/** One version of a brand as the API shows it (the publishing screen polls this while it builds), or null. */
+export async function versionView(brand: Brand, number: number): Promise<VersionView | null> {
+  return (await listVersions(brand)).find((v) => v.number === number) ?? null;
 }
 
 /** A version's columns without its snapshot: enough to check access and draw the page frame. */
-const LIGHT = ['id', 'brandId', 'number', 'note', 'draftRevision', 'files', 'publishedById', 'publishedAt', 'state', 'manifest'] as const;
+const LIGHT = ['id', 'brandId', 'number', 'note', 'draftRevision', 'files', 'publishedById', 'publishedAt', 'state', 'manifest', 'builtAt'] as const;
 
-/** One version by number (latest when number is null), or null; the snapshot only when asked for. */
+/**
+ * One version by number, or the latest READY one when number is null (a version still building, or failed, is
+ * never "latest": readers keep the previous one meanwhile); null when there is none. The snapshot only when asked.
+ */
 export async function findVersion(brandId: string, number: number | null, opts: { snapshot?: boolean } = {}): Promise<GuidelineVersion | null> {
   const attributes = opts.snapshot ? undefined : [...LIGHT];
   return number === null
-    ? GuidelineVersion.findOne({ where: { brandId }, order: [['number', 'DESC']], attributes })
+    ? GuidelineVersion.findOne({ where: { brandId, state: 'ready' }, order: [['number', 'DESC']], attributes })
     : GuidelineVersion.findOne({ where: { brandId, number }, attributes });
 }
 
@@ -114,9 +124,9 @@ export async function versionLogoLightParts(version: GuidelineVersion, logoId: s
   return identity.logos.find((l) => l.id === logoId)?.lightParts ?? 'holes';
 }
 
-/** The newest version number of a brand, or null. */
+/** The newest READY version number of a brand, or null. */
 export async function latestNumber(brandId: string): Promise<number | null> {
-  return (await GuidelineVersion.max<number, GuidelineVersion>('number', { where: { brandId } })) ?? null;
+  return (await GuidelineVersion.max<number, GuidelineVersion>('number', { where: { brandId, state: 'ready' } })) ?? null;
 }
 
 /** What changed from version `from` to version `to` ("draft" compares against the working draft). */

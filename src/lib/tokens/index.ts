@@ -5,4 +5,4 @@ export { identityTokens, ROOT_PX, type Token, type Dimension, type Typography } 
 export { kebabName } from './names';
 export { toDtcg, toDtcgHex } from './dtcg';
 export { toCss, toScss, toTailwindTheme, cssValue } from './text-formats';
-export { tokenFile, TOKEN_FORMATS, type TokenFile } from './file';
+export { tokenFile, tokenFilename, TOKEN_FORMATS, type TokenFile } from './file';

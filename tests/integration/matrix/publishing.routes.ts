@@ -8,6 +8,8 @@ const everyone = only(200, ['owner', 'editor', 'reviewer', 'partner', 'viewer'])
 export default withoutClientWork([
   { method: 'GET', file: 'brands/[id]/versions/index.ts', path: (f) => `${b(f)}/versions`, expect: everyone },
   { method: 'POST', file: 'brands/[id]/versions/index.ts', path: (f) => `${b(f)}/versions`, body: () => ({ note: 'Matrix publish' }), expect: only(201, ['owner', 'editor']) },
+  // Version 1 of a fixture brand is building or built, never failed: a retry is refused, and changes nothing.
+  { method: 'POST', file: 'brands/[id]/versions/[number]/build.ts', path: (f) => `${b(f)}/versions/1/build`, expect: only(409, ['owner', 'editor']), mutates: false },
   { method: 'GET', file: 'brands/[id]/versions/check.ts', path: (f) => `${b(f)}/versions/check`, expect: only(200, ['owner', 'editor']) },
   { method: 'GET', file: 'brands/[id]/versions/compare.ts', path: (f) => `${b(f)}/versions/compare?from=1&to=draft`, expect: only(200, ['owner', 'editor', 'reviewer']) },
   { method: 'GET', file: 'brands/[id]/share-links/index.ts', path: (f) => `${b(f)}/share-links`, expect: only(200, ['owner']) },

@@ -8,7 +8,16 @@ import { QueryRoot } from '@/components/app/QueryRoot';
 import { When } from '@/components/ui/When';
 import { formatDate } from '@/lib/format';
 
-interface Version { number: number; publishedAt: string; note: string; author: { name: string | null } }
+interface BuildStepView { id: string; label: string; state: 'waiting' | 'running' | 'done' | 'failed'; count?: number; note?: string }
+interface Version {
+  number: number;
+  publishedAt: string;
+  note: string;
+  author: { name: string | null };
+  state: 'building' | 'ready' | 'failed';
+  buildError: string | null;
+  buildSteps: BuildStepView[];
+}
 interface Compare { summary: string[] }
 type ShareLink = ShareLinkView;
 
@@ -110,7 +119,7 @@ function Publish({ brandId, canPublish, latest }: { brandId: string; canPublish:
             </label>
           )}
           {publish.isError && <p role="alert" className="rounded-md bg-danger-wash px-3 py-2 text-sm text-danger">{publish.error.message}</p>}
-          {publish.isSuccess && <p role="status" className="text-sm text-ok">Version {publish.data.version.number} is live.</p>}
+          {publish.isSuccess && <p role="status" className="text-sm text-ok">Version {publish.data.version.number} is saved and being built; readers see it once every page and file is ready (progress below).</p>}
           <button className="btn-primary" disabled={publish.isPending || note.trim() === '' || blocked}>{publish.isPending ? 'Publishing…' : findings.length > 0 ? 'Publish anyway' : 'Publish'}</button>
         </form>
       ) : (
@@ -129,24 +138,69 @@ function PdfProblem({ message }: { message: string }) {
   );
 }
 
-function Versions({ slug, versions, pdfProblem }: { slug: string; versions: Version[]; pdfProblem: string | null }) {
+const STEP_STATE: Record<BuildStepView['state'], string> = { waiting: 'Waiting', running: 'Working', done: 'Done', failed: 'Stopped' };
+
+/** A version's build, step by step, while it runs or after it stopped; a retry for those who publish. */
+function BuildProgress({ brandId, version, canPublish }: { brandId: string; version: Version; canPublish: boolean }) {
+  const queryClient = useQueryClient();
+  const retry = useMutation({
+    mutationFn: () => api(`/api/brands/${brandId}/versions/${version.number}/build`, { method: 'POST' }),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: ['versions', brandId] }),
+  });
+  const failed = version.state === 'failed';
+  return (
+    <div className={`mt-2 w-full rounded-md px-3 py-2 text-sm ${failed ? 'bg-danger-wash' : 'bg-plumb-wash'}`} data-testid={`build-${version.number}`}>
+      <p className={`font-semibold ${failed ? 'text-danger' : 'text-plumb-deep'}`} role={failed ? 'alert' : 'status'}>
+        {failed ? 'This version could not be built; readers still see the previous one.' : 'Building this version: readers see the previous one until it is ready.'}
+      </p>
+      {version.buildSteps.length > 0 && (
+        <ol className="mt-2 space-y-1" aria-label={`Build of version ${version.number}`}>
+          {version.buildSteps.map((step) => (
+            <li key={step.id} className="flex gap-3">
+              <span className={`w-16 shrink-0 ${step.state === 'done' ? 'text-ok' : step.state === 'failed' ? 'text-danger' : step.state === 'running' ? 'font-semibold text-ink' : 'text-ink-faint'}`}>{STEP_STATE[step.state]}</span>
+              <span className="text-ink">{step.label}{step.count ? <span className="text-ink-soft"> · {step.count} file{step.count === 1 ? '' : 's'}</span> : null}{step.note ? <span className="block text-warn">{step.note}</span> : null}</span>
+            </li>
+          ))}
+        </ol>
+      )}
+      {failed && <p className="mt-2 text-ink">{version.buildError ?? 'The reason was not recorded.'}</p>}
+      {failed && canPublish && (
+        <div className="mt-2 flex items-center gap-3">
+          <button type="button" className="btn-quiet px-3 py-1" disabled={retry.isPending} onClick={() => retry.mutate()}>{retry.isPending ? 'Starting…' : 'Build it again'}</button>
+          {retry.isError && <span role="alert" className="text-danger">{retry.error.message}</span>}
+        </div>
+      )}
+    </div>
+  );
+}
+
+function Versions({ brandId, slug, versions, pdfProblem, canPublish }: { brandId: string; slug: string; versions: Version[]; pdfProblem: string | null; canPublish: boolean }) {
   if (versions.length === 0) return <Card title="Versions" id="versions-title"><p className="text-ink-soft">No versions yet. Publish the draft to make the first one.</p></Card>;
+  // The current version is the newest one that is built: a newer one still building is not served yet.
+  const current = versions.find((v) => v.state === 'ready')?.number ?? null;
   return (
     <Card title="Versions" id="versions-title">
       {pdfProblem && <PdfProblem message={pdfProblem} />}
       <ol className="divide-y divide-rule">
-        {versions.map((v, i) => (
+        {versions.map((v) => (
           <li key={v.number} className="flex flex-wrap items-baseline gap-x-4 gap-y-1 py-3">
-            <a className="font-semibold text-plumb hover:underline" href={`/b/${slug}/v/${v.number}`}>Version {v.number}</a>
-            {i === 0 && <span className="rounded-full bg-plumb-wash px-2 py-0.5 text-xs font-semibold text-plumb-deep">current</span>}
+            {v.state === 'ready' ? <a className="font-semibold text-plumb hover:underline" href={`/b/${slug}/v/${v.number}`}>Version {v.number}</a> : <span className="font-semibold text-ink">Version {v.number}</span>}
+            {v.number === current && <span className="rounded-full bg-plumb-wash px-2 py-0.5 text-xs font-semibold text-plumb-deep">current</span>}
+            {v.state === 'building' && <span className="rounded-full bg-warn-wash px-2 py-0.5 text-xs font-semibold text-warn">building</span>}
+            {v.state === 'failed' && <span className="rounded-full bg-danger-wash px-2 py-0.5 text-xs font-semibold text-danger">not built</span>}
             <span className="text-sm text-ink-soft"><When value={v.publishedAt} as="dateTime" />{v.author.name ? ` · ${v.author.name}` : ''}</span>
-            <span className="ml-auto flex gap-3 text-sm">
-              <a className="hover:underline" href={`/b/${slug}/v/${v.number}/guideline.pdf?size=a4`}>PDF A4</a>
-              <a className="hover:underline" href={`/b/${slug}/v/${v.number}/guideline.pdf?size=letter`}>PDF Letter</a>
-              <a className="hover:underline" href={`/b/${slug}/v/${v.number}/presentation`}>Presentation</a>
-              <a className="hover:underline" href={`/b/${slug}/v/${v.number}/presentation.pdf`}>Slides PDF</a>
-            </span>
+            {v.state === 'ready' && (
+              <span className="ml-auto flex gap-3 text-sm">
+                <a className="hover:underline" href={`/b/${slug}/v/${v.number}/guideline.pdf?size=a4`}>PDF A4</a>
+                <a className="hover:underline" href={`/b/${slug}/v/${v.number}/guideline.pdf?size=letter`}>PDF Letter</a>
+                <a className="hover:underline" href={`/b/${slug}/v/${v.number}/presentation`}>Presentation</a>
+                <a className="hover:underline" href={`/b/${slug}/v/${v.number}/presentation.pdf`}>Slides PDF</a>
+                <a className="hover:underline" href={`/b/${slug}/v/${v.number}/tokens?format=dtcg`}>Tokens</a>
+              </span>
+            )}
             <p className="w-full text-sm">{v.note}</p>
+            {v.state !== 'ready' && <BuildProgress brandId={brandId} version={v} canPublish={canPublish} />}
+            {v.state === 'ready' && v.buildSteps.filter((s) => s.note).map((s) => <p key={s.id} className="w-full text-sm text-warn">{s.note}</p>)}
           </li>
         ))}
       </ol>
@@ -267,14 +321,19 @@ interface PanelProps {
 }
 
 function Panel({ brandId, slug, canPublish, canShare, pdfProblem = null }: PanelProps) {
-  const versions = useQuery({ queryKey: ['versions', brandId], queryFn: () => api<{ versions: Version[] }>(`/api/brands/${brandId}/versions`).then((r) => r.versions) });
+  const versions = useQuery({
+    queryKey: ['versions', brandId],
+    queryFn: () => api<{ versions: Version[] }>(`/api/brands/${brandId}/versions`).then((r) => r.versions),
+    // While a version builds, its steps are asked for again every second.
+    refetchInterval: (query) => (query.state.data?.some((v) => v.state === 'building') ? 1000 : false),
+  });
   if (versions.isPending) return <p className="panel px-6 py-8 text-ink-soft" role="status">Loading versions…</p>;
   if (versions.isError) return <p className="panel px-6 py-8 text-danger" role="alert">{versions.error.message}</p>;
   return (
     <div className="grid gap-8 lg:grid-cols-2">
       <div className="space-y-8">
         {canPublish && <Publish brandId={brandId} canPublish={canPublish} latest={versions.data[0]?.number ?? null} />}
-        <Versions slug={slug} versions={versions.data} pdfProblem={pdfProblem} />
+        <Versions brandId={brandId} slug={slug} versions={versions.data} pdfProblem={pdfProblem} canPublish={canPublish} />
       </div>
       {canShare && <ShareLinks brandId={brandId} versions={versions.data} />}
     </div>

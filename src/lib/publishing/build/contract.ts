@@ -13,6 +13,8 @@ export interface BuildStep {
   state: 'waiting' | 'running' | 'done' | 'failed';
   /** Files written so far by this step (optional, for the progress line). */
   count?: number;
+  /** Something the step left out without failing the build, in words for the publishing screen. */
+  note?: string;
   startedAt?: string;
   finishedAt?: string;
 }
@@ -77,6 +79,12 @@ export const presentationPath = (form: 'version' | 'current' | 'print') =>
 /** Manifest paths of the version's own copies of the app's stylesheets and scripts (…/v/:n/static/<name>). */
 export const staticPath = (name: string) => `static/${name}`;
 
+/** Manifest path of a version's PDF: the guidelines on a paper size, or the presentation's slides. */
+export const pdfPath = (edition: 'a4' | 'letter' | 'slides') => (edition === 'slides' ? 'presentation.pdf' : filePath('guideline.pdf', `size=${edition}`));
+
+/** Manifest path of a design-token file in one format (see TOKEN_FORMATS). */
+export const tokenPath = (format: string) => filePath('tokens', `format=${format}`);
+
 /** A strong ETag from a stored file's hash. */
 export const entryEtag = (entry: Pick<ManifestEntry, 'hash'>) => `"${entry.hash.slice(0, 32)}"`;
 
@@ -94,6 +102,8 @@ export interface BuildWriter {
   read(path: string): Promise<Buffer | null>;
   /** Manifest paths written so far. */
   paths(): string[];
+  /** The entry written under a path so far (its key, hash, size and type), or null. */
+  entry(path: string): ManifestEntry | null;
 }
 
 /** What a step knows of the version it builds; it loads anything else it needs through src/lib. */
@@ -106,6 +116,16 @@ export interface BuildContext {
   writer: BuildWriter;
   /** Report the number of files this step has written so far (shown on the publishing screen). */
   progress(count: number): Promise<void>;
+  /** Say what the step left out without failing (shown beside the step on the publishing screen). */
+  note(text: string): void;
+}
+
+/**
+ * A step that cannot succeed however often the job retries it (e.g. no Chromium to print with): the build fails at
+ * once with this reason; the publishing screen offers a retry for when whoever runs the server has fixed it.
+ */
+export class BuildBlocked extends Error {
+  override name = 'BuildBlocked';
 }
 
 /** One step of the build, run in order by the build job; a throw fails the build with the step named. */

@@ -28,5 +28,6 @@ export function createBuildWriter(brandId: string, versionId: string): BuildWrit
       return Object.hasOwn(entries, path) ? storage.get(entries[path].key) : null;
     },
     paths: () => Object.keys(entries),
+    entry: (path) => (Object.hasOwn(entries, path) ? entries[path] : null),
   };
 }
