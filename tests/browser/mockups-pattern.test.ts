@@ -7,6 +7,7 @@ import { chromium, type Browser, type BrowserContext, type Page } from 'playwrig
 import { afterAll, beforeAll, expect, test } from 'vitest';
 import { FIXTURE_SVG } from '../integration/fixtures';
 import { baseUrl, type Client, signUpFresh } from '../support/client';
+import { waitForBuild } from '../support/publish';
 import { launchOptions } from '../support/browser';
 
 let browser: Browser;
@@ -93,7 +94,9 @@ test('both blocks are set up in the editor, published, and read and downloaded o
   expect(drawn.status()).toBe(200);
   expect(drawn.headers()['content-type']).toBe('image/png');
 
-  expect((await owner.post(`/api/brands/${brandId}/versions`, { note: 'Blocks in a browser' })).status).toBe(201);
+  const published = await owner.post(`/api/brands/${brandId}/versions`, { note: 'Blocks in a browser' });
+  expect(published.status).toBe(201);
+  expect((await waitForBuild(owner, brandId, published.body.version.number)).state).toBe('ready');
   const { url } = (await owner.post(`/api/brands/${brandId}/share-links`, { allowDownloads: true })).body.shareLink;
   expect(errors).toEqual([]);
   await context.close();

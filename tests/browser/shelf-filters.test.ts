@@ -3,6 +3,7 @@ import { chromium, type Browser, type BrowserContext } from 'playwright-core';
 import { afterAll, beforeAll, expect, test } from 'vitest';
 import { DEMO_PASSWORD, DEMO_PEOPLE } from '@db/seeders/demo';
 import { baseUrl, signIn } from '../support/client';
+import { waitForBuild } from '../support/publish';
 import { launchOptions, settled } from '../support/browser';
 
 let browser: Browser;
@@ -89,7 +90,9 @@ test('an asset expiring soon is flagged on the shelf, and its rights reach the p
     baseRevision: 0,
     doc: { type: 'doc', content: [{ type: 'sectionHeading', attrs: { id: 'dl', title: 'Files', eyebrow: '', intro: '' } }, { type: 'downloads', attrs: { id: 'files', title: 'Files to download', assetIds: [], note: '' } }] },
   });
-  expect((await client.post(`/api/brands/${brandId}/versions`, { note: 'With files' })).status).toBe(201);
+  const published = await client.post(`/api/brands/${brandId}/versions`, { note: 'With files' });
+  expect(published.status).toBe(201);
+  expect((await waitForBuild(client, brandId, published.body.version.number)).state).toBe('ready');
   const slug = (await client.get(`/api/brands/${brandId}`)).body.brand.slug;
   const site = await owner.newPage();
   await site.setViewportSize({ width: 1280, height: 900 });

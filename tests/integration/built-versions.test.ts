@@ -14,6 +14,7 @@ import { AUDIENCES, pagePath, presentationPath, printPath, type Manifest } from 
 import { htmlUrls } from '@/lib/publishing/build/references';
 import { baseUrl, Client, signUpFresh } from '../support/client';
 import { closeDb, sql } from '../support/db';
+import { waitForBuild } from '../support/publish';
 import { FIXTURE_SVG } from './fixtures';
 
 let owner: Client;
@@ -64,6 +65,7 @@ beforeAll(async () => {
   const { revision } = (await owner.get(api('/guideline'))).body;
   expect((await owner.request('PUT', api('/guideline'), { baseRevision: revision, doc: { type: 'doc', content } })).status).toBe(200);
   expect((await owner.post(api('/versions'), { note: 'Built once' })).status).toBe(201);
+  await waitForBuild(owner, brandId, 1);
   const row = await readManifest(1);
   expect(row.build_error).toBeNull();
   expect(row.state).toBe('ready');
@@ -186,6 +188,7 @@ describe('versions over time', () => {
     const doc = { type: 'doc', content: [{ type: 'sectionHeading', attrs: { id: 'next', title: 'Next', eyebrow: '', intro: '' } }] };
     expect((await owner.request('PUT', api('/guideline'), { baseRevision: revision, doc })).status).toBe(200);
     expect((await owner.post(api('/versions'), { note: 'Second' })).status).toBe(201);
+    expect((await waitForBuild(owner, brandId, 2)).state).toBe('ready');
     const older = await fetchBytes(owner, `/b/${slug}/v/1`);
     expect(older.body.equals(await stored(pagePath({ latest: false, who: 'editor', downloads: true })))).toBe(true);
     expect(older.body.toString()).toContain('You are reading an earlier version');
@@ -232,12 +235,10 @@ describe('a build that cannot make a file', () => {
     const [row] = await sql('SELECT storage_key FROM brand_logos WHERE id = $1', [logo.id]);
     await rm(join(inject('filesDir'), row.storage_key));
     await owner.post(own('/versions'), { note: 'Broken' });
+    // The job tries again (pg-boss retries) before it gives the version up as failed.
+    await waitForBuild(owner, created.id, 1);
     type Row = { state: string; build_error: string | null; manifest: unknown };
-    let version: Row | undefined;
-    for (let i = 0; i < 100 && (!version || version.state === 'building'); i++) {
-      [version] = await sql<Row>('SELECT state, build_error, manifest FROM guideline_versions WHERE brand_id = $1 AND number = 1', [created.id]);
-      if (version?.state === 'building') await new Promise((r) => setTimeout(r, 200));
-    }
+    const [version] = await sql<Row>('SELECT state, build_error, manifest FROM guideline_versions WHERE brand_id = $1 AND number = 1', [created.id]);
     expect(version!.state).toBe('failed');
     expect(version!.manifest).toBeNull();
     expect(version!.build_error).toMatch(/logo "mark"/);

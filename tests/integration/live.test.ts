@@ -8,6 +8,7 @@ import { freePort } from '../../scripts/lib/postgres';
 import { startServer } from '../../scripts/lib/prepare';
 import { Client, baseUrl, joinBrand, signUpFresh, signUpUnverified, verifyByMail } from '../support/client';
 import { closeDb, sql } from '../support/db';
+import { waitForBuild } from '../support/publish';
 import { startTcpProxy, type TcpProxy } from '../support/tcp-proxy';
 
 const SECOND = 1000;
@@ -47,6 +48,8 @@ async function publish(note: string, title: string) {
   expect((await owner.request('PUT', api('/guideline'), { baseRevision: revision, doc })).status).toBe(200);
   const made = await owner.post(api('/versions'), { note });
   expect(made.status).toBe(201);
+  // Built by the job before any process serves it (the test measures the notice, not the build).
+  expect((await waitForBuild(owner, brandId, made.body.version.number)).state).toBe('ready');
   return made.body.version.number as number;
 }
 

@@ -4,6 +4,7 @@ import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { FIXTURE_SVG } from './fixtures';
 import { baseUrl, Client, signUpFresh } from '../support/client';
+import { waitForBuild } from '../support/publish';
 import { closeDb, sql } from '../support/db';
 
 let owner: Client;
@@ -48,6 +49,7 @@ beforeAll(async () => {
   };
   expect((await owner.request('PUT', `/api/brands/${brandId}/guideline`, { baseRevision: 0, doc })).status).toBe(200);
   expect((await owner.post(`/api/brands/${brandId}/versions`, { note: 'With a pattern' })).status).toBe(201);
+  expect((await waitForBuild(owner, brandId, 1)).state).toBe('ready');
   const { url } = (await owner.post(`/api/brands/${brandId}/share-links`, { allowDownloads: true })).body.shareLink;
   visitor = new Client();
   expect((await visitor.get(new URL(url).pathname)).status).toBe(303);

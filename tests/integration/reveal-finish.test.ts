@@ -8,6 +8,7 @@ import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { DEMO_BRANDS, DEMO_PEOPLE } from '@db/seeders/demo';
 import { baseUrl, Client, signIn, signUpFresh } from '../support/client';
 import { closeDb, sql } from '../support/db';
+import { waitForBuild } from '../support/publish';
 
 /** An open book (two blues, a paper-white spine) and an amber lamp standing apart: our own test drawing. */
 const BOOK_AND_LAMP = `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 160 120"><path d="M80 30 C62 18 36 16 14 22 L14 100 C36 94 62 96 80 108 Z" fill="#1f3a5f"/><path d="M80 30 C98 18 124 16 146 22 L146 100 C124 94 98 96 80 108 Z" fill="#2b4c78"/><path d="M80 30 L80 108" stroke="#faf7f0" stroke-width="6"/><circle cx="118" cy="12" r="9" fill="#e0a526"/></svg>`;
@@ -113,6 +114,7 @@ describe('light parts in one colour, the designer’s setting', () => {
   test('a published version keeps the setting it was published with', async () => {
     await minimalDraft(owner, brandId);
     expect((await owner.post(api('/versions'), { note: 'Lamp in ink' })).status).toBe(201);
+    expect((await waitForBuild(owner, brandId, 1)).state).toBe('ready');
     expect((await owner.patch(api(`/logos/${logoId}`), { lightParts: 'holes' })).status).toBe(200);
     const published = await bytesOf(owner, `/b/${slug}/v/1/files/${logoId}?variant=black`);
     expect(published.status).toBe(200);
@@ -143,6 +145,7 @@ describe('the presentation’s photographs', () => {
     const items = ids.map((src) => ({ src, alt: '', verdict: 'do', caption: '' }));
     expect((await owner.request('PUT', api('/guideline'), { baseRevision: revision, doc: { type: 'doc', content: [{ type: 'imagery', attrs: { id: 'img', items, columns: 2 } }] } })).status).toBe(200);
     expect((await owner.post(api('/versions'), { note: 'With photographs' })).status).toBe(201);
+    expect((await waitForBuild(owner, brandId, 2)).state).toBe('ready');
 
     const html: string = (await owner.get(`/b/${slug}/v/2/presentation`)).body;
     const slide = /<section[^>]*data-slide="photographs"[\s\S]*?<\/section>/.exec(html)?.[0] ?? '';

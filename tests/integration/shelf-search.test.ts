@@ -8,6 +8,7 @@ import type { Sequelize } from 'sequelize';
 import { connect } from '@db/models';
 import { runAssetExpiry } from '@/lib/assets/expiry.server';
 import { Client } from '../support/client';
+import { waitForBuild } from '../support/publish';
 import { closeDb, sql } from '../support/db';
 import { makeBrand, makeCast, type Cast, type Fixture } from './fixtures';
 
@@ -152,7 +153,9 @@ describe('share-link visitors see rights beside the download', () => {
     const owner = cast.clients.owner;
     const hostile = 'Web only. <img src=x onerror=alert(1)> & "print" needs a new licence.';
     expect((await owner.patch(`${shelf()}/${ids.E}`, { rights: hostile })).status).toBe(200);
-    expect((await owner.post(`/api/brands/${brand.brandId}/versions`, { note: 'With rights' })).status).toBe(201);
+    const published = await owner.post(`/api/brands/${brand.brandId}/versions`, { note: 'With rights' });
+    expect(published.status).toBe(201);
+    expect((await waitForBuild(owner, brand.brandId, published.body.version.number)).state).toBe('ready');
     const { url } = (await owner.post(`/api/brands/${brand.brandId}/share-links`, { allowDownloads: true })).body.shareLink;
     const visitor = new Client();
     expect((await visitor.get(new URL(url).pathname)).status).toBe(303);
