@@ -123,6 +123,7 @@ describe('a change made through one process, seen by another within a second', (
     const doc = { type: 'doc', content: [{ type: 'sectionHeading', attrs: { id: 'intro', title: 'Brief', eyebrow: '', intro: '' } }] };
     expect((await owner.request('PUT', `/api/brands/${doomed.id}/guideline`, { baseRevision: revision, doc })).status).toBe(200);
     expect((await owner.post(`/api/brands/${doomed.id}/versions`, { note: 'Only edition' })).status).toBe(201);
+    expect((await waitForBuild(owner, doomed.id, 1)).state).toBe('ready');
     const { url } = (await owner.post(`/api/brands/${doomed.id}/share-links`, {})).body.shareLink;
     const visitor = await visitorVia(other, url);
     const elsewhere = owner.via(other);

@@ -207,7 +207,9 @@ describe('the demo', () => {
     if ((await mara.get(`/api/brands/${brand.id}/versions`)).body.versions.length === 0) {
       const draft = (await mara.get(`/api/brands/${brand.id}/guideline`)).body;
       if (draft.doc.content.length === 0) await mara.post(`/api/brands/${brand.id}/guideline/template`, { template: 'brand-book', baseRevision: draft.revision });
-      expect((await mara.post(`/api/brands/${brand.id}/versions`, { note: 'For the reveal check' })).status).toBe(201);
+      const made = await mara.post(`/api/brands/${brand.id}/versions`, { note: 'For the reveal check' });
+      expect(made.status).toBe(201);
+      expect((await waitForBuild(mara, brand.id, made.body.version.number)).state).toBe('ready');
     }
     const html: string = (await mara.get(`/b/${brand.slug}/presentation`)).body;
     const slide = /<section[^>]*data-slide="without-colour"[\s\S]*?<\/section>/.exec(html)?.[0] ?? '';
@@ -227,6 +229,7 @@ describe('the presentation PDF keeps the new slide', () => {
     expect((await client.upload(`/api/brands/${brand.id}/logos`, 'signal.svg', RED_GREEN, 'image/svg+xml', { variant: 'primary' })).status).toBe(201);
     await minimalDraft(client, brand.id);
     expect((await client.post(`/api/brands/${brand.id}/versions`, { note: 'Signals' })).status).toBe(201);
+    expect((await waitForBuild(client, brand.id, 1)).state).toBe('ready');
     const html: string = (await client.get(`/b/${brand.slug}/v/1/presentation`)).body;
     const slides = [...html.matchAll(/<section[^>]*data-slide="([a-z-]+)"/g)].map((m) => m[1]);
     expect(slides).toContain('without-colour');

@@ -2,11 +2,18 @@
 // presentation as slides, in one warm Chromium; each PDF is written once with the version's other files.
 import { existsSync } from 'node:fs';
 import { CHROMIUM_PATH } from 'astro:env/server';
-import { ParseSpeeds, PDFArray, PDFDict, PDFDocument, PDFHexString, PDFName, PDFRef, PDFString } from 'pdf-lib';
+import { PDFArray, PDFDict, PDFDocument, PDFHexString, PDFName, PDFRef, PDFString } from 'pdf-lib';
 import puppeteer, { type Browser, type HTTPRequest, type Page } from 'puppeteer-core';
 import { formatLongDate, SITE_LOCALE } from '@/lib/format';
 import { log } from '@/lib/log.server';
 import { printRequestAllowed } from './print-requests';
+
+/**
+ * pdf-lib parses and writes this many objects, then lets the event loop run: a multi-megabyte book is never one long
+ * block, so the requests a web process serves while a build prints are not held up (pdf-lib's own default is 100,
+ * which costs a timer per 100 objects; a few thousand keeps the pauses short and the yields few).
+ */
+const PDF_OBJECTS_PER_TICK = 2000;
 
 export const PAPER_SIZES = ['a4', 'letter'] as const;
 export type PaperSize = (typeof PAPER_SIZES)[number];
@@ -129,7 +136,7 @@ export async function printBook(source: PrintSource, meta: BookMeta, onProgress?
     const body = await page.pdf({ preferCSSPageSize: true, printBackground: true, outline: true, tagged: true, timeout: 120_000 });
     times.push(performance.now());
     await onProgress?.(60);
-    const book = await PDFDocument.load(body, { updateMetadata: false, parseSpeed: ParseSpeeds.Fastest }); // no yielding every 100 objects
+    const book = await PDFDocument.load(body, { updateMetadata: false, parseSpeed: PDF_OBJECTS_PER_TICK });
     const starts = sectionStarts(book, titles);
     await page.evaluate((pages: number[]) => {
       document.querySelectorAll<HTMLElement>('[data-contents-page]').forEach((el, i) => (el.textContent = pages[i] ? String(pages[i]) : ''));
@@ -137,7 +144,7 @@ export async function printBook(source: PrintSource, meta: BookMeta, onProgress?
       document.querySelectorAll<HTMLAnchorElement>('a[data-contents-link]').forEach((a) => (a.href = `https://contents.invalid/${a.dataset.contentsLink}`));
       document.documentElement.dataset.part = 'front';
     }, starts.map((p) => p + 1));
-    const front = await PDFDocument.load(await page.pdf({ preferCSSPageSize: true, printBackground: true, tagged: false, timeout: 60_000 }), { parseSpeed: ParseSpeeds.Fastest });
+    const front = await PDFDocument.load(await page.pdf({ preferCSSPageSize: true, printBackground: true, tagged: false, timeout: 60_000 }), { parseSpeed: PDF_OBJECTS_PER_TICK });
     times.push(performance.now());
     const path = new URL(source.url).pathname;
     if (blocked.length) log.warn({ path, blocked: blocked.length, first: blocked.slice(0, 3) }, 'pdf: requests blocked while printing');
@@ -159,9 +166,9 @@ export async function printSlides(source: PrintSource, meta: BookMeta): Promise<
   try {
     if (blocked.length) log.warn({ path: new URL(source.url).pathname, blocked: blocked.length, first: blocked.slice(0, 3) }, 'pdf: requests blocked while printing slides');
     const pdf = await page.pdf({ preferCSSPageSize: true, printBackground: true, tagged: true, timeout: 120_000 });
-    const doc = await PDFDocument.load(pdf, { updateMetadata: false, parseSpeed: ParseSpeeds.Fastest });
+    const doc = await PDFDocument.load(pdf, { updateMetadata: false, parseSpeed: PDF_OBJECTS_PER_TICK });
     describe(doc, meta);
-    return Buffer.from(await doc.save({ objectsPerTick: Infinity }));
+    return Buffer.from(await doc.save({ objectsPerTick: PDF_OBJECTS_PER_TICK }));
   } finally {
     await page.close();
   }
@@ -227,7 +234,7 @@ async function bindBook(book: PDFDocument, front: PDFDocument, starts: number[],
   }
   book.catalog.set(PDFName.of('PageLabels'), book.context.obj({ Nums: [0, { S: PDFName.of('r') }, copied.length, { S: PDFName.of('D') }] }));
   describe(book, meta);
-  return book.save({ objectsPerTick: Infinity });
+  return book.save({ objectsPerTick: PDF_OBJECTS_PER_TICK });
 }
 
 /** Title, author (the studio), subject and keywords of a version's PDF. */
