@@ -135,11 +135,13 @@ if (demo) {
   }
 }
 
+/** A path as short as it is plain: relative under the working folder, whole elsewhere. */
+const shown = (path: string) => (relative(process.cwd(), path).startsWith('..') ? path : relative(process.cwd(), path));
 const width = Math.max(...DEMO_PEOPLE.map((p) => p.email.length));
 console.log(`
 Plumbline (scaled) is running at ${siteUrl}   (front port ${front.port}, round robin over the web processes)
 
-${children.map((c) => `  ${c.role.padEnd(6)} 127.0.0.1:${c.port}   log: ${relative(process.cwd(), join(dataDir, 'logs', `${c.role}-${children.filter((d) => d.role === c.role).indexOf(c) + 1}.log`))}`).join('\n')}
+${children.map((c) => `  ${c.role.padEnd(6)} 127.0.0.1:${c.port}   log: ${shown(join(dataDir, 'logs', `${c.role}-${children.filter((d) => d.role === c.role).indexOf(c) + 1}.log`))}`).join('\n')}
   Each answers GET /api/health with its role; only the worker works builds, PDFs, renditions and mail.
 
 ${
