@@ -67,6 +67,9 @@ export default defineConfig({
       // Whether this process works the job queue (builds, PDFs, notices). Off in a web process when a worker of its
       // own runs beside it; on by default, so one `npm start` process does everything.
       QUEUE_WORKER: envField.boolean({ context: 'server', access: 'secret', default: true }),
+      // What this process is for, as GET /api/health reports it: `web` answers people (the default, also for the
+      // single `npm start` process), `worker` is the process of `npm run start:scaled` that works the queue.
+      PROCESS_ROLE: envField.enum({ context: 'server', access: 'secret', values: ['web', 'worker'], default: 'web' }),
       LOG_LEVEL: envField.enum({ context: 'server', access: 'secret', values: ['trace', 'debug', 'info', 'warn', 'error', 'fatal', 'silent'], default: 'info' }),
     },
   },

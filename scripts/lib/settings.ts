@@ -49,3 +49,11 @@ export function s3Settings(env: NodeJS.ProcessEnv = process.env) {
   };
 }
 export const fakeS3Port = Number(process.env.PLUMBLINE_S3_PORT ?? 0);
+
+/** WEB_PROCESSES for `npm run start:scaled`: how many web processes answer behind the one port (default 2, 1–16). */
+export function webProcesses(env: NodeJS.ProcessEnv = process.env): number {
+  const raw = (env.WEB_PROCESSES ?? '2').trim();
+  const n = Number(raw);
+  if (!/^\d+$/.test(raw) || n < 1 || n > 16) throw new Error(`WEB_PROCESSES=${env.WEB_PROCESSES} is not a number of web processes: use a whole number from 1 to 16.`);
+  return n;
+}

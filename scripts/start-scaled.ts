@@ -1,0 +1,155 @@
+// `npm run start:scaled`: the layout of several machines, on this one. PostgreSQL, migrations, demo, mail catcher
+// and build as `npm start` prepares them; stored files in the local S3-compatible fake (or S3_ENDPOINT); WEB_PROCESSES
+// web processes (default 2) that answer people but work no jobs, one worker process that works the queue (builds,
+// PDFs, renditions, mail), each on its own loopback port, and one round-robin front port. Nothing restarts by itself.
+import type { ChildProcess } from 'node:child_process';
+import { join, relative } from 'node:path';
+import { DEMO_PASSWORD, DEMO_PEOPLE } from '@db/seeders/demo';
+import { ensureDebianPackages, MACHINE_PACKAGES } from './lib/debian';
+import { publishDemo } from './lib/demo-publish';
+import { startFrontProxy } from './lib/front-proxy';
+import { buildApp, prepareDatabase, startServer } from './lib/prepare';
+import { freePort, startCluster } from './lib/postgres';
+import { startFakeSmtp } from '@/lib/mail/fake-smtp';
+import { startFakeS3 } from '@/lib/storage/fake-s3';
+import type { StorageSettings } from '@/lib/storage/settings';
+import { authSecret, dataDir, demoEnabled, fakeS3Port, filesDir, host, pgPort, port, s3Settings, siteUrl, webProcesses } from './lib/settings';
+
+const step = (what: string) => console.log(`\n▸ ${what}`);
+let webCount: number;
+try {
+  webCount = webProcesses();
+} catch (err) {
+  console.error(`\n${(err as Error).message}\n`);
+  process.exit(1);
+}
+const demo = demoEnabled();
+
+step('Debian packages: postgresql, chromium, ghostscript');
+const externalDb = Boolean(process.env.DATABASE_URL);
+try {
+  if (!externalDb && ensureDebianPackages(MACHINE_PACKAGES).length === 0) console.log('  all present');
+} catch (err) {
+  console.warn(`  ${(err as Error).message.replace(/\n/g, '\n  ')}`);
+}
+
+step(`PostgreSQL on 127.0.0.1:${pgPort}`);
+const databaseUrl = process.env.DATABASE_URL ?? startCluster(join(dataDir, 'postgres'), pgPort).url;
+const secret = authSecret();
+const signInLimit = Number(process.env.AUTH_SIGN_IN_LIMIT ?? 5);
+
+// Several processes share no disk in the layout this stands for: files go to an S3-compatible store.
+let storage: StorageSettings;
+if (process.env.S3_ENDPOINT) {
+  storage = { driver: 's3', ...s3Settings() };
+  step(`S3-compatible store at ${storage.endpoint}, bucket ${storage.bucket}`);
+} else {
+  step(`Local S3-compatible store (data in ${join(dataDir, 's3')})`);
+  const fake = await startFakeS3({ dir: join(dataDir, 's3'), bucket: s3Settings().bucket, port: fakeS3Port });
+  storage = { driver: 's3', ...fake.settings };
+  console.log(`  s3 at ${fake.settings.endpoint}, bucket ${fake.settings.bucket}`);
+}
+if (Number(process.versions.node.split('.')[0]) < 22) process.env.AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED = 'true';
+
+step(demo ? 'Migrations and demo data' : 'Migrations (PLUMBLINE_DEMO=0: no demo data)');
+const { migrations } = await prepareDatabase({ databaseUrl, siteUrl, secret, signInLimit }, { filesDir, storage, seed: demo });
+console.log(migrations.length ? `  applied ${migrations.length} migration(s)` : '  schema up to date');
+
+if (process.env.PLUMBLINE_SKIP_BUILD !== '1') {
+  step('Building the app');
+  buildApp();
+}
+
+let mail: { smtpHost: string; smtpPort: number; captureDir?: string };
+if (process.env.SMTP_HOST) {
+  mail = { smtpHost: process.env.SMTP_HOST, smtpPort: Number(process.env.SMTP_PORT ?? 587) };
+} else {
+  const fake = await startFakeSmtp({
+    dir: join(dataDir, 'mail'),
+    port: Number(process.env.PLUMBLINE_SMTP_PORT ?? 0),
+    onMessage: (m) => {
+      const link = /https?:\/\/\S+/.exec(m.text)?.[0];
+      console.log(`  ✉ to ${m.envelope.to.join(', ')}: ${m.subject}${link ? `\n    ${link}` : ''}`);
+    },
+  });
+  mail = { smtpHost: fake.host, smtpPort: fake.port, captureDir: fake.dir };
+}
+
+step(`Starting ${webCount} web process(es) and one worker`);
+const children: { role: 'web' | 'worker'; port: number; child: ChildProcess }[] = [];
+let stopping = false;
+const stopAll = () => {
+  stopping = true;
+  for (const c of children) if (c.child.exitCode === null) c.child.kill('SIGTERM');
+};
+process.on('SIGINT', stopAll);
+process.on('SIGTERM', stopAll);
+
+async function launch(role: 'web' | 'worker', n: number) {
+  const own = await freePort();
+  const logFile = join(dataDir, 'logs', `${role}-${n}.log`);
+  const child = await startServer(
+    {
+      host: '127.0.0.1',
+      port: own,
+      databaseUrl,
+      siteUrl,
+      secret,
+      signInLimit,
+      filesDir,
+      storage,
+      mail,
+      // The front port adds X-Forwarded-For; only loopback (the front port itself) is believed.
+      trustedProxies: '127.0.0.1',
+      settings: { PROCESS_ROLE: role, QUEUE_WORKER: role === 'worker' ? 'true' : 'false' },
+    },
+    { logFile },
+  );
+  children.push({ role, port: own, child });
+  child.on('exit', (code, signal) => {
+    if (stopping) {
+      if (children.every((c) => c.child.exitCode !== null || c.child.signalCode !== null)) process.exit(0);
+      return;
+    }
+    console.warn(`\n  the ${role} process on port ${own} stopped (${signal ?? `code ${code}`}); nothing restarts it: Ctrl-C and start again.`);
+  });
+}
+
+try {
+  await launch('worker', 1);
+  for (let i = 1; i <= webCount; i++) await launch('web', i);
+} catch (err) {
+  console.error(`\n  ${(err as Error).message}`);
+  stopAll();
+  process.exit(1);
+}
+const front = await startFrontProxy({ host, port, targets: children.filter((c) => c.role === 'web').map((c) => c.port) });
+
+let shareUrl: string | null = null;
+if (demo) {
+  try {
+    shareUrl = await publishDemo(siteUrl, dataDir);
+    await prepareDatabase({ databaseUrl, siteUrl, secret, signInLimit }, { filesDir, storage });
+  } catch (err) {
+    console.warn(`  (the demo version could not be published: ${(err as Error).message})`);
+  }
+}
+
+/** A path as short as it is plain: relative under the working folder, whole elsewhere. */
+const shown = (path: string) => (relative(process.cwd(), path).startsWith('..') ? path : relative(process.cwd(), path));
+const width = Math.max(...DEMO_PEOPLE.map((p) => p.email.length));
+console.log(`
+Plumbline (scaled) is running at ${siteUrl}   (front port ${front.port}, round robin over the web processes)
+
+${children.map((c) => `  ${c.role.padEnd(6)} 127.0.0.1:${c.port}   log: ${shown(join(dataDir, 'logs', `${c.role}-${children.filter((d) => d.role === c.role).indexOf(c) + 1}.log`))}`).join('\n')}
+  Each answers GET /api/health with its role; only the worker works builds, PDFs, renditions and mail.
+
+${
+  demo
+    ? `DEMO ACCOUNTS, for trying Plumbline only: they share one published password (${DEMO_PASSWORD}).
+${DEMO_PEOPLE.map((p) => `  ${p.email.padEnd(width)}  ${p.says}`).join('\n')}
+${shareUrl ? `\nDemo share link (no account needed): ${shareUrl}\n` : ''}`
+    : `No demo accounts (PLUMBLINE_DEMO=0): sign up at ${siteUrl}/sign-up.\n`
+}
+A process that stops is not restarted. Ctrl-C stops every process; \`npm run db:stop\` stops PostgreSQL.
+`);
