@@ -13,6 +13,7 @@ import { startServer } from '../../scripts/lib/prepare';
 import { clientAddress, trustedProxies } from '@/lib/http/client-address';
 import { Client, baseUrl, signIn } from '../support/client';
 import { closeDb, sql } from '../support/db';
+import { waitForBuild } from '../support/publish';
 import { makeBrand, makeCast, type Cast, type Fixture } from '../integration/fixtures';
 
 const SECRET = 'test-secret-that-is-long-enough-for-better-auth';
@@ -37,6 +38,8 @@ beforeAll(async () => {
   cast = await makeCast();
   brand = await makeBrand(cast, 'Limits Brand');
   slug = (await cast.clients.owner.get(`/api/brands/${brand.brandId}`)).body.brand.slug;
+  // The fixture's version is built by the job after publishing answers; its site exists once it is ready.
+  await waitForBuild(cast.clients.owner, brand.brandId, 1);
 });
 
 afterAll(async () => {
