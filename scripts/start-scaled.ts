@@ -8,9 +8,9 @@ import { DEMO_PASSWORD, DEMO_PEOPLE } from '@db/seeders/demo';
 import { ensureDebianPackages, MACHINE_PACKAGES } from './lib/debian';
 import { publishDemo } from './lib/demo-publish';
 import { startFrontProxy } from './lib/front-proxy';
+import { startMail } from './lib/mail-setup';
 import { buildApp, prepareDatabase, startServer } from './lib/prepare';
 import { freePort, startCluster } from './lib/postgres';
-import { startFakeSmtp } from '@/lib/mail/fake-smtp';
 import { startFakeS3 } from '@/lib/storage/fake-s3';
 import type { StorageSettings } from '@/lib/storage/settings';
 import { authSecret, dataDir, demoEnabled, fakeS3Port, filesDir, host, pgPort, port, s3Settings, siteUrl, webProcesses } from './lib/settings';
@@ -60,20 +60,7 @@ if (process.env.PLUMBLINE_SKIP_BUILD !== '1') {
   buildApp();
 }
 
-let mail: { smtpHost: string; smtpPort: number; captureDir?: string };
-if (process.env.SMTP_HOST) {
-  mail = { smtpHost: process.env.SMTP_HOST, smtpPort: Number(process.env.SMTP_PORT ?? 587) };
-} else {
-  const fake = await startFakeSmtp({
-    dir: join(dataDir, 'mail'),
-    port: Number(process.env.PLUMBLINE_SMTP_PORT ?? 0),
-    onMessage: (m) => {
-      const link = /https?:\/\/\S+/.exec(m.text)?.[0];
-      console.log(`  ✉ to ${m.envelope.to.join(', ')}: ${m.subject}${link ? `\n    ${link}` : ''}`);
-    },
-  });
-  mail = { smtpHost: fake.host, smtpPort: fake.port, captureDir: fake.dir };
-}
+const mail = await startMail();
 
 step(`Starting ${webCount} web process(es) and one worker`);
 const children: { role: 'web' | 'worker'; port: number; child: ChildProcess }[] = [];

@@ -4,10 +4,10 @@ import pg from 'pg';
 import { DEMO_PASSWORD, DEMO_PEOPLE } from '@db/seeders/demo';
 import { CHROMIUM, CHROMIUM_PATH, ensureDebianPackages, GHOSTSCRIPT, MACHINE_PACKAGES, POSTGRESQL } from './lib/debian';
 import { publishDemo } from './lib/demo-publish';
+import { startMail } from './lib/mail-setup';
 import { buildApp, prepareDatabase, startServer } from './lib/prepare';
 import { startCluster } from './lib/postgres';
 import { checkBrowser, checkDatabase, checkMail, checkStorage, formatChecks } from './lib/readiness';
-import { startFakeSmtp } from '@/lib/mail/fake-smtp';
 import { startFakeS3 } from '@/lib/storage/fake-s3';
 import { openStorage } from '@/lib/storage/open.server';
 import type { StorageSettings } from '@/lib/storage/settings';
@@ -73,23 +73,7 @@ if (process.env.PLUMBLINE_SKIP_BUILD !== '1') {
   buildApp();
 }
 
-// E-mail: a real relay when SMTP_HOST is set, otherwise the local fake, whose messages the sent-mail page shows.
-let mail: { smtpHost: string; smtpPort: number; captureDir?: string };
-if (process.env.SMTP_HOST) {
-  mail = { smtpHost: process.env.SMTP_HOST, smtpPort: Number(process.env.SMTP_PORT ?? 587) };
-} else {
-  // Each caught message is named here with its first link: nobody's inbox receives it, so whoever runs this
-  // server hands an address link to the person who signed up (the viewer only opens once an address is proven).
-  const fake = await startFakeSmtp({
-    dir: join(dataDir, 'mail'),
-    port: Number(process.env.PLUMBLINE_SMTP_PORT ?? 0),
-    onMessage: (m) => {
-      const link = /https?:\/\/\S+/.exec(m.text)?.[0];
-      console.log(`  ✉ to ${m.envelope.to.join(', ')}: ${m.subject}${link ? `\n    ${link}` : ''}`);
-    },
-  });
-  mail = { smtpHost: fake.host, smtpPort: fake.port, captureDir: fake.dir };
-}
+const mail = await startMail();
 
 step('Starting the server');
 const serverLog = join(dataDir, 'logs', 'server.log');
