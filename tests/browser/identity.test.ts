@@ -86,6 +86,8 @@ test('add two colours, read the contrast table, change one, upload a logo and se
   await edit.getByRole('button', { name: 'Save' }).click();
   await cell('#777777', '#ffffff').waitFor();
   const failing = cell('#777777', '#ffffff');
+  // The cell takes the new value as soon as it is saved; its ratio follows once the contrast table is read again.
+  await failing.locator('[data-ratio]', { hasText: '4.48' }).waitFor();
   expect(await failing.locator('[data-ratio]').innerText()).toContain('4.48');
   expect(await failing.locator('[data-level="aa"]').innerText()).toContain('AA fail');
   expect(await failing.locator('[data-level="aaLarge"]').innerText()).toContain('AA large pass');
