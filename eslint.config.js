@@ -5,7 +5,7 @@ import tseslint from 'typescript-eslint';
 import layers from './eslint.layers.js';
 
 export default tseslint.config(
-  { ignores: ['dist/', 'dist-test/', 'dist-bench/', '.astro/', '.data/', 'node_modules/', 'coverage/'] },
+  { ignores: ['dist/', 'dist-test/', 'dist-bench/', 'dist-soak/', '.astro/', '.data/', 'node_modules/', 'coverage/'] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   ...astro.configs.recommended,

@@ -1,16 +1,16 @@
 // `npm run start:scaled`: the layout of several machines, on this one. PostgreSQL, migrations, demo, mail catcher
 // and build as `npm start` prepares them; stored files in the local S3-compatible fake (or S3_ENDPOINT); WEB_PROCESSES
 // web processes (default 2) that answer people but work no jobs, one worker process that works the queue (builds,
-// PDFs, renditions, mail), each on its own loopback port, and one round-robin front port. Nothing restarts by itself.
-import type { ChildProcess } from 'node:child_process';
+// PDFs, renditions, mail), each on its own loopback port, and one round-robin front port (scripts/lib/scaled.ts,
+// shared with `npm run soak`). A process that stops is started again on its own port.
 import { join, relative } from 'node:path';
 import { DEMO_PASSWORD, DEMO_PEOPLE } from '@db/seeders/demo';
 import { ensureDebianPackages, MACHINE_PACKAGES } from './lib/debian';
 import { publishDemo } from './lib/demo-publish';
-import { startFrontProxy } from './lib/front-proxy';
 import { startMail } from './lib/mail-setup';
-import { buildApp, prepareDatabase, startServer } from './lib/prepare';
-import { freePort, startCluster } from './lib/postgres';
+import { buildApp, prepareDatabase } from './lib/prepare';
+import { startCluster } from './lib/postgres';
+import { startScaledLayout, type ScaledLayout } from './lib/scaled';
 import { startFakeS3 } from '@/lib/storage/fake-s3';
 import type { StorageSettings } from '@/lib/storage/settings';
 import { authSecret, dataDir, demoEnabled, fakeS3Port, filesDir, host, pgPort, port, s3Settings, siteUrl, webProcesses } from './lib/settings';
@@ -63,54 +63,23 @@ if (process.env.PLUMBLINE_SKIP_BUILD !== '1') {
 const mail = await startMail();
 
 step(`Starting ${webCount} web process(es) and one worker`);
-const children: { role: 'web' | 'worker'; port: number; child: ChildProcess }[] = [];
-let stopping = false;
-const stopAll = () => {
-  stopping = true;
-  for (const c of children) if (c.child.exitCode === null) c.child.kill('SIGTERM');
-};
-process.on('SIGINT', stopAll);
-process.on('SIGTERM', stopAll);
-
-async function launch(role: 'web' | 'worker', n: number) {
-  const own = await freePort();
-  const logFile = join(dataDir, 'logs', `${role}-${n}.log`);
-  const child = await startServer(
-    {
-      host: '127.0.0.1',
-      port: own,
-      databaseUrl,
-      siteUrl,
-      secret,
-      signInLimit,
-      filesDir,
-      storage,
-      mail,
-      // The front port adds X-Forwarded-For; only loopback (the front port itself) is believed.
-      trustedProxies: '127.0.0.1',
-      settings: { PROCESS_ROLE: role, QUEUE_WORKER: role === 'worker' ? 'true' : 'false' },
-    },
-    { logFile },
-  );
-  children.push({ role, port: own, child });
-  child.on('exit', (code, signal) => {
-    if (stopping) {
-      if (children.every((c) => c.child.exitCode !== null || c.child.signalCode !== null)) process.exit(0);
-      return;
-    }
-    console.warn(`\n  the ${role} process on port ${own} stopped (${signal ?? `code ${code}`}); nothing restarts it: Ctrl-C and start again.`);
-  });
-}
-
+let layout: ScaledLayout;
 try {
-  await launch('worker', 1);
-  for (let i = 1; i <= webCount; i++) await launch('web', i);
+  layout = await startScaledLayout({
+    webCount,
+    server: { databaseUrl, siteUrl, secret, signInLimit, filesDir, storage, mail },
+    front: { host, port },
+    logsDir: join(dataDir, 'logs'),
+    say: (line) => console.warn(`\n  ${line}`),
+  });
 } catch (err) {
   console.error(`\n  ${(err as Error).message}`);
-  stopAll();
   process.exit(1);
 }
-const front = await startFrontProxy({ host, port, targets: children.filter((c) => c.role === 'web').map((c) => c.port) });
+const { front, processes } = layout;
+const stopAll = () => void layout.stop().then(() => process.exit(0));
+process.on('SIGINT', stopAll);
+process.on('SIGTERM', stopAll);
 
 let shareUrl: string | null = null;
 if (demo) {
@@ -128,7 +97,7 @@ const width = Math.max(...DEMO_PEOPLE.map((p) => p.email.length));
 console.log(`
 Plumbline (scaled) is running at ${siteUrl}   (front port ${front.port}, round robin over the web processes)
 
-${children.map((c) => `  ${c.role.padEnd(6)} 127.0.0.1:${c.port}   log: ${shown(join(dataDir, 'logs', `${c.role}-${children.filter((d) => d.role === c.role).indexOf(c) + 1}.log`))}`).join('\n')}
+${processes.map((p) => `  ${p.role.padEnd(6)} 127.0.0.1:${p.port}   log: ${shown(p.logFile)}`).join('\n')}
   Each answers GET /api/health with its role; only the worker works builds, PDFs, renditions and mail.
 
 ${
@@ -138,5 +107,6 @@ ${DEMO_PEOPLE.map((p) => `  ${p.email.padEnd(width)}  ${p.says}`).join('\n')}
 ${shareUrl ? `\nDemo share link (no account needed): ${shareUrl}\n` : ''}`
     : `No demo accounts (PLUMBLINE_DEMO=0): sign up at ${siteUrl}/sign-up.\n`
 }
-A process that stops is not restarted. Ctrl-C stops every process; \`npm run db:stop\` stops PostgreSQL.
+A process that stops is started again on its port (back-off 0.5 s doubling to 8 s); the front port leaves a web
+process out while it does not answer. Ctrl-C stops every process; \`npm run db:stop\` stops PostgreSQL.
 `);
