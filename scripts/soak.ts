@@ -16,7 +16,7 @@ import type { ChildProcess } from 'node:child_process';
 import { execFileSync } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
 import { existsSync, mkdtempSync, readdirSync, rmSync, statSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { availableParallelism, loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { Worker } from 'node:worker_threads';
 import pg from 'pg';
@@ -172,6 +172,8 @@ function visitors(url: string, headers: Record<string, string>, connections: num
 }
 
 const figures = (l: Load) => `${l.requests} requests, ${l.rps.toFixed(0)} req/s, p99 ${l.p99} ms`;
+/** The figures depend on what else the machine does: the 1-minute load average beside the number of cores. */
+const machine = () => `machine load ${loadavg()[0].toFixed(1)} on ${availableParallelism()} cores`;
 const failures = (l: Load) => l.errors + l.non2xx;
 const notOk = (l: Load) => Object.entries(l.statuses).filter(([s]) => !s.startsWith('2')).map(([s, n]) => `${n}× ${s}`).join(', ');
 
@@ -211,6 +213,8 @@ async function main(): Promise<void> {
   }
 
   process.env.PLUMBLINE_OUT_DIR ??= join(projectRoot, 'dist-soak');
+  // As `npm run start:scaled` does: the object-store SDK's notice about future Node versions is not this run's news.
+  if (Number(process.versions.node.split('.')[0]) < 22) process.env.AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED = 'true';
   const entry = join(outDir(), 'server', 'entry.mjs');
   const sources = ['src', 'db', 'public', 'templates', 'astro.config.mjs', 'package-lock.json'].map((p) => join(projectRoot, p));
   const stale = !existsSync(entry) || newest(sources) > statSync(entry).mtimeMs;
@@ -219,7 +223,8 @@ async function main(): Promise<void> {
   built.catch(() => undefined);
 
   const t0 = Date.now();
-  clusterDir = join(dir, 'postgres');
+  // A folder of its own: the cluster's owner (postgres, when we are root) must be able to reach it.
+  clusterDir = mkdtempSync(join(tmpdir(), 'plumbline-soak-pg-'));
   const cluster = startCluster(clusterDir, await freePort(), { throwaway: true });
   s3 = await startFakeS3({ dir: join(dir, 's3'), bucket: 'plumbline-soak' });
   smtp = await startFakeSmtp({ dir: join(dir, 'mail') });
@@ -286,7 +291,7 @@ async function main(): Promise<void> {
   result(
     1,
     failures(steady) === 0,
-    `${VISITORS} share-link visitors for ${LOAD_SECONDS} s through the front port: ${figures(steady)}, ${failures(steady)} errors (goal 0)${failures(steady) ? ` [${steady.errors} connection errors, ${steady.timeouts} timeouts; ${notOk(steady)}]` : ''}`,
+    `${VISITORS} share-link visitors for ${LOAD_SECONDS} s through the front port: ${figures(steady)}, ${failures(steady)} errors (goal 0); ${machine()}${failures(steady) ? ` [${steady.errors} connection errors, ${steady.timeouts} timeouts; ${notOk(steady)}]` : ''}`,
   );
 
   // ---- 2. kill -9 one web process under that load ----
@@ -310,7 +315,7 @@ async function main(): Promise<void> {
     2,
     failures(faulted) === 0 && health.status === 'ok',
     `kill -9 web process ${victim.n} of ${WEB_PROCESSES} under ${VISITORS} visitors (${faultSeconds} s): ${figures(faulted)}; errors before ${before}, during ${inFault}, after ${after} (goal 0); ` +
-      `started again by the supervisor ${((restartedAt - killedAt) / 1000).toFixed(1)} s and back in rotation ${((backAt - killedAt) / 1000).toFixed(1)} s after the kill${failures(faulted) ? ` [${notOk(faulted)}]` : ''}`,
+      `started again by the supervisor ${((restartedAt - killedAt) / 1000).toFixed(1)} s and back in rotation ${((backAt - killedAt) / 1000).toFixed(1)} s after the kill; ${machine()}${failures(faulted) ? ` [${notOk(faulted)}]` : ''}`,
   );
 
   // ---- 3. kill -9 the worker mid-build ----

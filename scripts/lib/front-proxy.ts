@@ -120,8 +120,12 @@ export function startFrontProxy(opts: FrontProxyOptions): Promise<FrontProxy> {
       bodyDone = true;
       current?.end();
     });
+    // The visitor left before the answer was done: drop the attempt (its error is ours, not the process's).
+    let abandoned = false;
     res.on('close', () => {
-      if (!res.writableFinished) current?.destroy();
+      if (res.writableFinished) return;
+      abandoned = true;
+      current?.destroy();
     });
 
     const attempt = () => {
@@ -142,6 +146,7 @@ export function startFrontProxy(opts: FrontProxyOptions): Promise<FrontProxy> {
       });
       current = upstream;
       upstream.on('error', (err: NodeJS.ErrnoException) => {
+        if (abandoned) return;
         if (answered || res.headersSent) {
           res.destroy();
           return;

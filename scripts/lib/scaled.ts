@@ -108,6 +108,7 @@ export async function startScaledLayout(opts: ScaledOptions): Promise<ScaledLayo
 
   const stop = async () => {
     stopping = true;
+    await front?.close();
     await Promise.all(
       processes.map(async ({ child }) => {
         if (child.exitCode !== null || child.signalCode !== null) return;
@@ -117,7 +118,6 @@ export async function startScaledLayout(opts: ScaledOptions): Promise<ScaledLayo
         if (child.exitCode === null && child.signalCode === null) child.kill('SIGKILL');
       }),
     );
-    await front?.close();
   };
 
   let front: FrontProxy | undefined;

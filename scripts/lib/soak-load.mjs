@@ -7,14 +7,17 @@ import autocannon from 'autocannon';
 const { url, headers, connections, duration } = workerData;
 const failedAt = [];
 const statuses = {};
-const instance = autocannon({ url, headers, connections, duration, timeout: 10 }, (err, result) => {
+const opts = { url, headers, connections, duration, timeout: 10 };
+const instance = autocannon(opts, (err, raw) => {
   if (err) {
     parentPort.postMessage({ error: err.message });
     return;
   }
+  // Outside the main thread autocannon leaves its histograms encoded: its own aggregateResult() reads them.
+  const result = autocannon.aggregateResult([raw], opts);
   parentPort.postMessage({
     requests: result.requests.total,
-    rps: result.requests.average,
+    rps: result.requests.total / result.duration,
     p99: result.latency.p99,
     errors: result.errors,
     timeouts: result.timeouts,
