@@ -175,7 +175,9 @@ const figures = (l: Load) => `${l.requests} requests, ${l.rps.toFixed(0)} req/s,
 /** The figures depend on what else the machine does: the 1-minute load average beside the number of cores. */
 const machine = () => `machine load ${loadavg()[0].toFixed(1)} on ${availableParallelism()} cores`;
 const failures = (l: Load) => l.errors + l.non2xx;
-const notOk = (l: Load) => Object.entries(l.statuses).filter(([s]) => !s.startsWith('2')).map(([s, n]) => `${n}× ${s}`).join(', ');
+/** What the errors were: connection errors (of which timeouts) and each answer outside 2xx. */
+const notOk = (l: Load) =>
+  [`${l.errors} connection errors (${l.timeouts} timeouts over 10 s)`, ...Object.entries(l.statuses).filter(([s]) => !s.startsWith('2')).map(([s, n]) => `${n}× HTTP ${s}`)].join(', ');
 
 interface VersionView {
   number: number;
@@ -291,7 +293,7 @@ async function main(): Promise<void> {
   result(
     1,
     failures(steady) === 0,
-    `${VISITORS} share-link visitors for ${LOAD_SECONDS} s through the front port: ${figures(steady)}, ${failures(steady)} errors (goal 0); ${machine()}${failures(steady) ? ` [${steady.errors} connection errors, ${steady.timeouts} timeouts; ${notOk(steady)}]` : ''}`,
+    `${VISITORS} share-link visitors for ${LOAD_SECONDS} s through the front port: ${figures(steady)}, ${failures(steady)} errors (goal 0); ${machine()}${failures(steady) ? ` [${notOk(steady)}]` : ''}`,
   );
 
   // ---- 2. kill -9 one web process under that load ----

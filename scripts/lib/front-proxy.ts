@@ -34,6 +34,9 @@ export const REPLAY_LIMIT = 1024 * 1024;
 /** Where an attempt failed: `refused` (no connection, so nothing reached the process) or `reset` (cut before any answer). */
 export type UpstreamFailure = 'refused' | 'reset';
 
+/** A safe request's answer up to this size is held until it is complete before the visitor gets any of it. */
+export const HOLD_LIMIT = 1024 * 1024;
+
 /** Safe methods (RFC 9110 §9.2.1), which are idempotent (§9.2.2): asking twice changes nothing on the server. */
 const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS', 'TRACE']);
 
@@ -46,6 +49,14 @@ const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS', 'TRACE']);
 export function mayRetry(method: string, failure: UpstreamFailure, bodyKept: boolean): boolean {
   if (!bodyKept) return false;
   return failure === 'refused' || SAFE_METHODS.has(method.toUpperCase());
+}
+
+/**
+ * Is this answer held until complete? Only for safe methods (which may be asked again), only up to HOLD_LIMIT by its
+ * declared length, and never for a stream that is meant to arrive piece by piece (server-sent events).
+ */
+export function holdsAnswer(method: string, contentType: string | undefined, contentLength: number): boolean {
+  return SAFE_METHODS.has(method.toUpperCase()) && contentLength <= HOLD_LIMIT && !/^text\/event-stream\b/i.test(contentType ?? '');
 }
 
 /** Listen on host:port and pass every request to the web processes in `targets` (loopback ports) in turn. */
@@ -137,16 +148,49 @@ export function startFrontProxy(opts: FrontProxyOptions): Promise<FrontProxy> {
       }
       tried.add(target.port);
       const upstream = http.request({ host: '127.0.0.1', port: target.port, method, path: req.url, headers, agent }, (answer) => {
-        answered = true;
         const out: http.OutgoingHttpHeaders = {};
         for (const [name, value] of Object.entries(answer.headers)) if (!HOP_BY_HOP.has(name) && value !== undefined) out[name] = value;
-        res.writeHead(answer.statusCode ?? 502, answer.statusMessage, out);
-        answer.pipe(res);
-        answer.on('error', () => res.destroy());
+        const commit = () => {
+          answered = true;
+          res.writeHead(answer.statusCode ?? 502, answer.statusMessage, out);
+        };
+        const length = Number(answer.headers['content-length'] ?? 0);
+        if (!holdsAnswer(method, answer.headers['content-type'], length)) {
+          commit();
+          answer.pipe(res);
+          answer.on('error', () => res.destroy());
+          return;
+        }
+        // Held until complete: an answer cut by a dying process has reached nobody yet, so it may be asked again.
+        let held: Buffer[] | null = [];
+        let heldBytes = 0;
+        answer.on('data', (chunk: Buffer) => {
+          if (held) {
+            heldBytes += chunk.length;
+            held.push(chunk);
+            if (heldBytes <= HOLD_LIMIT) return;
+            commit();
+            for (const c of held) res.write(c);
+            held = null;
+            answer.pipe(res);
+          }
+        });
+        answer.on('end', () => {
+          if (!held) return;
+          commit();
+          res.end(Buffer.concat(held));
+        });
+        answer.on('error', (err) => (answered ? res.destroy() : failed(err)));
+        answer.on('close', () => {
+          if (!answer.complete && !answered) failed(Object.assign(new Error('answer cut short'), { code: 'ECONNRESET' }));
+        });
       });
       current = upstream;
-      upstream.on('error', (err: NodeJS.ErrnoException) => {
-        if (abandoned) return;
+      // One verdict per attempt, however many of the request's and the answer's events report the same failure.
+      let settled = false;
+      const failed = (err: NodeJS.ErrnoException) => {
+        if (abandoned || settled) return;
+        settled = true;
         if (answered || res.headersSent) {
           res.destroy();
           return;
@@ -161,7 +205,8 @@ export function startFrontProxy(opts: FrontProxyOptions): Promise<FrontProxy> {
         }
         res.writeHead(502, { 'content-type': 'application/json' });
         res.end(JSON.stringify({ error: { code: 'process_unreachable', message: 'The web process this request reached stopped answering; try again.' } }));
-      });
+      };
+      upstream.on('error', failed);
       // A new attempt starts with everything the body has sent so far, then follows it.
       for (const chunk of kept ?? []) upstream.write(chunk);
       if (bodyDone) upstream.end();

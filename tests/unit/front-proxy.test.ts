@@ -7,7 +7,7 @@
 import http from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { afterEach, describe, expect, test } from 'vitest';
-import { mayRetry, startFrontProxy, type FrontProxy } from '../../scripts/lib/front-proxy';
+import { HOLD_LIMIT, holdsAnswer, mayRetry, startFrontProxy, type FrontProxy } from '../../scripts/lib/front-proxy';
 import { freePort } from '../../scripts/lib/postgres';
 
 const opened: { close(): Promise<void> }[] = [];
@@ -72,12 +72,57 @@ describe('mayRetry (RFC 9110 §9.2.1, §9.2.2)', () => {
     ['PUT', 'reset', true, false, 'idempotent by §9.2.2, but our saves answer a repeat with 409: not repeated after a reset'],
     ['POST', 'refused', true, true, 'no connection: nothing reached the process'],
     ['PUT', 'refused', false, false, 'the body is no longer whole: it cannot be sent again'],
-  ] as const)('%s after %s (body kept: %s) → %s (%s)', (method, failure, kept, retried) => {
+  ] as const)('%s after %s (body kept: %s) → %s (%s)', (method, failure, kept, retried, _why) => {
     expect(mayRetry(method, failure, kept)).toBe(retried);
   });
 });
 
+describe('holdsAnswer: which answers wait until complete before the visitor gets any byte', () => {
+  test.each([
+    ['GET', 'text/html; charset=utf-8', 80_000, true, 'a page: safe to ask again (RFC 9110 §9.2.1)'],
+    ['HEAD', 'text/html', 0, true, 'safe'],
+    ['GET', 'application/pdf', HOLD_LIMIT + 1, false, 'too large to hold: streamed'],
+    ['POST', 'application/json', 100, false, 'not safe: it could not be asked again anyway'],
+    ['GET', 'text/event-stream', 0, false, 'server-sent events arrive piece by piece (WHATWG HTML §9.2)'],
+  ] as const)('%s %s of %i bytes → %s (%s)', (method, type, length, held, _why) => {
+    expect(holdsAnswer(method, type, length)).toBe(held);
+  });
+});
+
+/** A process that starts an answer of 20,000 bytes, sends half of it and dies (its connection cut). */
+async function dyingMidAnswer() {
+  const seen: string[] = [];
+  const server = http.createServer((req, res) => {
+    seen.push(`${req.method} ${req.url}`);
+    req.resume();
+    res.writeHead(200, { 'content-type': 'text/html', 'content-length': '20000' });
+    res.write(Buffer.alloc(10_000, 'x'), () => setTimeout(() => req.socket.destroy(), 20));
+  });
+  await new Promise<void>((r) => server.listen(0, '127.0.0.1', r));
+  const handle = { port: (server.address() as AddressInfo).port, seen, close: () => new Promise<void>((r) => (server.closeAllConnections(), server.close(() => r()))) };
+  opened.push(handle);
+  return handle;
+}
+
 describe('the front port', () => {
+  test('a page cut half-way by a dying process is asked again from the next one: the visitor gets the whole page', async () => {
+    const dying = await dyingMidAnswer();
+    const a = await named('a');
+    const proxy = await front([dying.port, a.port]);
+    const r = await ask(proxy);
+    expect(r.status).toBe(200);
+    expect(r.body.name).toBe('a');
+    expect(dying.seen).toEqual(['GET /page']);
+  });
+
+  test('a POST answer cut half-way is not asked again: the visitor sees the cut', async () => {
+    const dying = await dyingMidAnswer();
+    const a = await named('a');
+    const proxy = await front([dying.port, a.port]);
+    await expect(ask(proxy, 'POST', '{}')).rejects.toThrow();
+    expect(a.seen).toEqual([]);
+  });
+
   test('takes turns between the processes (round robin)', async () => {
     const a = await named('a');
     const b = await named('b');
