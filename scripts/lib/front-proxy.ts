@@ -88,7 +88,8 @@ export function startFrontProxy(opts: FrontProxyOptions): Promise<FrontProxy> {
     const ask = () => {
       const probe = http.get({ host: '127.0.0.1', port: target.port, path: '/api/health', agent: false, timeout: 2000 }, (answer) => {
         answer.resume();
-        if (answer.statusCode === 200 && !closed) {
+        if (closed) return;
+        if (answer.statusCode === 200) {
           target.inRotation = true;
           opts.onRotation?.(target.port, true, 'its health answers again');
         } else target.probe = setTimeout(ask, probeEveryMs);
@@ -158,7 +159,9 @@ export function startFrontProxy(opts: FrontProxyOptions): Promise<FrontProxy> {
         if (!holdsAnswer(method, answer.headers['content-type'], length)) {
           commit();
           answer.pipe(res);
+          // Cut short after the visitor got part of it: the visitor must see the cut, not wait for the rest.
           answer.on('error', () => res.destroy());
+          answer.on('close', () => answer.complete || res.destroy());
           return;
         }
         // Held until complete: an answer cut by a dying process has reached nobody yet, so it may be asked again.
@@ -182,7 +185,9 @@ export function startFrontProxy(opts: FrontProxyOptions): Promise<FrontProxy> {
         });
         answer.on('error', (err) => (answered ? res.destroy() : failed(err)));
         answer.on('close', () => {
-          if (!answer.complete && !answered) failed(Object.assign(new Error('answer cut short'), { code: 'ECONNRESET' }));
+          if (answer.complete) return;
+          if (answered) res.destroy();
+          else failed(Object.assign(new Error('answer cut short'), { code: 'ECONNRESET' }));
         });
       });
       current = upstream;

@@ -89,13 +89,13 @@ describe('holdsAnswer: which answers wait until complete before the visitor gets
   });
 });
 
-/** A process that starts an answer of 20,000 bytes, sends half of it and dies (its connection cut). */
-async function dyingMidAnswer() {
+/** A process that starts an answer of `declared` bytes, sends 10,000 of them and dies (its connection cut). */
+async function dyingMidAnswer(declared = 20_000) {
   const seen: string[] = [];
   const server = http.createServer((req, res) => {
     seen.push(`${req.method} ${req.url}`);
     req.resume();
-    res.writeHead(200, { 'content-type': 'text/html', 'content-length': '20000' });
+    res.writeHead(200, { 'content-type': 'text/html', 'content-length': String(declared) });
     res.write(Buffer.alloc(10_000, 'x'), () => setTimeout(() => req.socket.destroy(), 20));
   });
   await new Promise<void>((r) => server.listen(0, '127.0.0.1', r));
@@ -113,6 +113,14 @@ describe('the front port', () => {
     expect(r.status).toBe(200);
     expect(r.body.name).toBe('a');
     expect(dying.seen).toEqual(['GET /page']);
+  });
+
+  test('an answer too large to hold, cut after the visitor got part of it: the visitor sees the cut rather than waiting', async () => {
+    const dying = await dyingMidAnswer(HOLD_LIMIT + 1);
+    const a = await named('a');
+    const proxy = await front([dying.port, a.port]);
+    await expect(ask(proxy)).rejects.toThrow();
+    expect(a.seen).toEqual([]);
   });
 
   test('a POST answer cut half-way is not asked again: the visitor sees the cut', async () => {
