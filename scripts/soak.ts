@@ -203,6 +203,13 @@ async function until<T>(what: string, limitMs: number, everyMs: number, look: ()
   }
 }
 
+/** `work`, or a clear failure after `limitMs`. */
+function within<T>(work: Promise<T>, limitMs: number, what: string): Promise<T> {
+  let timer: NodeJS.Timeout | undefined;
+  const late = new Promise<never>((_, fail) => (timer = setTimeout(() => fail(new Error(`${what}: not within ${limitMs / 1000} s`)), limitMs)));
+  return Promise.race([work, late]).finally(() => clearTimeout(timer));
+}
+
 const paragraph = (id: string, text: string) => ({ type: 'paragraph', attrs: { id }, content: [{ type: 'text', text }] });
 
 async function main(): Promise<void> {
@@ -300,10 +307,11 @@ async function main(): Promise<void> {
   const victim: ScaledProcess = webs[0];
   const faultSeconds = Math.max(12, Math.min(LOAD_SECONDS, 20));
   const during = visitors(page, { cookie: visitor.cookie() }, VISITORS, faultSeconds);
+  during.catch(() => undefined); // awaited below; a step that fails first must not leave it unhandled
   await new Promise((r) => setTimeout(r, 4000));
   const killedAt = Date.now();
   await killHard(victim.child);
-  await layout.running(victim);
+  await within(layout.running(victim), 90_000, 'the supervisor starting the killed web process again');
   const restartedAt = Date.now();
   const backAt = await until('the killed web process back in the rotation', 60_000, 50, async () =>
     layout!.front.rotation().find((t) => t.port === victim.port)?.inRotation ? Date.now() : null,
@@ -330,7 +338,7 @@ async function main(): Promise<void> {
   const workerKilledAt = Date.now();
   await killHard(worker.child);
   const stillBuilding = (await version(owner, brand.id, 2)).state === 'building';
-  await layout.running(worker);
+  await within(layout.running(worker), 90_000, 'the supervisor starting the killed worker again');
   const workerBackAt = Date.now();
   const v2 = await until('version 2 built after the worker was killed', 180_000, 250, async () => {
     const v = await version(owner, brand.id, 2);
