@@ -41,6 +41,7 @@ const LOAD_SECONDS = seconds('SOAK_SECONDS', 30, 600);
 const ROUNDS = seconds('SOAK_ROUNDS', 50, 1000);
 const LIMIT_SECONDS = seconds('SOAK_LIMIT_SECONDS', 600, 3600);
 const VISITORS = 200;
+const WARM_UP_SECONDS = 5;
 const WEB_PROCESSES = 2;
 
 const began = Date.now();
@@ -175,6 +176,8 @@ const figures = (l: Load) => `${l.requests} requests, ${l.rps.toFixed(0)} req/s,
 /** The figures depend on what else the machine does: the 1-minute load average beside the number of cores. */
 const machine = () => `machine load ${loadavg()[0].toFixed(1)} on ${availableParallelism()} cores`;
 const failures = (l: Load) => l.errors + l.non2xx;
+/** When the errors came, in seconds from the start of the load. */
+const when = (l: Load, from: number) => `first at ${((Math.min(...l.failedAt) - from) / 1000).toFixed(1)} s, last at ${((Math.max(...l.failedAt) - from) / 1000).toFixed(1)} s`;
 /** What the errors were: connection errors (of which timeouts) and each answer outside 2xx. */
 const notOk = (l: Load) =>
   [`${l.errors} connection errors (${l.timeouts} timeouts over 10 s)`, ...Object.entries(l.statuses).filter(([s]) => !s.startsWith('2')).map(([s, n]) => `${n}× HTTP ${s}`)].join(', ');
@@ -296,11 +299,15 @@ async function main(): Promise<void> {
   note(`brand, version 1 (built), share link and a second editor ready in ${since(t1)} s`);
 
   // ---- 1. share-link visitors ----
+  // A warm-up first, as load tests commonly do (connections opened, code compiled, pools filled); shown, not judged.
+  const warm = await visitors(page, { cookie: visitor.cookie() }, VISITORS, WARM_UP_SECONDS);
+  note(`warm-up, ${VISITORS} visitors for ${WARM_UP_SECONDS} s (not judged): ${figures(warm)}, ${failures(warm)} errors${failures(warm) ? ` [${notOk(warm)}]` : ''}`);
+  const steadyFrom = Date.now();
   const steady = await visitors(page, { cookie: visitor.cookie() }, VISITORS, LOAD_SECONDS);
   result(
     1,
     failures(steady) === 0,
-    `${VISITORS} share-link visitors for ${LOAD_SECONDS} s through the front port: ${figures(steady)}, ${failures(steady)} errors (goal 0); ${machine()}${failures(steady) ? ` [${notOk(steady)}]` : ''}`,
+    `${VISITORS} share-link visitors for ${LOAD_SECONDS} s through the front port: ${figures(steady)}, ${failures(steady)} errors (goal 0); ${machine()}${failures(steady) ? ` [${notOk(steady)}; ${when(steady, steadyFrom)}]` : ''}`,
   );
 
   // ---- 2. kill -9 one web process under that load ----
