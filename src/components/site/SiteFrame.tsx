@@ -30,7 +30,7 @@ export interface SiteFrameProps {
 const FRAME_CSS = `.site-root { font-family: var(--brand-body-font); color: var(--brand-text); }
 .site-root h1, .site-root h2, .site-root h3 { font-family: var(--brand-heading-font); }
 .site-contents summary::-webkit-details-marker { display: none; }
-.site-main [data-block-id] { scroll-margin-top: 1rem; }
+.site-main [data-block-id] { scroll-margin-top: 1.5rem; }
 @media (max-width: 63.99rem) { .site-main [id], .site-main [data-block-id] { scroll-margin-top: 3.5rem; } }
 [data-search-target] { outline: 3px solid #211e1a; outline-offset: 6px; border-radius: 4px; box-shadow: 0 0 0 10px rgb(250 204 21 / 0.45); transition: box-shadow 0.6s ease-out; }
 @media (prefers-reduced-motion: reduce) { [data-search-target] { transition: none; } }

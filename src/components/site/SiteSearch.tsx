@@ -41,9 +41,9 @@ export function SiteSearch({ slug, number, place }: SiteSearchProps) {
           autoComplete="off"
           spellCheck={false}
           placeholder="Colour, logo, typeface, word…"
-          className="w-full rounded-lg border border-black/25 bg-white py-2 pl-3 pr-9 text-sm text-ink placeholder:text-ink-faint"
+          className="peer w-full rounded-lg border border-black/25 bg-white py-2 pl-3 pr-9 text-sm text-ink placeholder:text-ink-faint"
         />
-        <kbd id={`${id}-hint`} title="Press / to search" className="pointer-events-none absolute right-2 top-1/2 -translate-y-1/2 rounded border border-black/20 px-1.5 font-mono text-xs text-ink-soft">
+        <kbd id={`${id}-hint`} title="Press / to search" className="pointer-events-none absolute right-2 top-1/2 -translate-y-1/2 rounded border max-lg:hidden peer-focus:invisible peer-[:not(:placeholder-shown)]:invisible border-black/20 px-1.5 font-mono text-xs text-ink-soft">
           <span aria-hidden="true">/</span>
           <span className="sr-only">Press slash to search from anywhere on the page.</span>
         </kbd>

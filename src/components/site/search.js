@@ -14,6 +14,7 @@ const GROUPS = /** @type {const} */ ([
   ['logo', 'Logos'],
   ['typeface', 'Typefaces'],
   ['file', 'Files'],
+  ['block', 'Guidance'],
   ['text', 'Text'],
   ['note', 'For editors'],
 ]);

@@ -22,7 +22,7 @@ import { isOneLine, storedHex } from '@/lib/safe/values';
 import type { PageAudience } from './build/contract';
 
 /** What a result is, in the order the results list groups them. */
-export const SEARCH_KINDS = ['section', 'colour', 'logo', 'typeface', 'file', 'text', 'note'] as const;
+export const SEARCH_KINDS = ['section', 'colour', 'logo', 'typeface', 'file', 'block', 'text', 'note'] as const;
 export type SearchKind = (typeof SEARCH_KINDS)[number];
 
 /** Who sees a different page, and so gets an index of their own (latest or older pages show the same blocks). */
@@ -188,7 +188,7 @@ export function searchDocuments(doc: GuidelineDoc, identity: Identity, audience:
     const logo = typeof parsed.logoId === 'string' ? findLogo(identity, parsed.logoId) : undefined;
     const blockWords = words.filter(Boolean).join(' ');
     if (node.type !== sectionHeadingBlock.type && (blockWords || logo)) {
-      add({ id: `block:${id}`, kind: 'text', title: definition.label, detail: clip(blockWords || (logo ? logo.name : ''), 160), blockId: id, terms: logo ? logo.name : '', text: blockWords });
+      add({ id: `block:${id}`, kind: 'block', title: definition.label, detail: clip(blockWords || (logo ? logo.name : ''), 160), blockId: id, terms: logo ? logo.name : '', text: blockWords });
     }
   }
   return [...docs.values()].map((d) => searchDocumentSchema.parse(d));
