@@ -134,7 +134,7 @@ describe('each audience finds only what its page shows', () => {
     expect(without.search('timetable poster')).toEqual([]);
     expect(searchDocuments(doc, identity, { who: 'link', downloads: false }).filter((d) => d.kind === 'file')).toEqual([]);
     // The block itself (its title) is on every page, so everyone finds it.
-    expect(top(without, 'files to download')).toMatchObject({ kind: 'block', title: 'Downloads', blockId: 'b-files' });
+    expect(top(without, 'files to download')).toMatchObject({ kind: 'block', title: 'Files to download', blockId: 'b-files' });
   });
 
   test('editor notes (a face without a confirmed licence) are in the editor indexes only', () => {

@@ -188,7 +188,7 @@ export function searchDocuments(doc: GuidelineDoc, identity: Identity, audience:
     const logo = typeof parsed.logoId === 'string' ? findLogo(identity, parsed.logoId) : undefined;
     const blockWords = words.filter(Boolean).join(' ');
     if (node.type !== sectionHeadingBlock.type && (blockWords || logo)) {
-      add({ id: `block:${id}`, kind: 'block', title: definition.label, detail: clip(blockWords || (logo ? logo.name : ''), 160), blockId: id, terms: logo ? logo.name : '', text: blockWords });
+      add({ id: `block:${id}`, kind: 'block', title: (typeof parsed.title === 'string' && parsed.title.trim()) || definition.label, detail: clip(blockWords || (logo ? logo.name : ''), 160), blockId: id, terms: logo ? logo.name : '', text: blockWords });
     }
   }
   return [...docs.values()].map((d) => searchDocumentSchema.parse(d));
