@@ -6,6 +6,7 @@ import { Presentation } from '@/components/presentation/Presentation';
 import { deckSlides } from '@/components/presentation/slides';
 import { printPageName } from '@/components/guideline/GuidelineDocument';
 import { siteFrameHtml } from '@/components/site/SiteFrame';
+import { SiteSearch } from '@/components/site/SiteSearch';
 import { formatLongDate, SITE_LOCALE } from '@/lib/format';
 import { brandStyle, fontFaceCss, primaryLogo } from '@/lib/guideline/identity';
 import { safeAssetUrl } from '@/lib/guideline/links';
@@ -30,6 +31,7 @@ export function sitePageHtml(material: VersionMaterial, audience: PageAudience, 
     canDownload: audience.downloads,
     cssHref: staticHref(slug, version.number, 'site.css'),
     bodyHtml: rendered.html,
+    search: true,
   });
 }
 
@@ -97,6 +99,8 @@ export function printEditionHtml(material: VersionMaterial, size: PaperSize, hos
           </nav>
         </div>
         <main className="print-body" dangerouslySetInnerHTML={{ __html: rendered.html }} />
+        {/* On screen only: the print stylesheet hides it, and the PDF step prints with scripts off. */}
+        <SiteSearch slug={slug} number={version.number} place="sheet" />
       </body>
     </html>,
   );

@@ -1,13 +1,11 @@
 // Colour swatches with every notation and the print values, each with a copy button.
 import { PRINT_CAUTION } from '@/lib/cautions';
+import { formatCmyk, formatRgb } from '@/lib/color/notation';
 import type { ColorPaletteAttrs } from './definition';
 import { findColor } from '@/lib/guideline/identity';
 import type { IdentityColor } from '@/lib/identity/types';
 import { Caution, CopyButton, EmptyHint, Missing, Note, safeHex, type BlockRenderProps, type RenderMode } from '@/components/guideline/parts';
 
-/** "C 0 M 62 Y 80 K 14": the way printers read CMYK percentages. */
-export const formatCmyk = ([c, m, y, k]: readonly number[]) => `C ${c} M ${m} Y ${y} K ${k}`;
-export const formatRgb = ([r, g, b]: readonly number[]) => `rgb(${r} ${g} ${b})`;
 
 function Row({ label, value, mode, hint }: { label: string; value: string; mode: RenderMode; hint?: string }) {
   return (

@@ -14,8 +14,8 @@ import { RichBlock } from './RichText';
 export { outline, type OutlineEntry };
 
 function Node({ node, identity, mode }: { node: TopLevelNode; identity: Identity; mode: RenderMode }) {
-  if ((RICH_TEXT_TYPES as readonly string[]).includes(node.type)) return <RichBlock node={node as RichBlockNode} />;
-  const id = (node.attrs as { id?: string } | undefined)?.id;
+  const id = (node.attrs as { id?: string | null } | undefined)?.id ?? undefined;
+  if ((RICH_TEXT_TYPES as readonly string[]).includes(node.type)) return <RichBlock node={node as RichBlockNode} blockId={id} />;
   return (
     <div className="my-6 break-inside-avoid" data-block={node.type} data-block-id={id}>
       <BlockRenderer type={node.type} attrs={node.attrs} identity={identity} mode={mode} />

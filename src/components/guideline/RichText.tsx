@@ -24,15 +24,18 @@ function Inline({ nodes }: { nodes?: InlineNode[] }) {
   return <>{(nodes ?? []).map((n, i) => (n.type === 'text' ? <Text key={i} node={n} /> : <br key={i} />))}</>;
 }
 
-/** One rich-text block (paragraph, heading, list or quote) and everything inside it; the flow-* classes are the editor's too. */
-export function RichBlock({ node }: { node: RichBlockNode }) {
+/**
+ * One rich-text block (paragraph, heading, list or quote) and everything inside it; the flow-* classes are the editor's
+ * too. A top-level block carries its id (`data-block-id`), so search results can jump to it.
+ */
+export function RichBlock({ node, blockId }: { node: RichBlockNode; blockId?: string }) {
   switch (node.type) {
     case 'paragraph':
-      return <p className="flow-p"><Inline nodes={node.content} /></p>;
+      return <p className="flow-p" data-block-id={blockId}><Inline nodes={node.content} /></p>;
     case 'heading': {
       const Tag = `h${node.attrs.level}` as 'h2' | 'h3' | 'h4';
       return (
-        <Tag className="flow-heading">
+        <Tag className="flow-heading" data-block-id={blockId}>
           <Inline nodes={node.content} />
         </Tag>
       );
@@ -45,16 +48,16 @@ export function RichBlock({ node }: { node: RichBlockNode }) {
         </li>
       ));
       return node.type === 'bulletList' ? (
-        <ul className="flow-ul">{items}</ul>
+        <ul className="flow-ul" data-block-id={blockId}>{items}</ul>
       ) : (
-        <ol className="flow-ol" start={node.attrs?.start && node.attrs.start !== 1 ? node.attrs.start : undefined}>
+        <ol className="flow-ol" data-block-id={blockId} start={node.attrs?.start && node.attrs.start !== 1 ? node.attrs.start : undefined}>
           {items}
         </ol>
       );
     }
     case 'blockquote':
       return (
-        <blockquote className="flow-quote">
+        <blockquote className="flow-quote" data-block-id={blockId}>
           {node.content.map((child, j) => <RichBlock key={j} node={child} />)}
         </blockquote>
       );

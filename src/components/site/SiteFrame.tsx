@@ -7,6 +7,7 @@ import type { OutlineEntry } from '@/lib/guideline/outline';
 import { brandStyle, fontFaceCss, markLogo, primaryLogo } from '@/lib/guideline/identity';
 import type { Identity } from '@/lib/identity/types';
 import { versionPath } from '@/lib/publishing/snapshot-urls';
+import { SiteSearch } from './SiteSearch';
 
 export interface SiteFrameProps {
   identity: Identity;
@@ -22,14 +23,19 @@ export interface SiteFrameProps {
   cssHref: string;
   /** The page's own content, already rendered by us (escaped React output or an Astro slot). */
   bodyHtml: string;
+  /** Offer search of this version (the guideline page itself; its results are blocks on this page). */
+  search?: boolean;
 }
 
 const FRAME_CSS = `.site-root { font-family: var(--brand-body-font); color: var(--brand-text); }
 .site-root h1, .site-root h2, .site-root h3 { font-family: var(--brand-heading-font); }
 .site-contents summary::-webkit-details-marker { display: none; }
-@media (max-width: 63.99rem) { .site-main [id] { scroll-margin-top: 3.5rem; } }
+.site-main [data-block-id] { scroll-margin-top: 1.5rem; }
+@media (max-width: 63.99rem) { .site-main [id], .site-main [data-block-id] { scroll-margin-top: 3.5rem; } }
+[data-search-target] { outline: 3px solid #211e1a; outline-offset: 6px; border-radius: 4px; box-shadow: 0 0 0 10px rgb(250 204 21 / 0.45); transition: box-shadow 0.6s ease-out; }
+@media (prefers-reduced-motion: reduce) { [data-search-target] { transition: none; } }
 @media print {
-  .site-chrome { display: none !important; }
+  .site-chrome, .site-search { display: none !important; }
   .site-main { margin: 0 !important; max-width: none !important; }
   section { break-inside: avoid-page; }
   * { -webkit-print-color-adjust: exact; print-color-adjust: exact; }
@@ -48,7 +54,7 @@ document.addEventListener('keydown', (e) => {
   if (menu) { menu.open = false; menu.querySelector('summary').focus(); }
 });`;
 
-export function SiteFrame({ identity, slug, version, latest, outline, isEditor, viaShareLink, canDownload, title, cssHref, bodyHtml }: SiteFrameProps) {
+export function SiteFrame({ identity, slug, version, latest, outline, isEditor, viaShareLink, canDownload, title, cssHref, bodyHtml, search = false }: SiteFrameProps) {
   const style = Object.fromEntries(Object.entries(brandStyle(identity)));
   const fontFaces = fontFaceCss(identity.typefaces);
   const unlicensed = identity.typefaces.filter((f) => !f.licence.confirmed);
@@ -76,7 +82,8 @@ export function SiteFrame({ identity, slug, version, latest, outline, isEditor, 
               {logo ? <img src={logo.files.original} alt={`${identity.brand.name} logo`} className="h-10 w-auto" /> : <span className="text-xl font-bold">{identity.brand.name}</span>}
               <span className="sr-only">{identity.brand.name} guidelines home</span>
             </a>
-            <div className="ml-auto flex flex-wrap items-center gap-3 text-sm">
+            {search && <SiteSearch slug={slug} number={version.number} place="header" />}
+            <div className={`ml-auto flex flex-wrap items-center gap-3 text-sm ${search ? 'lg:ml-0' : ''}`}>
               <a href={`${base}/versions`} className="rounded-full border border-black/15 px-3 py-1 font-semibold hover:bg-black/5" title={version.note}>
                 Version {version.number} · {date}{latest ? ' · current' : ''}
               </a>

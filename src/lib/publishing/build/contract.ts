@@ -66,6 +66,12 @@ export function filePath(rest: string, search: URLSearchParams | string | Record
   return query ? `${rest}?${query}` : rest;
 }
 
+/**
+ * Manifest path of the search index for one audience, e.g. "search/member-downloads.json". The index differs only by
+ * who reads and whether they may download (latest and older pages show the same blocks).
+ */
+export const searchPath = (a: Pick<PageAudience, 'who' | 'downloads'>) => `search/${a.who}-${a.downloads ? 'downloads' : 'no-downloads'}.json`;
+
 /** Manifest path of the print edition on one paper size: the address the PDF step prints (…/print?size=a4). */
 export const printPath = (size: 'a4' | 'letter') => filePath('print', { size });
 

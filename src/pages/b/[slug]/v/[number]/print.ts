@@ -6,8 +6,9 @@ import { sendVersionFile } from '@/site/built.server';
 const HEADERS = {
   'cache-control': 'private, no-cache',
   vary: 'Cookie',
-  // Even a value that slipped past every schema cannot make this page load anything but our own files.
-  'content-security-policy': "default-src 'none'; img-src 'self' data:; font-src 'self' data:; style-src 'self' 'unsafe-inline'; base-uri 'none'; form-action 'none'",
+  // Even a value that slipped past every schema cannot make this page load anything but our own files (the version's
+  // own search script and index included).
+  'content-security-policy': "default-src 'none'; img-src 'self' data:; font-src 'self' data:; style-src 'self' 'unsafe-inline'; script-src 'self'; connect-src 'self'; base-uri 'none'; form-action 'none'",
 };
 
 /** The print edition of a version (?size=a4|letter), as its build set it; the PDF step prints this page. */
