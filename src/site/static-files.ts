@@ -1,6 +1,7 @@
 // The app's own stylesheets and the presentation's script, as text: a build copies them into the version, so a
 // published page never depends on the app build that happens to be running (a redeploy cannot break an old page).
 import deckScript from '@/components/presentation/deck.js?raw';
+import insightsScript from '@/components/site/insights.js?raw';
 import siteCss from '@/styles/global.css?inline';
 import presentationCss from '@/styles/presentation.css?inline';
 import printEditionCss from '@/styles/print-edition.css?inline';
@@ -13,6 +14,7 @@ export const STATIC_FILES = {
   'print-edition.css': { body: printEditionCss, type: 'text/css; charset=utf-8' },
   'presentation.css': { body: presentationCss, type: 'text/css; charset=utf-8' },
   'deck.js': { body: deckScript, type: 'text/javascript; charset=utf-8' },
+  'insights.js': { body: insightsScript, type: 'text/javascript; charset=utf-8' },
 } as const;
 
 export type StaticName = keyof typeof STATIC_FILES;

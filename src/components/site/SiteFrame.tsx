@@ -20,6 +20,8 @@ export interface SiteFrameProps {
   title?: string;
   /** The app's stylesheet. */
   cssHref: string;
+  /** The version's copy of the section-view script (static/insights.js); none on pages that are not a version's. */
+  insightsHref?: string;
   /** The page's own content, already rendered by us (escaped React output or an Astro slot). */
   bodyHtml: string;
 }
@@ -48,7 +50,7 @@ document.addEventListener('keydown', (e) => {
   if (menu) { menu.open = false; menu.querySelector('summary').focus(); }
 });`;
 
-export function SiteFrame({ identity, slug, version, latest, outline, isEditor, viaShareLink, canDownload, title, cssHref, bodyHtml }: SiteFrameProps) {
+export function SiteFrame({ identity, slug, version, latest, outline, isEditor, viaShareLink, canDownload, title, cssHref, insightsHref, bodyHtml }: SiteFrameProps) {
   const style = Object.fromEntries(Object.entries(brandStyle(identity)));
   const fontFaces = fontFaceCss(identity.typefaces);
   const unlicensed = identity.typefaces.filter((f) => !f.licence.confirmed);
@@ -66,6 +68,7 @@ export function SiteFrame({ identity, slug, version, latest, outline, isEditor, 
         <link rel="icon" href={icon ? icon.files.original : '/favicon.svg'} />
         <title>{`${title ? `${title} · ` : ''}${identity.brand.name} brand guidelines`}</title>
         <link rel="stylesheet" href={cssHref} />
+        {insightsHref ? <script defer src={insightsHref} /> : null}
         <style dangerouslySetInnerHTML={{ __html: `${fontFaces}\n${FRAME_CSS}` }} />
       </head>
       <body className="site-root bg-white" style={style}>
