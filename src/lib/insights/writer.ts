@@ -1,4 +1,5 @@
 // The one writer of insight records: the queue's job and the demo seed both store through it.
+import { QueryTypes } from 'sequelize';
 import { SiteInsight } from '@db/models';
 import type { InsightRow } from './rows';
 
@@ -9,8 +10,8 @@ export async function writeInsights(rows: InsightRow[]): Promise<number> {
   const brandIds = [...new Set(rows.map((r) => r.brandId))];
   const linkIds = [...new Set(rows.flatMap((r) => (r.shareLinkId ? [r.shareLinkId] : [])))];
   const [brands, links] = await Promise.all([
-    sequelize.query<{ id: string }>('SELECT id FROM brands WHERE id IN (:ids)', { replacements: { ids: brandIds }, type: 'SELECT' }),
-    linkIds.length ? sequelize.query<{ id: string }>('SELECT id FROM share_links WHERE id IN (:ids)', { replacements: { ids: linkIds }, type: 'SELECT' }) : [],
+    sequelize.query<{ id: string }>('SELECT id FROM brands WHERE id IN (:ids)', { replacements: { ids: brandIds }, type: QueryTypes.SELECT }),
+    linkIds.length ? sequelize.query<{ id: string }>('SELECT id FROM share_links WHERE id IN (:ids)', { replacements: { ids: linkIds }, type: QueryTypes.SELECT }) : [],
   ]);
   const liveBrands = new Set(brands.map((b) => b.id));
   const liveLinks = new Set(links.map((l) => l.id));
