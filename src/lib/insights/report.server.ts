@@ -15,7 +15,7 @@ export async function insightsReport(brandId: string, range: InsightRange, now =
   const { from } = rangeBuckets(range, now);
   const q = <T extends object>(sql: string) => sequelize.query<T>(sql, { replacements: { brandId, from, now }, type: QueryTypes.SELECT });
   const within = `brand_id = :brandId AND at >= :from AND at <= :now`;
-  const [days, versions, sections, visitors, downloads, searches] = await Promise.all([
+  const [days, versions, sections, visitors, downloads, searches, shelfDays, shelf] = await Promise.all([
     q<{ day: string; views: string; visitors: string; downloads: string }>(
       `SELECT day::text AS day, count(*) FILTER (WHERE kind = 'page') AS views, count(DISTINCT visitor_key) AS visitors,
               count(*) FILTER (WHERE ${DOWNLOAD}) AS downloads
@@ -44,12 +44,26 @@ export async function insightsReport(brandId: string, range: InsightRange, now =
       `SELECT query, count(*) AS count, max(at) AS "lastSeen" FROM site_insights
         WHERE ${within} AND kind = 'search' AND results = 0 AND query IS NOT NULL GROUP BY query ORDER BY count DESC, max(at) DESC LIMIT 100`,
     ),
+    // Files taken from the approved shelf (the downloads block and page) are in the download log already.
+    q<{ day: string; count: string }>(
+      `SELECT (created_at AT TIME ZONE 'UTC')::date::text AS day, count(*) AS count FROM asset_downloads
+        WHERE brand_id = :brandId AND created_at >= :from AND created_at <= :now AND kind = 'file' GROUP BY 1`,
+    ),
+    q<{ name: string | null; format: string | null; assetId: string | null; count: string }>(
+      `SELECT a.name, d.details->>'format' AS format, d.asset_id AS "assetId", count(*) AS count
+         FROM asset_downloads d LEFT JOIN assets a ON a.id = d.asset_id
+        WHERE d.brand_id = :brandId AND d.created_at >= :from AND d.created_at <= :now AND d.kind = 'file'
+        GROUP BY a.name, d.details->>'format', d.asset_id ORDER BY count DESC LIMIT 200`,
+    ),
   ]);
 
   const titles = await sectionTitles(brandId, [...new Set(sections.map((s) => s.versionNumber))]);
   const names = await fileNames(brandId);
   const timeline = toBuckets(
-    days.map((d) => ({ day: d.day, views: Number(d.views), visitors: Number(d.visitors), downloads: Number(d.downloads) })),
+    [
+      ...days.map((d) => ({ day: d.day, views: Number(d.views), visitors: Number(d.visitors), downloads: Number(d.downloads) })),
+      ...shelfDays.map((d) => ({ day: d.day, views: 0, visitors: 0, downloads: Number(d.count) })),
+    ],
     range,
     now,
   );
@@ -74,7 +88,10 @@ export async function insightsReport(brandId: string, range: InsightRange, now =
       visitors: Number(v.visitors),
       views: Number(v.views),
     })),
-    downloads: downloads.map((d) => ({ ...describeDownload(d.kind, d.path, names), path: d.path, count: Number(d.count) })),
+    downloads: [
+      ...downloads.map((d) => ({ ...describeDownload(d.kind, d.path, names), path: d.path, count: Number(d.count) })),
+      ...shelf.map((d) => ({ label: d.name ?? 'A file since deleted from the shelf', format: d.format ?? 'original', path: `shelf/${d.assetId ?? ''}?format=${d.format ?? 'original'}`, count: Number(d.count) })),
+    ].sort((a, b) => b.count - a.count),
     searches: searches.map((s) => ({ query: s.query, count: Number(s.count), lastSeen: new Date(s.lastSeen).toISOString() })),
   };
   for (const b of timeline) {
