@@ -101,7 +101,7 @@ describe('recording reads and events', () => {
 
   test('DNT: 1 and Sec-GPC: 1 record nothing, while the answers stay the same', async () => {
     const quiet = (await owner.post(`/api/brands/${brandId}/share-links`, { label: 'Quiet reader' })).body.shareLink;
-    for (const header of [{ dnt: '1' }, { 'sec-gpc': '1' }]) {
+    for (const header of [{ dnt: '1' }, { 'sec-gpc': '1' }] as Record<string, string>[]) {
       const visitor = await visit(quiet.url, header);
       expect((await get(visitor, `/b/${slug}`, header)).status).toBe(200);
       expect((await beacon(visitor, JSON.stringify({ kind: 'search', query: 'dnt secret', results: 0 }), header)).status).toBe(204);

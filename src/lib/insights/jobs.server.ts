@@ -1,4 +1,5 @@
 // The insights work on the shared queue: writing the recorder's batches, and deleting past days' salts.
+import { SiteInsight } from '@db/models';
 import { log } from '@/lib/log.server';
 import { defineJob, onWorkerStart, queue, sendJob, type JobKind } from '@/lib/queue.server';
 import { insightBatchSchema, utcDay, type InsightBatch } from './rows';
@@ -18,6 +19,9 @@ export const insightsWriteJob: JobKind<InsightBatch> = defineJob({
   },
 });
 
+/** Days a record is kept: a year and a month, past the 12-month range. */
+export const INSIGHT_RETENTION_DAYS = 400;
+
 /** Minute 2 of every hour (UTC): a past day's salt lives at most an hour into the next day. */
 export const INSIGHT_SALT_CLEANUP_CRON = '2 * * * *';
 
@@ -28,7 +32,9 @@ export const insightSaltCleanupJob: JobKind<object> = defineJob({
   expireInSeconds: 5 * 60,
   run: async () => {
     const dropped = await dropPastSalts(utcDay(new Date()));
-    if (dropped) log.info({ dropped }, 'insights: past salts deleted');
+    // Records older than the longest range shown (12 months) and a margin serve nobody: they go too.
+    const [, expired] = await SiteInsight.sequelize!.query(`DELETE FROM site_insights WHERE at < now() - make_interval(days => :days)`, { replacements: { days: INSIGHT_RETENTION_DAYS } });
+    if (dropped || (expired as { rowCount?: number })?.rowCount) log.info({ dropped, expired: (expired as { rowCount?: number })?.rowCount ?? 0 }, 'insights: past salts and old records deleted');
   },
 });
 
