@@ -38,9 +38,16 @@ const counters = { recorded: 0, dropped: 0, failed: 0 };
 /** How many records this process took, dropped for want of room, and lost when a batch could not be queued. */
 export const recorderCounters = () => ({ ...counters, waiting: pending.length });
 
+let lastDropNote = 0;
+
 function push(item: Pending): void {
   if (pending.length >= BUFFER_LIMIT) {
     counters.dropped++;
+    // Said at most once a minute: a full buffer means the queue is slower than the site, not that a page should wait.
+    if (Date.now() - lastDropNote > 60_000) {
+      lastDropNote = Date.now();
+      log.warn({ dropped: counters.dropped }, 'insights: buffer full, records dropped');
+    }
     return;
   }
   pending.push(item);
