@@ -8,6 +8,7 @@ import { Brand, BrandMember, Studio, StudioMember } from '@db/models';
 import { seedIdentity } from './identity';
 import { seedCollaboration } from './collaboration';
 import { seedPaletteRoutes } from './palette-routes';
+import { seedInsights } from './insights';
 
 export const DEMO_PASSWORD = 'plumbline-demo';
 
@@ -88,5 +89,6 @@ export async function seedDemo(sequelize: Sequelize, settings: AuthSettings, fil
   });
   await seedCollaboration(sequelize, { designer: ids.designer, editor: ids.editor, reviewer: ids.reviewer });
   await seedPaletteRoutes(sequelize, { designer: ids.designer });
+  await seedInsights(sequelize, DEMO_BRANDS[0].slug);
   return { created };
 }

@@ -2,6 +2,7 @@
 import '@/lib/publishing/build/run.server';
 import '@/lib/notices/publish.server';
 import '@/lib/assets/expiry-job.server';
+import '@/lib/insights/jobs.server';
 import { startWorker } from '@/lib/queue.server';
 
 /** Start working the queues here (once per process; a no-op when QUEUE_WORKER is off). */

@@ -3,6 +3,7 @@ import type { APIContext } from 'astro';
 import { presentationPath } from '@/lib/publishing/build/contract';
 import { notSharedPage, notFoundPage, siteAccess, type SiteAccess } from '@/lib/publishing/site-access.server';
 import { sendVersionFile } from './built.server';
+import { noteRead } from '@/lib/insights/site-read.server';
 import { markLogo, primaryLogo } from '@/lib/guideline/identity';
 import type { Identity } from '@/lib/identity/types';
 import { logoTones } from '@/lib/logo/proofs.server';
@@ -52,5 +53,7 @@ export async function presentationResponse(context: APIContext, number: number |
   const access = await presentationAccess(context, context.params.slug!, number);
   if (access instanceof Response) return access;
   const form = context.url.searchParams.has('print') ? 'print' : number === null ? 'current' : 'version';
-  return sendVersionFile(context.request, access, presentationPath(form), HEADERS, notFoundPage);
+  const response = await sendVersionFile(context.request, access, presentationPath(form), HEADERS, notFoundPage);
+  // The print form is our own PDF step reading the page, not a visitor.
+  return form === 'print' ? response : noteRead(context, access, 'presentation', presentationPath(form), response);
 }

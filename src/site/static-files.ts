@@ -4,6 +4,7 @@
 import deckScript from '@/components/presentation/deck.js?raw';
 import searchScript from '@/components/site/search.js?raw';
 import searchEngine from 'minisearch?raw';
+import insightsScript from '@/components/site/insights.js?raw';
 import siteCss from '@/styles/global.css?inline';
 import presentationCss from '@/styles/presentation.css?inline';
 import printEditionCss from '@/styles/print-edition.css?inline';
@@ -19,6 +20,7 @@ export const STATIC_FILES = {
   'search.js': { body: searchScript, type: 'text/javascript; charset=utf-8' },
   // MiniSearch's own ES module, loaded by search.js on first focus (its source map is not shipped, so not named).
   'minisearch.js': { body: searchEngine.replace(/\n\/\/# sourceMappingURL=\S+\s*$/, '\n'), type: 'text/javascript; charset=utf-8' },
+  'insights.js': { body: insightsScript, type: 'text/javascript; charset=utf-8' },
 } as const;
 
 export type StaticName = keyof typeof STATIC_FILES;

@@ -4,6 +4,7 @@ import type { APIContext } from 'astro';
 import { pagePath, type PageAudience } from '@/lib/publishing/build/contract';
 import { notFoundPage, siteAccess, type SiteAccess } from '@/lib/publishing/site-access.server';
 import { latestNumber } from '@/lib/publishing/versions.server';
+import { noteRead } from '@/lib/insights/site-read.server';
 import { sendVersionFile } from './built.server';
 
 /** Which of a version's built pages this visitor reads. */
@@ -18,5 +19,6 @@ export async function versionPageResponse(context: APIContext, number: number | 
   const access = await siteAccess(context, context.params.slug!, number);
   if (access instanceof Response) return access;
   const headers = { 'cache-control': 'private, no-cache', vary: 'Cookie' };
-  return sendVersionFile(context.request, access, pagePath(await audienceOf(access, number)), headers, notFoundPage);
+  const path = pagePath(await audienceOf(access, number));
+  return noteRead(context, access, 'page', path, await sendVersionFile(context.request, access, path, headers, notFoundPage));
 }

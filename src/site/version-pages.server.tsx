@@ -30,6 +30,7 @@ export function sitePageHtml(material: VersionMaterial, audience: PageAudience, 
     viaShareLink: audience.who === 'link',
     canDownload: audience.downloads,
     cssHref: staticHref(slug, version.number, 'site.css'),
+    insightsHref: staticHref(slug, version.number, 'insights.js'),
     bodyHtml: rendered.html,
     search: true,
   });

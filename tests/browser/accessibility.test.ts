@@ -35,6 +35,7 @@ const SCREENS: [string, () => string, 'anonymous' | 'owner', string][] = [
   ['assets', () => `/app/brands/${brandId}/assets`, 'owner', 'main h2'],
   ['publishing', () => `/app/brands/${brandId}/publishing`, 'owner', 'main h2'],
   ['client', () => `/app/brands/${brandId}/client`, 'owner', 'main h2'],
+  ['insights', () => `/app/brands/${brandId}/insights`, 'owner', 'section[aria-label="Over time"] table'],
   ['mail', () => '/app/mail', 'owner', 'h1'],
 ];
 

@@ -21,6 +21,8 @@ export interface SiteFrameProps {
   title?: string;
   /** The app's stylesheet. */
   cssHref: string;
+  /** The version's copy of the section-view script (static/insights.js); none on pages that are not a version's. */
+  insightsHref?: string;
   /** The page's own content, already rendered by us (escaped React output or an Astro slot). */
   bodyHtml: string;
   /** Offer search of this version (the guideline page itself; its results are blocks on this page). */
@@ -54,7 +56,7 @@ document.addEventListener('keydown', (e) => {
   if (menu) { menu.open = false; menu.querySelector('summary').focus(); }
 });`;
 
-export function SiteFrame({ identity, slug, version, latest, outline, isEditor, viaShareLink, canDownload, title, cssHref, bodyHtml, search = false }: SiteFrameProps) {
+export function SiteFrame({ identity, slug, version, latest, outline, isEditor, viaShareLink, canDownload, title, cssHref, insightsHref, bodyHtml, search = false }: SiteFrameProps) {
   const style = Object.fromEntries(Object.entries(brandStyle(identity)));
   const fontFaces = fontFaceCss(identity.typefaces);
   const unlicensed = identity.typefaces.filter((f) => !f.licence.confirmed);
@@ -72,6 +74,7 @@ export function SiteFrame({ identity, slug, version, latest, outline, isEditor, 
         <link rel="icon" href={icon ? icon.files.original : '/favicon.svg'} />
         <title>{`${title ? `${title} · ` : ''}${identity.brand.name} brand guidelines`}</title>
         <link rel="stylesheet" href={cssHref} />
+        {insightsHref ? <script defer src={insightsHref} /> : null}
         <style dangerouslySetInnerHTML={{ __html: `${fontFaces}\n${FRAME_CSS}` }} />
       </head>
       <body className="site-root bg-white" style={style}>

@@ -19,6 +19,7 @@ export const BRAND_ACTIONS = [
   'asset.download',
   'shareLink.manage',
   'audit.read',
+  'insights.read',
 ] as const;
 export type BrandAction = (typeof BRAND_ACTIONS)[number];
 
@@ -44,6 +45,8 @@ export const PERMISSIONS: Record<BrandAction, readonly BrandRole[]> = {
   'asset.download': ['owner', 'editor', 'reviewer', 'partner'],
   'shareLink.manage': ['owner'],
   'audit.read': ['owner'],
+  // What visitors read and download is the brand owner's business, like the download log.
+  'insights.read': ['owner'],
 };
 
 /** Whether a brand role allows an action. */

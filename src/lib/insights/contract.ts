@@ -2,6 +2,7 @@
 // version (the fast path and Astro's routes), the site's own scripts (search, section views) and the recorder.
 // Nothing here touches the database; recording never waits on anything (see record.server.ts).
 import { z } from 'zod';
+import { isOneLine, ONE_LINE_MESSAGE } from '@/lib/safe/values';
 
 /** One read of a published version's file, as the server answered it (only 200s are recorded). */
 export interface SiteRead {
@@ -20,6 +21,8 @@ export interface SiteRead {
   userAgent: string;
   /** The visitor asked not to be tracked (`DNT: 1` or `Sec-GPC: 1`): nothing is recorded. */
   doNotTrack: boolean;
+  /** The request's Sec-Fetch-Dest, when sent: a file the page loads itself (image, font…) is not counted as a download. */
+  fetchedAs?: string | null;
 }
 
 /** Whether a request's headers ask not to be tracked (DNT, Global Privacy Control). */
@@ -32,7 +35,7 @@ export const asksNotToTrack = (get: (name: string) => string | null | undefined)
  */
 export const siteEventSchema = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('section'), blockId: z.string().min(1).max(64).regex(/^[A-Za-z0-9_-]+$/) }),
-  z.object({ kind: z.literal('search'), query: z.string().trim().min(1).max(120), results: z.number().int().min(0).max(10_000) }),
+  z.object({ kind: z.literal('search'), query: z.string().trim().min(1).max(120).refine(isOneLine, ONE_LINE_MESSAGE), results: z.number().int().min(0).max(10_000) }),
 ]);
 export type SiteEvent = z.infer<typeof siteEventSchema>;
 

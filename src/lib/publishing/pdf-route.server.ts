@@ -8,6 +8,7 @@ import { pdfPath } from './build/contract';
 import { manifestEntry, sendBuilt } from './build/serve.server';
 import { ApiError, errorResponse } from '@/lib/http/api';
 import { escapeHtml } from '@/lib/safe/escape';
+import { noteRead } from '@/lib/insights/site-read.server';
 
 export interface PdfStatus {
   state: 'queued' | 'rendering' | 'failed';
@@ -59,7 +60,8 @@ async function editionResponse(context: APIContext, access: SiteAccess, edition:
   if (version.state === 'ready') {
     const entry = manifestEntry(version.manifest, pdfPath(edition));
     if (!entry) return simplePage(404, 'No PDF for this version', 'This version was built without this PDF.');
-    return sendBuilt(context.request, entry, { 'content-disposition': `inline; filename="${filename}"`, 'cache-control': 'private, max-age=3600' });
+    const sent = await sendBuilt(context.request, entry, { 'content-disposition': `inline; filename="${filename}"`, 'cache-control': 'private, max-age=3600' });
+    return noteRead(context, access, 'pdf', pdfPath(edition), sent);
   }
   const status = buildStatus(version);
   const failedStatus = status.printerMissing ? 503 : 500;

@@ -7,6 +7,7 @@ import { tokenFilename, TOKEN_FORMATS, type TokenFormat } from '@/lib/tokens';
 import { tokenPath } from './build/contract';
 import { manifestEntry, sendBuilt } from './build/serve.server';
 import { simplePage, siteAccess } from './site-access.server';
+import { noteRead } from '@/lib/insights/site-read.server';
 
 /** The format asked for in ?format= (dtcg when absent), or null when it names none. */
 export function tokenFormat(url: URL): TokenFormat | null {
@@ -28,7 +29,7 @@ export async function tokensResponse(context: APIContext, number: number | null)
   const format = tokenFormat(context.url);
   if (!format) return errorResponse(new ApiError(400, 'invalid_input', `Choose a format: ${TOKEN_FORMATS.join(', ')}.`));
   const built = builtTokens(context.request, access.version, format, access.brand.slug);
-  if (built) return built;
+  if (built) return noteRead(context, access, 'tokens', tokenPath(format), await built);
   if (access.version.state === 'ready') return simplePage(404, 'No token file in this format', `Version ${access.version.number} was published without its ${format} design tokens: a value in it could not be written as a token. The studio can correct it and publish again.`);
   if (access.version.state === 'failed') return simplePage(500, 'This version could not be built', 'The studio can try its build again from the publishing page.');
   return simplePage(202, 'The tokens are being prepared', `Version ${access.version.number} is still being built; its design tokens are ready in a moment.`);

@@ -1,5 +1,6 @@
 import type { APIRoute } from 'astro';
 import { filePath } from '@/lib/publishing/build/contract';
+import { noteRead } from '@/lib/insights/site-read.server';
 import { siteAccess } from '@/lib/publishing/site-access.server';
 import { fileRefusal, sendVersionFile, textAnswer } from '@/site/built.server';
 
@@ -19,5 +20,5 @@ export const GET: APIRoute = async (context) => {
   const access = await siteAccess(context, context.params.slug!, Number(context.params.number));
   if (access instanceof Response) return fileRefusal(access);
   const path = filePath(`files/${context.params.fileId ?? ''}`, context.url.searchParams);
-  return sendVersionFile(context.request, access, path, FILE_HEADERS, () => textAnswer(404, 'Not found'));
+  return noteRead(context, access, 'file', path, await sendVersionFile(context.request, access, path, FILE_HEADERS, () => textAnswer(404, 'Not found')));
 };
