@@ -25,6 +25,7 @@ import { initCollaborationModels } from './collaboration';
 import { initPaletteRouteModels } from './palette-routes';
 import { initPublishingModels } from './publishing';
 import { initAddressModels } from './addresses';
+import { initHandoverModels } from './handover';
 
 export class Studio extends Model<InferAttributes<Studio>, InferCreationAttributes<Studio>> {
   declare id: CreationOptional<string>;
@@ -306,6 +307,7 @@ export function initModels(sequelize: Sequelize): void {
   initPublishingModels(sequelize);
   initAddressModels(sequelize);
   initPaletteRouteModels(sequelize);
+  initHandoverModels(sequelize);
 }
 
 /** A Sequelize instance on PostgreSQL through pg, with the models bound. */
@@ -323,3 +325,4 @@ export * from './publishing';
 export * from './assets';
 export * from './addresses';
 export * from './palette-routes';
+export * from './handover';
