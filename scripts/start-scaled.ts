@@ -9,6 +9,7 @@ import { ensureDebianPackages, MACHINE_PACKAGES } from './lib/debian';
 import { publishDemo } from './lib/demo-publish';
 import { startFrontProxy } from './lib/front-proxy';
 import { startMail } from './lib/mail-setup';
+import { startPayments } from './lib/payments-setup';
 import { buildApp, prepareDatabase, startServer } from './lib/prepare';
 import { freePort, startCluster } from './lib/postgres';
 import { startFakeS3 } from '@/lib/storage/fake-s3';
@@ -61,6 +62,9 @@ if (process.env.PLUMBLINE_SKIP_BUILD !== '1') {
 }
 
 const mail = await startMail();
+// Payments: the real service with STRIPE_SECRET_KEY, otherwise the local test service (no money moves).
+const payments = await startPayments(siteUrl);
+console.log(payments.fakeUrl ? `  payments: local test service at ${payments.fakeUrl} (no money moves)` : payments.settings ? '  payments: the payment service (STRIPE_SECRET_KEY)' : '  payments: not set up');
 
 step(`Starting ${webCount} web process(es) and one worker`);
 const children: { role: 'web' | 'worker'; port: number; child: ChildProcess }[] = [];
@@ -86,6 +90,7 @@ async function launch(role: 'web' | 'worker', n: number) {
       filesDir,
       storage,
       mail,
+      payments: payments.settings,
       // The front port adds X-Forwarded-For; only loopback (the front port itself) is believed.
       trustedProxies: '127.0.0.1',
       settings: { PROCESS_ROLE: role, QUEUE_WORKER: role === 'worker' ? 'true' : 'false' },

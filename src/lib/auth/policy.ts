@@ -19,6 +19,7 @@ export const BRAND_ACTIONS = [
   'asset.download',
   'shareLink.manage',
   'audit.read',
+  'handover.manage',
 ] as const;
 export type BrandAction = (typeof BRAND_ACTIONS)[number];
 
@@ -44,6 +45,8 @@ export const PERMISSIONS: Record<BrandAction, readonly BrandRole[]> = {
   'asset.download': ['owner', 'editor', 'reviewer', 'partner'],
   'shareLink.manage': ['owner'],
   'audit.read': ['owner'],
+  // The handover invoice: the designer's business with the client, so the owner's alone.
+  'handover.manage': ['owner'],
 };
 
 /** Whether a brand role allows an action. */

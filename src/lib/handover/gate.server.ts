@@ -60,3 +60,10 @@ export async function assertShelfReleased(brandId: string, role: BrandRole | nul
   const held = await shelfHeldBack(brandId, role, request);
   if (held) throw new ApiError(402, 'payment_required', `${held.title}. ${held.message}`);
 }
+
+/** The gate when it holds something back from this reader (for pages that mark held files), else null. */
+export async function gateFor(brandId: string, role: BrandRole | null): Promise<KeptGate | null> {
+  if (!waitsForPayment(role)) return null;
+  const gate = await brandGate(brandId);
+  return isLocked(gate) ? gate : null;
+}

@@ -11,7 +11,7 @@ import { hashToken, longDate, looksLikeToken, newToken } from '@/lib/invitations
 import { log } from '@/lib/log.server';
 import { sendTemplate, siteLink, type MailOutcome } from '@/lib/mail/mail.server';
 import { forgetGate } from './gate.server';
-import { applyPaymentChange, formatAmount, RELEASE_LABELS, STATE_LABELS, type InvoiceInput } from './invoice';
+import { applyPaymentChange, formatAmount, RELEASE_LABELS, STATE_LABELS, type InvoiceInput, type InvoiceState } from './invoice';
 import { invoiceEvent, payments, paymentsConfigured } from './payments.server';
 import type { HandoverView, InvoiceView } from './views';
 
@@ -228,7 +228,7 @@ export async function takePaymentEvent(event: Stripe.Event): Promise<EventOutcom
 }
 
 /** The receipt (paid) or the notice that files are held back again (refunded, failed), to the client and the studio. */
-async function mailOutcome(invoice: HandoverInvoice, brand: Brand, state: HandoverInvoice['state']): Promise<void> {
+async function mailOutcome(invoice: HandoverInvoice, brand: Brand, state: InvoiceState): Promise<void> {
   const data = {
     brandName: brand.name,
     amount: formatAmount(invoice.amount, invoice.currency),
