@@ -79,6 +79,10 @@ beforeAll(async () => {
     await joinBrand(owner, brandId, person, role);
     people[role] = person.client;
   }
+  await owner.request('PUT', `/api/brands/${brandId}/guideline`, {
+    baseRevision: 0,
+    doc: { type: 'doc', content: [{ type: 'sectionHeading', attrs: { id: 'dl', title: 'Files', eyebrow: '', intro: '' } }, { type: 'downloads', attrs: { id: 'files', title: 'Files to download', assetIds: [], note: '' } }] },
+  });
   await publishAndWait(owner, brandId, 'Handover version');
   const { url } = (await owner.post(`/api/brands/${brandId}/share-links`, { allowDownloads: true })).body.shareLink;
   linkVisitor = new Client();
