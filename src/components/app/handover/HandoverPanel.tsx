@@ -1,6 +1,6 @@
 // The brand's handover invoice: set it, send the pay link to the client, follow its state, refund or remove it.
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useId, useState } from 'react';
+import { useEffect, useId, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { QueryRoot } from '@/components/app/QueryRoot';
 import { rangeOf } from '@/lib/client/form';
@@ -28,11 +28,10 @@ const currencyName = (code: string) => {
 };
 
 export default function HandoverPanel(props: { brandId: string; initial: HandoverView; slug: string }) {
-  return (
-    <QueryRoot>
-      <Panel {...props} />
-    </QueryRoot>
-  );
+  // Drawn once mounted: currency names and amounts come from the browser's own Intl data, which the server's may not match.
+  const [mounted, setMounted] = useState(false);
+  useEffect(() => setMounted(true), []);
+  return <QueryRoot>{mounted ? <Panel {...props} /> : <p className="py-8 text-ink-soft" role="status">Loading…</p>}</QueryRoot>;
 }
 
 function Panel({ brandId, initial, slug }: { brandId: string; initial: HandoverView; slug: string }) {
