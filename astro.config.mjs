@@ -61,6 +61,12 @@ export default defineConfig({
       SMTP_PASSWORD: envField.string({ context: 'server', access: 'secret', optional: true }),
       MAIL_FROM: envField.string({ context: 'server', access: 'secret', default: 'Plumbline <mail@plumbline.invalid>' }),
       MAIL_CAPTURE_DIR: envField.string({ context: 'server', access: 'secret', optional: true }),
+      // Handover payments through the provider's official SDK (src/lib/handover/payments.server.ts). Unset key: the
+      // handover screen says payments are not set up. STRIPE_API_BASE (e.g. http://127.0.0.1:4400) points the SDK at the
+      // local fake that `npm start` and the tests run; leave it unset with real keys and the same code talks to the service.
+      STRIPE_SECRET_KEY: envField.string({ context: 'server', access: 'secret', optional: true }),
+      STRIPE_WEBHOOK_SECRET: envField.string({ context: 'server', access: 'secret', optional: true }),
+      STRIPE_API_BASE: envField.string({ context: 'server', access: 'secret', optional: true }),
       // E-mails one account may send per hour: invitations, resends, briefs, mood boards, review requests.
       MAIL_SEND_LIMIT: envField.number({ context: 'server', access: 'secret', default: 60 }),
       // The logger's level (src/lib/log.server.ts): JSON lines on stdout at this level and above.

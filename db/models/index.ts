@@ -26,6 +26,7 @@ import { initPaletteRouteModels } from './palette-routes';
 import { initPublishingModels } from './publishing';
 import { initAddressModels } from './addresses';
 import { initInsightModels } from './insights';
+import { initHandoverModels } from './handover';
 
 export class Studio extends Model<InferAttributes<Studio>, InferCreationAttributes<Studio>> {
   declare id: CreationOptional<string>;
@@ -308,6 +309,7 @@ export function initModels(sequelize: Sequelize): void {
   initAddressModels(sequelize);
   initPaletteRouteModels(sequelize);
   initInsightModels(sequelize);
+  initHandoverModels(sequelize);
 }
 
 /** A Sequelize instance on PostgreSQL through pg, with the models bound. */
@@ -326,3 +328,4 @@ export * from './assets';
 export * from './addresses';
 export * from './palette-routes';
 export * from './insights';
+export * from './handover';

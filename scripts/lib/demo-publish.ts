@@ -93,6 +93,21 @@ async function stockPattern(siteUrl: string, cookie: string, brandId: string): P
   return asset.id;
 }
 
+/**
+ * The demo's handover: an unpaid invoice for the final files, sent to the client's decision maker (a demo account, so
+ * the pay link can be opened from the sent-mail page). Until it is paid on the local test checkout, the partner and
+ * the share link see the final files held back. Set once; a later start leaves it as it is (paid or not).
+ */
+async function sendDemoHandover(siteUrl: string, cookie: string, brandId: string): Promise<void> {
+  const base = `/api/brands/${brandId}/handover`;
+  const { invoice, paymentsReady } = await call(siteUrl, cookie, 'GET', base);
+  if (invoice) return;
+  const due = new Date(Date.now() + 14 * 86_400_000).toISOString().slice(0, 10);
+  // Invented figure for the demo: £4,800.00, in pence.
+  await call(siteUrl, cookie, 'PUT', base, { amount: 480_000, currency: 'GBP', dueOn: due, releases: 'final-files', clientEmail: DEMO_PEOPLE[2].email });
+  if (paymentsReady) await call(siteUrl, cookie, 'POST', `${base}/send`, {});
+}
+
 /** The approved demo photographs on the shelf, in the order the imagery block shows them. */
 async function shelfPhotos(siteUrl: string, cookie: string, brandId: string): Promise<DemoShelfPhoto[]> {
   const { assets } = await call(siteUrl, cookie, 'GET', `/api/brands/${brandId}/assets?kind=photo&state=approved`);
@@ -140,5 +155,6 @@ export async function publishDemo(siteUrl: string, dataDir: string): Promise<str
     const { shareLink } = await call(siteUrl, cookie, 'POST', `${base}/share-links`, { label: 'Demo link for the signage agency', allowDownloads: true, allowPresentation: true });
     writeFileSync(linkFile, shareLink.url);
   }
+  await sendDemoHandover(siteUrl, cookie, brand.id);
   return readFileSync(linkFile, 'utf8').trim();
 }

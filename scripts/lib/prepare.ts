@@ -70,6 +70,8 @@ export interface ServerEnv {
   storage?: StorageSettings;
   /** E-mail: the SMTP relay and, when the local fake keeps the messages, its folder (src/lib/mail). */
   mail?: { smtpHost: string; smtpPort: number; from?: string; captureDir?: string };
+  /** Payments (STRIPE_*): the local fake's settings or real keys; left out, payments are not set up. */
+  payments?: { STRIPE_SECRET_KEY: string; STRIPE_WEBHOOK_SECRET: string; STRIPE_API_BASE?: string } | null;
   /** Further settings from the astro:env schema by name (e.g. RENDITION_RATE_LIMIT for a test with small limits). */
   settings?: Record<string, string>;
 }
@@ -106,6 +108,11 @@ export async function startServer(env: ServerEnv, opts: { quiet?: boolean; pipeL
       S3_SECRET_ACCESS_KEY: undefined,
       S3_FORCE_PATH_STYLE: undefined,
       ...(env.storage ? storageEnv(env.storage) : {}),
+      // Payment keys come from `payments` or not at all: a test run never reaches a real account by accident.
+      STRIPE_SECRET_KEY: undefined,
+      STRIPE_WEBHOOK_SECRET: undefined,
+      STRIPE_API_BASE: undefined,
+      ...(env.payments ?? {}),
       ...(env.mail
         ? {
             SMTP_HOST: env.mail.smtpHost,

@@ -38,10 +38,10 @@ const SAFE_REQUEST_ID = /^[A-Za-z0-9._-]{8,64}$/;
 export const requestIdFrom = (header: string | null | undefined): string => (header && SAFE_REQUEST_ID.test(header) ? header : randomUUID());
 
 /**
- * Paths whose segment after the prefix is a secret (share, brief, board, palette and invitation links; password reset):
+ * Paths whose segment after the prefix is a secret (share, brief, board, palette, pay and invitation links; password reset):
  * logged as `:token`, so a log reader cannot open them. tests/unit/log.test.ts checks every `[token]` route is here.
  */
-const SECRET_SEGMENT = /^(\/(?:s|brief|board|palette|invite)\/|\/api\/(?:briefs|invitations|moodboards|palette-routes)\/|\/api\/auth\/reset-password\/)[^/]+/;
+const SECRET_SEGMENT = /^(\/(?:s|brief|board|palette|invite|pay)\/|\/api\/(?:briefs|invitations|moodboards|palette-routes|pay)\/|\/api\/auth\/reset-password\/)[^/]+/;
 
 /** The path as logged: no query string (it can hold tokens and addresses), secret segments replaced. */
 export const loggedPath = (pathname: string): string => pathname.split(/[?#]/)[0].replace(SECRET_SEGMENT, '$1:token');

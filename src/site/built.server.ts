@@ -1,6 +1,7 @@
 // The request side of a published version: access has been decided; what is left is to pick the stored file the
 // version's build made for this address and stream it. Nothing is rendered here and nothing is kept in memory.
 import type { Manifest } from '@/lib/publishing/build/contract';
+import { heldBack } from '@/lib/handover/gate.server';
 import { manifestEntry, sendBuilt } from '@/lib/publishing/build/serve.server';
 import { simplePage, type SiteAccess } from '@/lib/publishing/site-access.server';
 import { escapeHtml } from '@/lib/safe/escape';
@@ -35,12 +36,16 @@ export const fileRefusal = (refusal: Response) => (refusal.status === 301 ? refu
 
 /**
  * Stream the stored file for manifest path `path` of the visitor's version, or the answer instead: the "being
- * prepared" page while it builds, `missing()` (a 404) for a path the version does not hold.
+ * prepared" page while it builds, `missing()` (a 404) for a path the version does not hold, and the readable 402
+ * page for a file an unpaid handover invoice holds back from this visitor (the built page itself is never changed:
+ * its links stay, and the file's address says why it is not sent yet).
  */
 export async function sendVersionFile(request: Request, access: SiteAccess, path: string, headers: Record<string, string>, missing: () => Response): Promise<Response> {
   if (access.version.state !== 'ready') return notBuiltPage(access);
   const entry = manifestEntry(access.version.manifest as Manifest | null, path);
   if (!entry) return missing();
+  const held = await heldBack(access.brand.id, path, access);
+  if (held) return simplePage(402, held.title, held.message);
   return sendBuilt(request, entry, headers);
 }
 

@@ -9,10 +9,12 @@ import { buildAppInBackground, prepareDatabase, startServer } from '../../script
 import { ensureDebianPackages, MACHINE_PACKAGES, POSTGRESQL } from '../../scripts/lib/debian';
 import { dropCluster, freePort, startCluster } from '../../scripts/lib/postgres';
 import { startFakeSmtp, type FakeSmtp } from '@/lib/mail/fake-smtp';
+import { localPaymentKeys, startFakePayments, type FakePayments } from '../../scripts/lib/fake-payments';
 
 let server: ChildProcess | undefined;
 let clusterDir: string | undefined;
 let smtp: FakeSmtp | undefined;
+let payments: FakePayments | undefined;
 
 export async function setup(project: TestProject): Promise<void> {
   // The same packages as `npm start`, in one apt run: PostgreSQL, the browser the browser tests and PDFs use, Ghostscript.
@@ -44,13 +46,16 @@ export async function setup(project: TestProject): Promise<void> {
   const mail = { smtpHost: smtp.host, smtpPort: smtp.port, captureDir: smtp.dir };
   // Likewise for mail: one owner sends hundreds of invitations across the role matrix; the limit has its own test.
   const mailSendLimit = 1_000_000;
+  // The local fake of the payment provider, its webhooks signed for this server (scripts/lib/fake-payments.ts).
+  payments = await startFakePayments({ ...localPaymentKeys(), webhookUrl: `${siteUrl}/api/payments/webhook` });
   await built;
-  server = await startServer({ host: '127.0.0.1', port, databaseUrl: cluster.url, siteUrl, secret, signInLimit, mailSendLimit, filesDir, mail }, { quiet: true });
+  server = await startServer({ host: '127.0.0.1', port, databaseUrl: cluster.url, siteUrl, secret, signInLimit, mailSendLimit, filesDir, mail, payments: payments.settings }, { quiet: true });
   project.provide('baseUrl', siteUrl);
   project.provide('databaseUrl', cluster.url);
   project.provide('mailDir', smtp.dir);
   project.provide('filesDir', filesDir);
   project.provide('clusterDir', clusterDir);
+  project.provide('payments', { url: payments.url, webhookSecret: payments.settings.STRIPE_WEBHOOK_SECRET, secretKey: payments.settings.STRIPE_SECRET_KEY });
 }
 
 export async function teardown(): Promise<void> {
@@ -61,6 +66,7 @@ export async function teardown(): Promise<void> {
     if (server.exitCode === null) server.kill('SIGKILL');
   }
   await smtp?.close();
+  await payments?.close();
   if (clusterDir) dropCluster(clusterDir);
 }
 
@@ -73,5 +79,7 @@ declare module 'vitest' {
     filesDir: string;
     /** The throwaway cluster's folder (pgdata, socket, kept passwords). */
     clusterDir: string;
+    /** The local payment fake: its address (API base and checkout pages), webhook signing secret and API key. */
+    payments: { url: string; webhookSecret: string; secretKey: string };
   }
 }

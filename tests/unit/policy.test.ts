@@ -28,8 +28,8 @@ describe('decide', () => {
   test('a role without the right is 403', () => {
     expect(decide(true, 'viewer', 'draft.read')).toMatchObject({ status: 403 });
   });
-  test('only owners manage members, share links, the trail, insights and deletion', () => {
-    for (const action of ['members.manage', 'shareLink.manage', 'audit.read', 'insights.read', 'brand.delete'] as const) {
+  test('only owners manage members, share links, the trail, insights, deletion and the handover invoice', () => {
+    for (const action of ['members.manage', 'shareLink.manage', 'audit.read', 'insights.read', 'brand.delete', 'handover.manage'] as const) {
       expect(PERMISSIONS[action]).toEqual(['owner']);
     }
   });

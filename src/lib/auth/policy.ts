@@ -20,6 +20,7 @@ export const BRAND_ACTIONS = [
   'shareLink.manage',
   'audit.read',
   'insights.read',
+  'handover.manage',
 ] as const;
 export type BrandAction = (typeof BRAND_ACTIONS)[number];
 
@@ -47,6 +48,8 @@ export const PERMISSIONS: Record<BrandAction, readonly BrandRole[]> = {
   'audit.read': ['owner'],
   // What visitors read and download is the brand owner's business, like the download log.
   'insights.read': ['owner'],
+  // The handover invoice: the designer's business with the client, so the owner's alone.
+  'handover.manage': ['owner'],
 };
 
 /** Whether a brand role allows an action. */

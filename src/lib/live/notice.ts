@@ -2,10 +2,10 @@
 // channel) and the memories they keep current. Pure: the PostgreSQL side is in notices.server.ts.
 import { z } from 'zod';
 
-/** The one channel; the triggers of db/migrations/20261202135000-add-change-notices.ts send on it. */
+/** The one channel; the triggers of db/migrations/20261202135000-add-change-notices.ts (and later ones) send on it. */
 export const CHANGE_CHANNEL = 'plumbline_changes';
 
-export const NOTICE_KINDS = ['link', 'member', 'brand', 'version', 'user', 'session'] as const;
+export const NOTICE_KINDS = ['link', 'member', 'brand', 'version', 'user', 'session', 'handover'] as const;
 export type NoticeKind = (typeof NOTICE_KINDS)[number];
 
 /** A payload as received: hostile until this accepted it (anyone with database access may NOTIFY). */

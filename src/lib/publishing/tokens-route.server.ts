@@ -2,6 +2,7 @@
 // manifest ETag, downloaded under the brand's name.
 import type { APIContext } from 'astro';
 import type { GuidelineVersion } from '@db/models';
+import { heldBack } from '@/lib/handover/gate.server';
 import { ApiError, errorResponse } from '@/lib/http/api';
 import { tokenFilename, TOKEN_FORMATS, type TokenFormat } from '@/lib/tokens';
 import { tokenPath } from './build/contract';
@@ -28,6 +29,9 @@ export async function tokensResponse(context: APIContext, number: number | null)
   if (access instanceof Response) return access;
   const format = tokenFormat(context.url);
   if (!format) return errorResponse(new ApiError(400, 'invalid_input', `Choose a format: ${TOKEN_FORMATS.join(', ')}.`));
+  // Design tokens are part of what a handover invoice can hold back until it is paid.
+  const held = await heldBack(access.brand.id, tokenPath(format), access);
+  if (held) return simplePage(402, held.title, held.message);
   const built = builtTokens(context.request, access.version, format, access.brand.slug);
   if (built) return noteRead(context, access, 'tokens', tokenPath(format), await built);
   if (access.version.state === 'ready') return simplePage(404, 'No token file in this format', `Version ${access.version.number} was published without its ${format} design tokens: a value in it could not be written as a token. The studio can correct it and publish again.`);

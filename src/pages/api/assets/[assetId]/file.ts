@@ -3,6 +3,7 @@ import { assetFor, downloadFile, renditionRequester } from '@/lib/assets/assets.
 import { renditionQuerySchema } from '@/lib/assets/kinds';
 import { queryObject } from '@/lib/assets/schemas';
 import { PRINT_CAUTION } from '@/lib/cautions';
+import { assertShelfReleased } from '@/lib/handover/gate.server';
 import { ApiError, endpoint, fileResponse, idParam, methodNotAllowed, notFound, parseWith } from '@/lib/http/api';
 import { requestClientAddress } from '@/lib/http/client-address.server';
 import '@/lib/db.server';
@@ -23,6 +24,8 @@ export const GET = endpoint(async (context) => {
     throw err instanceof ApiError && (err.status === 401 || err.status === 404) ? notFound('That asset') : err;
   });
   const asset = await assetFor(reader.brand.id, assetId, reader.approvedOnly);
+  // An unpaid handover invoice holds back what it releases (402 with the reason); previews and the studio's own reads pass.
+  await assertShelfReleased(reader.brand.id, reader.role, { kind: asset.kind, format: query.format ?? 'original', width: query.width, preset: query.preset, colorSpace: query.colorSpace });
   const { rendition, filename, params: resolved } = await downloadFile(reader, asset, query, renditionRequester(reader, requestClientAddress(context)));
   const body = 'size' in rendition ? { stream: rendition.body, size: rendition.size } : rendition.body;
   const response = fileResponse(body, rendition.mime, filename, { inline: query.download !== '1' });
