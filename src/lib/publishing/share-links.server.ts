@@ -131,6 +131,23 @@ export function tokenFromCookie(value: string | undefined): string | null {
   return expected.length === sig.length && timingSafeEqual(Buffer.from(expected), Buffer.from(sig)) ? token : null;
 }
 
+/**
+ * The grant a share cookie's value carries now, or null: kept by token until a change notice about a link or a
+ * brand (so a revocation reaches every process within a second); the kept grant carries its link's expiry, since
+ * no notice marks the moment a link expires. Used by the middleware and the fast path alike.
+ */
+export async function shareGrantFor(cookieValue: string | undefined): Promise<App.Locals['shareGrant']> {
+  const token = tokenFromCookie(cookieValue);
+  if (!token) return null;
+  const kept = await shareGrants.remember(token, async () => {
+    const link = await linkForToken(token);
+    if (!link || linkState(link) !== 'active') return { grant: null, expiresAt: null };
+    const grant = { brandId: link.brandId, linkId: link.id, allowDownloads: link.allowDownloads, allowPresentation: link.allowPresentation, version: link.versionNumber };
+    return { grant, expiresAt: link.expiresAt?.getTime() ?? null };
+  });
+  return kept.expiresAt !== null && kept.expiresAt <= Date.now() ? null : kept.grant;
+}
+
 /** Count a visit through a link. */
 export async function recordUse(link: ShareLink): Promise<void> {
   await ShareLink.increment('useCount', { where: { id: link.id } });

@@ -22,14 +22,15 @@ export interface SiteAccess {
   isEditor: boolean;
 }
 
-/** A small plain page; title and message are text (escaped here), never HTML. */
+/** The HTML of a small plain page; title and message are text (escaped here), never HTML. */
+export const plainPageHtml = (title: string, message: string) =>
+  `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1"><title>${escapeHtml(title)}</title>` +
+  `<style>body{font-family:system-ui,sans-serif;background:#f8f6f2;color:#211e1a;display:grid;place-items:center;min-height:100vh;margin:0}main{max-width:32rem;padding:2rem}h1{font-size:1.6rem}p{color:#57514a;line-height:1.5}a{color:#4b3a8c}</style></head>` +
+  `<body><main><h1>${escapeHtml(title)}</h1><p>${escapeHtml(message)}</p></main></body></html>`;
+
+/** A small plain page as a response; title and message are text (escaped), never HTML. */
 const page = (status: number, title: string, message: string) =>
-  new Response(
-    `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1"><title>${escapeHtml(title)}</title>` +
-      `<style>body{font-family:system-ui,sans-serif;background:#f8f6f2;color:#211e1a;display:grid;place-items:center;min-height:100vh;margin:0}main{max-width:32rem;padding:2rem}h1{font-size:1.6rem}p{color:#57514a;line-height:1.5}a{color:#4b3a8c}</style></head>` +
-      `<body><main><h1>${escapeHtml(title)}</h1><p>${escapeHtml(message)}</p></main></body></html>`,
-    { status, headers: { 'content-type': 'text/html; charset=utf-8', 'cache-control': 'no-store' } },
-  );
+  new Response(plainPageHtml(title, message), { status, headers: { 'content-type': 'text/html; charset=utf-8', 'cache-control': 'no-store' } });
 
 /** The page for a share link that opens the guidelines but not the presentation. */
 export const notSharedPage = () =>
@@ -50,8 +51,38 @@ function movedTo(url: URL, from: string, to: string): Response {
   return new Response(null, { status: 301, headers: { location: `/b/${encodeURIComponent(to)}${rest}${url.search}`, 'cache-control': 'no-store' } });
 }
 
+/**
+ * The version a member or a share-link holder reads at /b/:slug[/v/:number], from notice-kept memory; null for every
+ * other case (no such brand, a former slug, a print pass, a refusal, no such version), which siteAccess answers.
+ */
+export async function readerAccess(locals: Pick<App.Locals, 'user' | 'shareGrant'>, slug: string, number: number | null): Promise<SiteAccess | null> {
+  const { user, shareGrant } = locals;
+  const brand = await siteCache.brands.remember(slug, () => Brand.findOne({ where: { slug } }));
+  if (!brand) return null;
+  const role = user ? await siteCache.roles.remember(`${user.id}:${brand.id}`, () => roleOn(user.id, brand)) : null;
+  const share = shareGrant?.brandId === brand.id ? shareGrant : null;
+  if ((!role && !share) || (role && !can(role, 'version.read'))) return null;
+  // A link pinned to one version opens that version only.
+  const wanted = !role && share?.version != null ? (number === null || number === share.version ? share.version : -1) : number;
+  if (wanted === -1) return null;
+  const version = await siteCache.versions.remember(`${brand.id}:${wanted ?? 'latest'}`, () => findVersion(brand.id, wanted));
+  if (!version) return null;
+  return {
+    brand,
+    version,
+    role,
+    viaShareLink: role ? null : share!.linkId,
+    canDownload: role ? can(role, 'asset.download') : share!.allowDownloads,
+    canPresent: role ? true : share!.allowPresentation,
+    isEditor: role ? can(role, 'draft.edit') : false,
+  };
+}
+
 /** The version a visitor may read at /b/:slug[/v/:number], or the response to send instead. */
 export async function siteAccess(Astro: Pick<APIContext, 'locals' | 'url' | 'redirect' | 'cookies'>, slug: string, number: number | null): Promise<SiteAccess | Response> {
+  const open = await readerAccess(Astro.locals, slug, number);
+  if (open) return open;
+  // What is left: a former slug, a print pass, a refusal, or no such version (every lookup below is kept in memory).
   const { user, shareGrant } = Astro.locals;
   const brand = await siteCache.brands.remember(slug, () => Brand.findOne({ where: { slug } }));
   if (!brand) {
