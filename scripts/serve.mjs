@@ -37,9 +37,13 @@ const FAST_PATH = Symbol.for('plumbline.fastPath');
 const server = http.createServer((req, res) => {
   const fastPath = globalThis[FAST_PATH];
   if (fastPath && (req.method === 'GET' || req.method === 'HEAD') && req.url?.startsWith('/b/')) {
-    // It answers and says true, or says false having touched nothing; then the request goes on as below.
-    fastPath(req, res).then(
-      (answered) => answered || serve(req, res),
+    // It answers and says true, or says false having touched nothing (then the request goes on as below); a promise
+    // of either when it had to look something up first.
+    const answered = fastPath(req, res);
+    if (answered === true) return;
+    if (answered === false) return serve(req, res);
+    answered.then(
+      (done) => done || serve(req, res),
       (err) => {
         log.error({ err }, 'published read failed');
         res.destroy();

@@ -14,15 +14,21 @@ export class ByteMemory {
     return this.used;
   }
 
-  /** The kept bytes under `key`, or the lookup's (kept when they fit; null is never kept). */
-  remember(key: string, lookup: () => Promise<Buffer | null>): Promise<Buffer | null> {
+  /** The kept bytes under `key` now, or undefined. */
+  peek(key: string): Buffer | undefined {
     const hit = this.kept.get(key);
     if (hit) {
       // Most recently used goes to the end of the map's order.
       this.kept.delete(key);
       this.kept.set(key, hit);
-      return Promise.resolve(hit);
     }
+    return hit;
+  }
+
+  /** The kept bytes under `key`, or the lookup's (kept when they fit; null is never kept). */
+  remember(key: string, lookup: () => Promise<Buffer | null>): Promise<Buffer | null> {
+    const hit = this.peek(key);
+    if (hit) return Promise.resolve(hit);
     const running = this.pending.get(key);
     if (running) return running;
     const found = lookup().then(

@@ -9,7 +9,7 @@ import { promisify } from 'node:util';
 import { brotliCompress, constants as zlib, gzip } from 'node:zlib';
 import { parse as parseCookies } from 'cookie';
 import { SITE_MEMORY_MB, TRUSTED_PROXIES } from 'astro:env/server';
-import { sessionFor, sessionKey } from '@/lib/auth/sessions.server';
+import { keptSession, sessionFor, sessionKey } from '@/lib/auth/sessions.server';
 import { SLUG_PATTERN } from '@/lib/brands/slug';
 import { heldBack } from '@/lib/handover/gate.server';
 import { clientAddress, trustedProxies } from '@/lib/http/client-address';
@@ -22,15 +22,18 @@ import { manifestEntry } from './build/serve.server';
 import { ByteMemory } from './byte-memory';
 import { chooseEncoding, etagMatches, isCompressible, type ContentCoding } from './encoding';
 import { siteCache } from './site-cache';
-import { plainPageHtml, readerAccess, type SiteAccess } from './site-access.server';
-import { SHARE_COOKIE, shareGrantFor } from './share-links.server';
+import { keptReaderAccess, plainPageHtml, readerAccess, type SiteAccess } from './site-access.server';
+import { keptShareGrant, SHARE_COOKIE, shareGrantFor } from './share-links.server';
 import { latestNumber } from './versions.server';
 
 /** Where serve.mjs finds the handler once the bundle has loaded it (Astro loads the middleware on the first request). */
 export const FAST_PATH_KEY = Symbol.for('plumbline.fastPath');
 
-/** Answers the request and resolves true, or resolves false having touched nothing (Astro answers then). */
-export type FastPathHandler = (req: IncomingMessage, res: ServerResponse) => Promise<boolean>;
+/**
+ * Answers the request and says true, or says false having touched nothing (Astro answers then); a promise of either
+ * when something had to be looked up first.
+ */
+export type FastPathHandler = (req: IncomingMessage, res: ServerResponse) => boolean | Promise<boolean>;
 
 // The same headers the Astro routes send for each kind of read (src/pages/b/…).
 const PAGE_HEADERS = { 'cache-control': 'private, no-cache' };
@@ -66,41 +69,53 @@ function storedBytes(entry: ManifestEntry, coding: ContentCoding | 'identity'): 
 }
 
 /** What the request asks for, or null when it is not a read the fast path serves. */
-function readOf(path: string, query: URLSearchParams): { slug: string; number: number | null; read: Read } | null {
+function readOf(path: string, search: string): Asked | null {
   const m = ROUTE.exec(path);
   if (!m || !SLUG_PATTERN.test(m[1])) return null;
+  const slug = m[1];
   const number = m[2] ? Number(m[2]) : null;
   const tail = m[3];
-  if (!tail) return { slug: m[1], number, read: { kind: 'page' } };
-  if (tail === 'presentation.pdf') return { slug: m[1], number, read: { kind: 'pdf', edition: 'slides' } };
+  const query = new URLSearchParams(search);
+  if (!tail) return { slug, number, read: { kind: 'page' }, query };
+  if (tail === 'presentation.pdf') return { slug, number, read: { kind: 'pdf', edition: 'slides' }, query };
   if (tail === 'guideline.pdf') {
     const size = (query.get('size') ?? 'a4').toLowerCase();
     // A paper size we do not print is Astro's 400.
-    return size === 'a4' || size === 'letter' ? { slug: m[1], number, read: { kind: 'pdf', edition: size } } : null;
+    return size === 'a4' || size === 'letter' ? { slug, number, read: { kind: 'pdf', edition: size }, query } : null;
   }
   if (number === null) return null;
-  if (tail.startsWith('files/')) return { slug: m[1], number, read: { kind: 'file', rest: tail } };
-  return { slug: m[1], number, read: { kind: 'static', name: tail.slice('static/'.length) } };
+  if (tail.startsWith('files/')) return { slug, number, read: { kind: 'file', rest: tail }, query };
+  return { slug, number, read: { kind: 'static', name: tail.slice('static/'.length) }, query };
 }
 
-/** The manifest path and headers for a read, or null when Astro should answer (a refusal, a path not built). */
-async function resolve(access: SiteAccess, number: number | null, read: Read, query: URLSearchParams) {
+interface Chosen {
+  /** What insights count it as (a version's static copies are files). */
+  kind: SiteRead['kind'];
+  path: string;
+  headers: Record<string, string>;
+  varyCookie: boolean;
+}
+
+/**
+ * The manifest path and headers for a read, or null when Astro should answer (a presentation PDF the link does not
+ * include). `latest` is the brand's newest ready version number, needed for a page asked for by number.
+ */
+function chosenFor(access: SiteAccess, asked: Asked, latest: number | null): Chosen | null {
+  const { read } = asked;
   switch (read.kind) {
     case 'page': {
-      const latest = number === null || (await siteCache.latest.remember(access.brand.id, () => latestNumber(access.brand.id))) === access.version.number;
       const who = access.viaShareLink ? 'link' : access.isEditor ? 'editor' : 'member';
-      return { path: pagePath({ latest, who, downloads: access.canDownload }), headers: PAGE_HEADERS, varyCookie: true };
+      return { kind: 'page', path: pagePath({ latest: asked.number === null || latest === access.version.number, who, downloads: access.canDownload }), headers: PAGE_HEADERS, varyCookie: true };
     }
     case 'file':
-      return { path: filePath(read.rest, query), headers: FILE_HEADERS, varyCookie: false };
+      return { kind: 'file', path: filePath(read.rest, asked.query), headers: FILE_HEADERS, varyCookie: false };
     case 'static':
-      return { path: staticPath(read.name), headers: STATIC_HEADERS, varyCookie: false };
+      return { kind: 'file', path: staticPath(read.name), headers: STATIC_HEADERS, varyCookie: false };
     case 'pdf': {
       if (read.edition === 'slides' && !access.canPresent) return null;
       const { brand, version } = access;
       const filename = read.edition === 'slides' ? `${brand.slug}-identity-v${version.number}.pdf` : `${brand.slug}-guidelines-v${version.number}-${read.edition}.pdf`;
-      const headers = { 'content-disposition': `inline; filename="${filename}"`, 'cache-control': 'private, max-age=3600' };
-      return { path: pdfPath(read.edition), headers, varyCookie: false };
+      return { kind: 'pdf', path: pdfPath(read.edition), headers: { 'content-disposition': `inline; filename="${filename}"`, 'cache-control': 'private, max-age=3600' }, varyCookie: false };
     }
   }
 }
@@ -112,73 +127,171 @@ function headersOf(req: IncomingMessage): Headers {
   return headers;
 }
 
-const fastPath: FastPathHandler = async (req, res) => {
+interface Asked {
+  slug: string;
+  number: number | null;
+  read: Read;
+  query: URLSearchParams;
+}
+
+/** What the fast path decided to send: the access, the manifest path and entry, and the route's headers. */
+interface Decided extends Chosen {
+  access: SiteAccess;
+  userId: string | null;
+  entry: ManifestEntry;
+}
+
+/** The manifest entry for a read of this access, or null (not ready, not built, not for this reader). */
+function decided(access: SiteAccess | null, userId: string | null, chosen: Chosen | null): Decided | null {
+  if (!access || access.version.state !== 'ready' || !chosen) return null;
+  const entry = manifestEntry(access.version.manifest as Manifest | null, chosen.path);
+  return entry ? { access, userId, entry, ...chosen } : null;
+}
+
+/**
+ * The whole decision from memory, without waiting: undefined when something is not kept yet (the waiting path
+ * looks it up and keeps it), null when Astro answers. The common read of a page costs no promise at all.
+ */
+function decideKept(req: IncomingMessage, asked: Asked): Decided | null | undefined {
+  const cookieHeader = req.headers.cookie ?? '';
+  const key = cookieHeader ? sessionKey(cookieHeader) : null;
+  const session = key ? keptSession(key) : null;
+  if (session === undefined) return undefined;
+  const user = session?.user ?? null;
+  const shareGrant = cookieHeader.includes(SHARE_COOKIE) ? keptShareGrant(parseCookies(cookieHeader)[SHARE_COOKIE]) : null;
+  if (shareGrant === undefined) return undefined;
+  if (!user && !shareGrant) return null;
+  const access = keptReaderAccess({ user, shareGrant }, asked.slug, asked.number);
+  if (access === undefined) return undefined;
+  if (!access) return null;
+  let latest: number | null | undefined = null;
+  if (asked.read.kind === 'page' && asked.number !== null) {
+    latest = siteCache.latest.get(access.brand.id);
+    if (latest === undefined) return undefined;
+  }
+  return decided(access, user?.id ?? null, chosenFor(access, asked, latest));
+}
+
+/** The same decision, looking up (and keeping) whatever memory lacks. */
+async function decideLooked(req: IncomingMessage, asked: Asked): Promise<Decided | null> {
+  const cookieHeader = req.headers.cookie ?? '';
+  const key = cookieHeader ? sessionKey(cookieHeader) : null;
+  const user = key ? ((await sessionFor(key, headersOf(req)))?.user ?? null) : null;
+  const shareGrant = cookieHeader.includes(SHARE_COOKIE) ? await shareGrantFor(parseCookies(cookieHeader)[SHARE_COOKIE]) : null;
+  if (!user && !shareGrant) return null;
+  const access = await readerAccess({ user, shareGrant }, asked.slug, asked.number);
+  if (!access) return null;
+  const latest = asked.read.kind === 'page' && asked.number !== null ? await siteCache.latest.remember(access.brand.id, () => latestNumber(access.brand.id)) : null;
+  return decided(access, user?.id ?? null, chosenFor(access, asked, latest));
+}
+
+/** The stored bytes to send and their coding, from memory only (undefined when not kept yet). */
+function keptBody(entry: ManifestEntry, coding: ContentCoding | 'identity'): { bytes: Buffer; sent: ContentCoding | 'identity' } | undefined {
+  const bytes = memory.peek(coding === 'identity' ? entry.key : `${entry.key}\0${coding}`);
+  if (!bytes) return undefined;
+  if (coding === 'identity' || bytes.length < entry.size) return { bytes, sent: coding };
+  // A compressed form no smaller than the file itself is not worth sending.
+  const plain = memory.peek(entry.key);
+  return plain ? { bytes: plain, sent: 'identity' } : undefined;
+}
+
+/** The same, reading storage and compressing once when memory lacks them; null when storage lacks the object. */
+async function lookedBody(entry: ManifestEntry, coding: ContentCoding | 'identity'): Promise<{ bytes: Buffer; sent: ContentCoding | 'identity' } | null> {
+  const bytes = await storedBytes(entry, coding);
+  if (!bytes) return null;
+  if (coding === 'identity' || bytes.length < entry.size) return { bytes, sent: coding };
+  const plain = await storedBytes(entry, 'identity');
+  return plain ? { bytes: plain, sent: 'identity' } : null;
+}
+
+/** chooseEncoding's answer by Accept-Encoding value: browsers send a handful of values, parsed once each. */
+const codings = new Map<string, ContentCoding | 'identity'>();
+function codingFor(header: string | undefined): ContentCoding | 'identity' {
+  if (!header) return 'identity';
+  let coding = codings.get(header);
+  if (coding === undefined) {
+    coding = chooseEncoding(header);
+    if (codings.size >= 1000) codings.clear();
+    codings.set(header, coding);
+  }
+  return coding;
+}
+
+/** Write the answer: 304 when the visitor holds this representation, else 200 with the bytes (none for HEAD). */
+function send(req: IncomingMessage, res: ServerResponse, d: Decided, body: { bytes: Buffer; sent: ContentCoding | 'identity' }, compressible: boolean): void {
+  const { entry } = d;
+  const etag = body.sent === 'identity' ? entryEtag(entry) : `"${entry.hash.slice(0, 32)}-${body.sent === 'br' ? 'br' : 'gz'}"`;
+  const headers: Record<string, string | number> = { etag, 'content-type': entry.type, ...d.headers, 'x-request-id': requestIdFrom(req.headers['x-request-id'] as string | undefined) };
+  if (d.varyCookie || compressible) headers.vary = d.varyCookie ? (compressible ? 'Cookie, Accept-Encoding' : 'Cookie') : 'Accept-Encoding';
+  if (etagMatches(req.headers['if-none-match'], etag)) {
+    res.writeHead(304, headers).end();
+    return;
+  }
+  if (body.sent !== 'identity') headers['content-encoding'] = body.sent;
+  headers['content-length'] = body.bytes.length;
+  res.writeHead(200, headers);
+  res.end(req.method === 'HEAD' ? undefined : body.bytes);
+  recordRead(siteRead(req, d.access, d.kind, d.path, d.userId));
+}
+
+/** The answer when something had to be looked up: the handover gate for files and PDFs, then the bytes. */
+async function answerLooked(req: IncomingMessage, res: ServerResponse, d: Decided | null, kind: Read['kind']): Promise<boolean> {
+  if (!d) return false;
+  if (kind !== 'page') {
+    const held = await heldBack(d.access.brand.id, d.path, d.access);
+    if (held) {
+      const body = Buffer.from(plainPageHtml(held.title, held.message));
+      const requestId = requestIdFrom(req.headers['x-request-id'] as string | undefined);
+      res.writeHead(402, { 'content-type': 'text/html; charset=utf-8', 'cache-control': 'no-store', 'content-length': body.length, 'x-request-id': requestId });
+      res.end(req.method === 'HEAD' ? undefined : body);
+      return true;
+    }
+  }
+  const compressible = isCompressible(d.entry.type);
+  const body = await lookedBody(d.entry, compressible ? codingFor(req.headers['accept-encoding']) : 'identity');
+  if (!body) return false;
+  send(req, res, d, body, compressible);
+  return true;
+}
+
+const fastPath: FastPathHandler = (req, res) => {
   const url = req.url ?? '/';
   const q = url.indexOf('?');
-  const path = q === -1 ? url : url.slice(0, q);
-  const query = new URLSearchParams(q === -1 ? '' : url.slice(q + 1));
-  const asked = readOf(path, query);
+  const asked = readOf(q === -1 ? url : url.slice(0, q), q === -1 ? '' : url.slice(q + 1));
   if (!asked) return false;
   try {
-    const cookieHeader = req.headers.cookie ?? '';
-    const key = cookieHeader ? sessionKey(cookieHeader) : null;
-    const user = key ? ((await sessionFor(key, headersOf(req)))?.user ?? null) : null;
-    const shareGrant = cookieHeader.includes(SHARE_COOKIE) ? await shareGrantFor(parseCookies(cookieHeader)[SHARE_COOKIE]) : null;
-    if (!user && !shareGrant) return false;
-    const access = await readerAccess({ user, shareGrant }, asked.slug, asked.number);
-    if (!access || access.version.state !== 'ready') return false;
-    const chosen = await resolve(access, asked.number, asked.read, query);
-    if (!chosen) return false;
-    const entry = manifestEntry(access.version.manifest as Manifest | null, chosen.path);
-    if (!entry) return false;
-    const requestId = requestIdFrom(req.headers['x-request-id'] as string | undefined);
-
-    if (asked.read.kind !== 'page') {
-      const held = await heldBack(access.brand.id, chosen.path, access);
-      if (held) {
-        const body = Buffer.from(plainPageHtml(held.title, held.message));
-        res.writeHead(402, { 'content-type': 'text/html; charset=utf-8', 'cache-control': 'no-store', 'content-length': body.length, 'x-request-id': requestId });
-        res.end(req.method === 'HEAD' ? undefined : body);
+    // A page whose every lookup and bytes are in memory is answered here and now (no handover gate for pages).
+    const kept = asked.read.kind === 'page' ? decideKept(req, asked) : undefined;
+    if (kept === null) return false;
+    if (kept) {
+      const compressible = isCompressible(kept.entry.type);
+      const body = keptBody(kept.entry, compressible ? codingFor(req.headers['accept-encoding']) : 'identity');
+      if (body) {
+        send(req, res, kept, body, compressible);
         return true;
       }
     }
-
-    const compressible = isCompressible(entry.type);
-    const coding = compressible ? chooseEncoding(req.headers['accept-encoding']) : 'identity';
-    let bytes = await storedBytes(entry, coding);
-    let sent: ContentCoding | 'identity' = coding;
-    // A compressed form no smaller than the file itself is not worth sending.
-    if (coding !== 'identity' && bytes && bytes.length >= entry.size) {
-      bytes = await storedBytes(entry, 'identity');
-      sent = 'identity';
-    }
-    if (!bytes) return false;
-    const etag = sent === 'identity' ? entryEtag(entry) : `"${entry.hash.slice(0, 32)}-${sent === 'br' ? 'br' : 'gz'}"`;
-    const vary = [...(chosen.varyCookie ? ['Cookie'] : []), ...(compressible ? ['Accept-Encoding'] : [])].join(', ');
-    const headers: Record<string, string | number> = { etag, 'content-type': entry.type, ...chosen.headers, 'x-request-id': requestId };
-    if (vary) headers.vary = vary;
-    if (etagMatches(req.headers['if-none-match'], etag)) {
-      res.writeHead(304, headers).end();
-      return true;
-    }
-    if (sent !== 'identity') headers['content-encoding'] = sent;
-    headers['content-length'] = bytes.length;
-    res.writeHead(200, headers);
-    res.end(req.method === 'HEAD' ? undefined : bytes);
-    recordRead(siteRead(req, access, asked.read.kind === 'static' ? 'file' : asked.read.kind, chosen.path, user?.id ?? null));
-    return true;
   } catch (err) {
     if (res.headersSent) throw err;
-    // Storage or the database had a moment: Astro's route answers this one as it always did.
-    log.warn({ err, path: path.replace(/\?.*/, '') }, 'published read fell back to the full route');
+    log.warn({ err, path: url.slice(0, q === -1 ? undefined : q) }, 'published read fell back to the full route');
     return false;
   }
+  return decideLooked(req, asked)
+    .then((d) => answerLooked(req, res, d, asked.read.kind))
+    .catch((err: unknown) => {
+      if (res.headersSent) throw err;
+      // Storage or the database had a moment: Astro's route answers this one as it always did.
+      log.warn({ err, path: url.slice(0, q === -1 ? undefined : q) }, 'published read fell back to the full route');
+      return false;
+    });
 };
 
 function siteRead(req: IncomingMessage, access: SiteAccess, kind: SiteRead['kind'], path: string, userId: string | null): SiteRead {
   const header = (name: string) => req.headers[name] as string | undefined;
+  const socket = req.socket.remoteAddress ?? '';
+  // Only a trusted proxy's X-Forwarded-For is read, as for the limiters (src/lib/http/client-address.ts).
   const forwarded = header('x-forwarded-for');
-  const asRequest = { headers: { get: (name: string) => (name === 'x-forwarded-for' ? (forwarded ?? null) : null) } } as unknown as Request;
+  const ip = trust(socket) ? clientAddress({ headers: { get: (name: string) => (name === 'x-forwarded-for' ? (forwarded ?? null) : null) } } as unknown as Request, socket, trust) : socket;
   return {
     brandId: access.brand.id,
     versionNumber: access.version.number,
@@ -186,7 +299,7 @@ function siteRead(req: IncomingMessage, access: SiteAccess, kind: SiteRead['kind
     path,
     shareLinkId: access.viaShareLink,
     userId,
-    ip: clientAddress(asRequest, req.socket.remoteAddress ?? '', trust),
+    ip,
     userAgent: header('user-agent') ?? '',
     doNotTrack: asksNotToTrack(header),
   };

@@ -51,21 +51,14 @@ function movedTo(url: URL, from: string, to: string): Response {
   return new Response(null, { status: 301, headers: { location: `/b/${encodeURIComponent(to)}${rest}${url.search}`, 'cache-control': 'no-store' } });
 }
 
-/**
- * The version a member or a share-link holder reads at /b/:slug[/v/:number], from notice-kept memory; null for every
- * other case (no such brand, a former slug, a print pass, a refusal, no such version), which siteAccess answers.
- */
-export async function readerAccess(locals: Pick<App.Locals, 'user' | 'shareGrant'>, slug: string, number: number | null): Promise<SiteAccess | null> {
-  const { user, shareGrant } = locals;
-  const brand = await siteCache.brands.remember(slug, () => Brand.findOne({ where: { slug } }));
-  if (!brand) return null;
-  const role = user ? await siteCache.roles.remember(`${user.id}:${brand.id}`, () => roleOn(user.id, brand)) : null;
-  const share = shareGrant?.brandId === brand.id ? shareGrant : null;
-  if ((!role && !share) || (role && !can(role, 'version.read'))) return null;
-  // A link pinned to one version opens that version only.
-  const wanted = !role && share?.version != null ? (number === null || number === share.version ? share.version : -1) : number;
-  if (wanted === -1) return null;
-  const version = await siteCache.versions.remember(`${brand.id}:${wanted ?? 'latest'}`, () => findVersion(brand.id, wanted));
+type Reader = Pick<App.Locals, 'user' | 'shareGrant'>;
+
+/** Which version a reader asks for: a link pinned to one version opens that version only (-1: not this one). */
+const wantedVersion = (role: BrandRole | null, share: App.Locals['shareGrant'], number: number | null): number | null =>
+  !role && share?.version != null ? (number === null || number === share.version ? share.version : -1) : number;
+
+/** The access these looked-up values give, or null (no membership or link, a role that may not read, no version). */
+function readerFrom(brand: Brand, role: BrandRole | null, share: App.Locals['shareGrant'], version: GuidelineVersion | null): SiteAccess | null {
   if (!version) return null;
   return {
     brand,
@@ -76,6 +69,40 @@ export async function readerAccess(locals: Pick<App.Locals, 'user' | 'shareGrant
     canPresent: role ? true : share!.allowPresentation,
     isEditor: role ? can(role, 'draft.edit') : false,
   };
+}
+
+/** Whether a role or a link opens the site at all (a role must be allowed to read versions). */
+const opens = (role: BrandRole | null, share: App.Locals['shareGrant']): boolean => (role ? can(role, 'version.read') : share !== null);
+const shareFor = (brand: Brand, grant: App.Locals['shareGrant']) => (grant?.brandId === brand.id ? grant : null);
+
+/**
+ * The version a member or a share-link holder reads at /b/:slug[/v/:number], from notice-kept memory; null for every
+ * other case (no such brand, a former slug, a print pass, a refusal, no such version), which siteAccess answers.
+ */
+export async function readerAccess({ user, shareGrant }: Reader, slug: string, number: number | null): Promise<SiteAccess | null> {
+  const brand = await siteCache.brands.remember(slug, () => Brand.findOne({ where: { slug } }));
+  if (!brand) return null;
+  const role = user ? await siteCache.roles.remember(`${user.id}:${brand.id}`, () => roleOn(user.id, brand)) : null;
+  const share = shareFor(brand, shareGrant);
+  if (!opens(role, share)) return null;
+  const wanted = wantedVersion(role, share, number);
+  if (wanted === -1) return null;
+  return readerFrom(brand, role, share, await siteCache.versions.remember(`${brand.id}:${wanted ?? 'latest'}`, () => findVersion(brand.id, wanted)));
+}
+
+/** readerAccess without waiting: its answer when every lookup is kept in memory now, undefined when one is not. */
+export function keptReaderAccess({ user, shareGrant }: Reader, slug: string, number: number | null): SiteAccess | null | undefined {
+  const brand = siteCache.brands.get(slug);
+  if (brand === undefined) return undefined;
+  if (!brand) return null;
+  const role = user ? siteCache.roles.get(`${user.id}:${brand.id}`) : null;
+  if (role === undefined) return undefined;
+  const share = shareFor(brand, shareGrant);
+  if (!opens(role, share)) return null;
+  const wanted = wantedVersion(role, share, number);
+  if (wanted === -1) return null;
+  const version = siteCache.versions.get(`${brand.id}:${wanted ?? 'latest'}`);
+  return version === undefined ? undefined : readerFrom(brand, role, share, version);
 }
 
 /** The version a visitor may read at /b/:slug[/v/:number], or the response to send instead. */
