@@ -231,7 +231,12 @@ function send(req: IncomingMessage, res: ServerResponse, d: Decided, body: { byt
   headers['content-length'] = body.bytes.length;
   res.writeHead(200, headers);
   res.end(req.method === 'HEAD' ? undefined : body.bytes);
-  recordRead(siteRead(req, d.access, d.kind, d.path, d.userId));
+  // The answer is out: nothing about noting it may reach the visitor or the process.
+  try {
+    recordRead(siteRead(req, d.access, d.kind, d.path, d.userId));
+  } catch (err) {
+    log.warn({ err }, 'a published read could not be noted');
+  }
 }
 
 /** The answer when something had to be looked up: the handover gate for files and PDFs, then the bytes. */
@@ -291,7 +296,7 @@ function siteRead(req: IncomingMessage, access: SiteAccess, kind: SiteRead['kind
   const socket = req.socket.remoteAddress ?? '';
   // Only a trusted proxy's X-Forwarded-For is read, as for the limiters (src/lib/http/client-address.ts).
   const forwarded = header('x-forwarded-for');
-  const ip = trust(socket) ? clientAddress({ headers: { get: (name: string) => (name === 'x-forwarded-for' ? (forwarded ?? null) : null) } } as unknown as Request, socket, trust) : socket;
+  const ip = socket && trust(socket) ? clientAddress({ headers: { get: (name: string) => (name === 'x-forwarded-for' ? (forwarded ?? null) : null) } } as unknown as Request, socket, trust) : socket;
   return {
     brandId: access.brand.id,
     versionNumber: access.version.number,
