@@ -76,6 +76,8 @@ export default defineConfig({
       // What this process is for, as GET /api/health reports it: `web` answers people (the default, also for the
       // single `npm start` process), `worker` is the process of `npm run start:scaled` that works the queue.
       PROCESS_ROLE: envField.enum({ context: 'server', access: 'secret', values: ['web', 'worker'], default: 'web' }),
+      // Megabytes of built files (and their brotli/gzip forms) each web process keeps in memory for published reads.
+      SITE_MEMORY_MB: envField.number({ context: 'server', access: 'secret', default: 128 }),
       LOG_LEVEL: envField.enum({ context: 'server', access: 'secret', values: ['trace', 'debug', 'info', 'warn', 'error', 'fatal', 'silent'], default: 'info' }),
     },
   },

@@ -1,5 +1,6 @@
-// The production server: static files from the build's client folder, everything else through Astro's handler
-// (the node adapter in middleware mode). It exists to hand each request its TCP peer's own address as
+// The production server: published reads through the app's fast path when it decides them
+// (src/lib/publishing/fast-path.server.ts, registered once the bundle has loaded), static files from the build's
+// client folder, everything else through Astro's handler (the node adapter in middleware mode). It exists to hand each request its TCP peer's own address as
 // locals.socketAddress: the adapter alone derives the client address from X-Forwarded-For, which any visitor can set.
 // Usage: node scripts/serve.mjs [outDir]   (outDir: PLUMBLINE_OUT_DIR or dist/; HOST and PORT as for the adapter)
 import { statSync } from 'node:fs';
@@ -30,7 +31,30 @@ function staticFile(pathname) {
   }
 }
 
+/** Where the bundle registers its fast path for published reads (see src/lib/publishing/fast-path.server.ts). */
+const FAST_PATH = Symbol.for('plumbline.fastPath');
+
 const server = http.createServer((req, res) => {
+  const fastPath = globalThis[FAST_PATH];
+  if (fastPath && (req.method === 'GET' || req.method === 'HEAD') && req.url?.startsWith('/b/')) {
+    // It answers and says true, or says false having touched nothing (then the request goes on as below); a promise
+    // of either when it had to look something up first.
+    const answered = fastPath(req, res);
+    if (answered === true) return;
+    if (answered === false) return serve(req, res);
+    answered.then(
+      (done) => done || serve(req, res),
+      (err) => {
+        log.error({ err }, 'published read failed');
+        res.destroy();
+      },
+    );
+    return;
+  }
+  serve(req, res);
+});
+
+function serve(req, res) {
   const encoded = (req.url ?? '/').split(/[?#]/)[0];
   let pathname;
   try {
@@ -77,7 +101,7 @@ const server = http.createServer((req, res) => {
   };
   // No `next`: a path no route matches gets Astro's own 404 page.
   handler(req, res, undefined, { socketAddress: req.socket.remoteAddress });
-});
+}
 
 server.listen(port, host, () => {
   log.info({ url: `http://${host}:${port}` }, 'Plumbline listening');

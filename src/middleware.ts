@@ -2,17 +2,17 @@
 // else (besides starting this process's job worker once): authorisation lives in src/lib/auth/policy.ts (members) and src/lib/publishing/site-access.server.ts (sites).
 import type { APIContext, MiddlewareNext } from 'astro';
 import { defineMiddleware } from 'astro:middleware';
-import { forgetSession, sessionFor } from './lib/auth/sessions.server';
+import { forgetSession, sessionFor, sessionKey } from './lib/auth/sessions.server';
 import { startChangeNotices } from './lib/live/notices.server';
 import { startJobs } from './lib/jobs.server';
 import { log, requestIdFrom, serveLogged } from './lib/log.server';
-import { shareGrants } from './lib/publishing/grant-cache';
-import { linkForToken, linkState, SHARE_COOKIE, tokenFromCookie } from './lib/publishing/share-links.server';
+import { installFastPath } from './lib/publishing/fast-path.server';
+import { SHARE_COOKIE, shareGrantFor } from './lib/publishing/share-links.server';
 
 // Sessions and share grants are kept in memory by change notices, which this process starts listening for now.
 startChangeNotices();
-/** Every session cookie the request carries, name and value: all that better-auth reads to find the session. */
-const sessionKey = (cookie: string) => [...cookie.matchAll(/(?:^|;)\s*([^=;\s]*session_token)=([^;]*)/g)].map((m) => `${m[1]}=${m[2]}`).join('; ') || null;
+// Published reads (pages, files, PDFs) are answered ahead of Astro by scripts/serve.mjs once this module is loaded.
+installFastPath();
 
 export const onRequest = defineMiddleware((context, next) => {
   // The web process works the job queue too (builds, notices) unless QUEUE_WORKER is off; started once, on the
@@ -46,16 +46,6 @@ async function resolveCaller(context: APIContext, next: MiddlewareNext): Promise
       context.locals.session = found.session;
     }
   }
-  const token = tokenFromCookie(context.cookies.get(SHARE_COOKIE)?.value);
-  if (token) {
-    const kept = await shareGrants.remember(token, async () => {
-      const link = await linkForToken(token);
-      if (!link || linkState(link) !== 'active') return { grant: null, expiresAt: null };
-      const grant = { brandId: link.brandId, linkId: link.id, allowDownloads: link.allowDownloads, allowPresentation: link.allowPresentation, version: link.versionNumber };
-      return { grant, expiresAt: link.expiresAt?.getTime() ?? null };
-    });
-    // No notice marks the moment a link expires: the kept grant carries its expiry.
-    context.locals.shareGrant = kept.expiresAt !== null && kept.expiresAt <= Date.now() ? null : kept.grant;
-  }
+  context.locals.shareGrant = await shareGrantFor(context.cookies.get(SHARE_COOKIE)?.value);
   return next();
 }

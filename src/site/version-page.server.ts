@@ -3,13 +3,14 @@
 import type { APIContext } from 'astro';
 import { pagePath, type PageAudience } from '@/lib/publishing/build/contract';
 import { notFoundPage, siteAccess, type SiteAccess } from '@/lib/publishing/site-access.server';
+import { siteCache } from '@/lib/publishing/site-cache';
 import { latestNumber } from '@/lib/publishing/versions.server';
 import { noteRead } from '@/lib/insights/site-read.server';
 import { sendVersionFile } from './built.server';
 
 /** Which of a version's built pages this visitor reads. */
 export async function audienceOf(access: SiteAccess, number: number | null): Promise<PageAudience> {
-  const latest = number === null || (await latestNumber(access.brand.id)) === access.version.number;
+  const latest = number === null || (await siteCache.latest.remember(access.brand.id, () => latestNumber(access.brand.id))) === access.version.number;
   return { latest, who: access.viaShareLink ? 'link' : access.isEditor ? 'editor' : 'member', downloads: access.canDownload };
 }
 

@@ -35,5 +35,17 @@ export async function sessionFor(cookieValue: string, headers: Headers): Promise
   return (await sessions.remember(cookieValue, read)).found;
 }
 
+/** Every session cookie a Cookie header carries, name and value: all that better-auth reads to find the session. */
+export const sessionKey = (cookie: string) => [...cookie.matchAll(/(?:^|;)\s*([^=;\s]*session_token)=([^;]*)/g)].map((m) => `${m[1]}=${m[2]}`).join('; ') || null;
+
+/**
+ * The kept session behind `cookieValue` without waiting: the session (or null for a kept refusal) when this process
+ * holds a usable answer, undefined when it must be read (sessionFor). For the fast path of published reads.
+ */
+export function keptSession(cookieValue: string): AuthSession | null | undefined {
+  const kept = sessions.get(cookieValue);
+  return kept && usable(kept, Date.now()) ? kept.found : undefined;
+}
+
 /** This process ends its memory of a session at once when the person signs out here (the notice follows). */
 export const forgetSession = (cookieValue: string): void => sessions.drop(cookieValue);

@@ -122,13 +122,48 @@ export const brandOfLink = async (link: ShareLink): Promise<Brand> => (await Bra
 /** The cookie value for an opened link: the token plus a signature proving any password was given. */
 export const shareCookieValue = (token: string) => `${token}.${createHmac('sha256', AUTH_SECRET).update(`share:${token}`).digest('base64url')}`;
 
+/** Cookie values whose signature was checked, with their token: an HMAC per request costs more than the rest of a read. */
+const verifiedCookies = new Map<string, string>();
+
 /** The token inside a share cookie whose signature is ours, or null. */
 export function tokenFromCookie(value: string | undefined): string | null {
   if (!value) return null;
+  const verified = verifiedCookies.get(value);
+  if (verified) return verified;
   const [token, sig] = value.split('.');
   if (!token || !sig) return null;
   const expected = shareCookieValue(token).split('.')[1];
-  return expected.length === sig.length && timingSafeEqual(Buffer.from(expected), Buffer.from(sig)) ? token : null;
+  if (expected.length !== sig.length || !timingSafeEqual(Buffer.from(expected), Buffer.from(sig))) return null;
+  // Only values we signed are kept, so a flood of forged cookies cannot fill it; it starts over when full.
+  if (verifiedCookies.size >= 10_000) verifiedCookies.clear();
+  verifiedCookies.set(value, token);
+  return token;
+}
+
+/**
+ * The grant a share cookie's value carries now, or null: kept by token until a change notice about a link or a
+ * brand (so a revocation reaches every process within a second); the kept grant carries its link's expiry, since
+ * no notice marks the moment a link expires. Used by the middleware and the fast path alike.
+ */
+export async function shareGrantFor(cookieValue: string | undefined): Promise<App.Locals['shareGrant']> {
+  const token = tokenFromCookie(cookieValue);
+  if (!token) return null;
+  const kept = await shareGrants.remember(token, async () => {
+    const link = await linkForToken(token);
+    if (!link || linkState(link) !== 'active') return { grant: null, expiresAt: null };
+    const grant = { brandId: link.brandId, linkId: link.id, allowDownloads: link.allowDownloads, allowPresentation: link.allowPresentation, version: link.versionNumber };
+    return { grant, expiresAt: link.expiresAt?.getTime() ?? null };
+  });
+  return kept.expiresAt !== null && kept.expiresAt <= Date.now() ? null : kept.grant;
+}
+
+/** The kept grant for a share cookie's value without waiting: the grant or null, or undefined when it must be looked up (shareGrantFor). */
+export function keptShareGrant(cookieValue: string | undefined): App.Locals['shareGrant'] | undefined {
+  const token = tokenFromCookie(cookieValue);
+  if (!token) return null;
+  const kept = shareGrants.get(token);
+  if (!kept) return undefined;
+  return kept.expiresAt !== null && kept.expiresAt <= Date.now() ? null : kept.grant;
 }
 
 /** Count a visit through a link. */

@@ -11,10 +11,13 @@ export const siteCache = {
   roles: noticeBoard.memory<BrandRole | null>('site roles', ['member', 'user', 'brand']),
   /** By `brandId:number|latest`; a version published, turning ready or deleted changes them. */
   versions: noticeBoard.memory<GuidelineVersion | null>('site versions', ['version', 'brand']),
+  /** By brand id: the number of its newest ready version (which of a version's pages a reader gets depends on it). */
+  latest: noticeBoard.memory<number | null>('site latest versions', ['version', 'brand']),
   /** This process at once, before the notice comes back (e.g. after a publish, a member change or a renamed slug). */
   forget(): void {
     siteCache.brands.forget();
     siteCache.roles.forget();
     siteCache.versions.forget();
+    siteCache.latest.forget();
   },
 };
