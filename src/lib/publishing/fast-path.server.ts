@@ -231,7 +231,9 @@ function send(req: IncomingMessage, res: ServerResponse, d: Decided, body: { byt
   headers['content-length'] = body.bytes.length;
   res.writeHead(200, headers);
   res.end(req.method === 'HEAD' ? undefined : body.bytes);
-  // The answer is out: nothing about noting it may reach the visitor or the process.
+  // The answer is out: nothing about noting it may reach the visitor or the process. A HEAD is not a read, and the
+  // version's own stylesheets and scripts are the page's furniture, not something anyone reads or downloads.
+  if (req.method !== 'GET' || d.path.startsWith('static/')) return;
   try {
     recordRead(siteRead(req, d.access, d.kind, d.path, d.userId));
   } catch (err) {
@@ -307,6 +309,7 @@ function siteRead(req: IncomingMessage, access: SiteAccess, kind: SiteRead['kind
     ip,
     userAgent: header('user-agent') ?? '',
     doNotTrack: asksNotToTrack(header),
+    fetchedAs: header('sec-fetch-dest') ?? null,
   };
 }
 
