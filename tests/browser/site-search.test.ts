@@ -36,7 +36,8 @@ async function open(options: (typeof VIEWPORTS)[number][1]): Promise<{ page: Pag
   const beacons: string[] = [];
   page.on('pageerror', (e) => errors.push(String(e)));
   page.on('request', (r) => {
-    if (r.url().endsWith('/events')) beacons.push(r.postData() ?? '');
+    // Only search's own reports: the page's section views go to the same address.
+    if (r.url().endsWith('/events') && r.postData()?.includes('"kind":"search"')) beacons.push(r.postData() ?? '');
   });
   await page.goto(shareUrl);
   await page.locator('[data-site-search]:not([hidden])').waitFor();
@@ -117,7 +118,7 @@ test('a settled search that finds nothing is reported once, and not at all when 
   const page2 = await quiet.newPage();
   const sent: string[] = [];
   page2.on('request', (r) => {
-    if (r.url().endsWith('/events')) sent.push(r.url());
+    if (r.url().endsWith('/events') && r.postData()?.includes('"kind":"search"')) sent.push(r.url());
   });
   await page2.goto(shareUrl);
   const box2 = page2.getByRole('combobox', { name: 'Search these guidelines' });

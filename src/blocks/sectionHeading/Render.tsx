@@ -8,7 +8,7 @@ export function SectionHeader({ entry, intro, mode }: { entry: OutlineEntry; int
   return (
     <header className="mb-6">
       {entry.eyebrow ? <p className="text-xs font-semibold uppercase tracking-[0.16em] opacity-70">{entry.eyebrow}</p> : null}
-      <Title id={`${entry.anchor}-title`} data-block-id={mode === 'print' || !entry.blockId ? undefined : entry.blockId} className="group mt-1 text-4xl font-semibold leading-tight" style={{ fontFamily: 'var(--brand-heading-font)' }}>
+      <Title id={`${entry.anchor}-title`} data-block-id={mode === 'print' || !entry.blockId ? undefined : entry.blockId} data-section-heading={mode === 'print' || !entry.blockId ? undefined : ''} className="group mt-1 text-4xl font-semibold leading-tight" style={{ fontFamily: 'var(--brand-heading-font)' }}>
         {entry.title}
         {mode === 'print' ? null : (
           <a href={`#${entry.anchor}`} className="ml-3 text-2xl no-underline opacity-0 group-hover:opacity-40 focus-visible:opacity-60" aria-label={`Link to the section ${entry.title}`}>

@@ -18,5 +18,6 @@
       navigator.sendBeacon(address, JSON.stringify({ kind: 'section', blockId }));
     }
   });
-  for (const heading of document.querySelectorAll('[data-block-id]')) watcher.observe(heading);
+  // Section headings only: other blocks carry data-block-id too (search jumps to them), but a view is counted per section.
+  for (const heading of document.querySelectorAll('[data-section-heading][data-block-id]')) watcher.observe(heading);
 })();
