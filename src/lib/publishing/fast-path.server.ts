@@ -145,7 +145,8 @@ interface Decided extends Chosen {
 function decided(access: SiteAccess | null, userId: string | null, chosen: Chosen | null): Decided | null {
   if (!access || access.version.state !== 'ready' || !chosen) return null;
   const entry = manifestEntry(access.version.manifest as Manifest | null, chosen.path);
-  return entry ? { access, userId, entry, ...chosen } : null;
+  // A file too large to keep beside others (an eighth of the memory) is streamed by Astro's route instead.
+  return entry && entry.size <= memory.maxBytes / 8 ? { access, userId, entry, ...chosen } : null;
 }
 
 /**
