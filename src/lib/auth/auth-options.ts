@@ -29,6 +29,9 @@ export const VERIFICATION_HOURS = 24;
 export function authOptions(settings: AuthSettings): BetterAuthOptions {
   const secure = settings.siteUrl.startsWith('https://');
   const pool = new pg.Pool({ connectionString: settings.databaseUrl, max: 5 });
+  // An idle connection the database dropped is an 'error' event on the pool: unheard, it would end the process. The
+  // pool discards that connection by itself and the next query opens another, so there is nothing more to do here.
+  pool.on('error', () => undefined);
   // An idle connection dropped by the server (restart, shutdown) must not take the process down.
   pool.on('error', (err) => settings.onPoolError?.(err));
   return {

@@ -34,6 +34,9 @@ export function onVersionReady(hook: (typeof afterReady)[number]): void {
  */
 async function withBuildLock<T>(versionId: string, work: () => Promise<T>): Promise<T | 'busy'> {
   const client = new pg.Client({ connectionString: DATABASE_URL, application_name: 'plumbline-build' });
+  // A lost connection (the database restarted or went away) is an 'error' event: unheard, it would end the process.
+  // The build's own queries fail on their pool and the job retries; the lock went with the connection.
+  client.on('error', (err) => log.warn({ err, versionId }, 'build lock connection lost'));
   await client.connect();
   try {
     const { rows } = await client.query<{ got: boolean }>('SELECT pg_try_advisory_lock(hashtext($1)) AS got', [`build:${versionId}`]);
