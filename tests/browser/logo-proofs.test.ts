@@ -108,7 +108,8 @@ test('on the proofs the designer chooses how light parts print in one colour, by
     const img = choice.getByRole('img', { name: alt });
     await expect.poll(() => img.evaluate((el) => (el as HTMLImageElement).naturalWidth), { timeout: 20_000 }).toBeGreaterThan(0);
   }
-  await ink.check();
+  // A click, not check(): the choice is saved first and the radio shows it once the server has answered.
+  await ink.click();
   await page.getByText('light parts are now printed in the ink').waitFor();
   await expect.poll(() => ink.isChecked()).toBe(true);
   const proof = page.getByRole('img', { name: /in black on white$/ }).first();
