@@ -1,6 +1,6 @@
 // Sign-in and sign-up, validated in the browser and answered in words when the server says no.
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { api, ApiClientError } from '@/lib/client/api';
@@ -35,6 +35,10 @@ const SERVER_WORDS: Record<string, string> = {
 export default function AuthForm({ mode, next }: { mode: 'sign-in' | 'sign-up'; next: string }) {
   const signUp = mode === 'sign-up';
   const [serverError, setServerError] = useState<string | null>(null);
+  // The button waits for this island to run: a click before then would be the browser's own submit, which puts
+  // nothing in the address (method post) but signs nobody in, and the person would be left wondering.
+  const [ready, setReady] = useState(false);
+  useEffect(() => setReady(true), []);
   const {
     register,
     handleSubmit,
@@ -63,7 +67,7 @@ export default function AuthForm({ mode, next }: { mode: 'sign-in' | 'sign-up'; 
     ) : null;
 
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-5" aria-describedby={serverError ? 'form-error' : undefined}>
+    <form method="post" onSubmit={onSubmit} noValidate className="space-y-5" aria-describedby={serverError ? 'form-error' : undefined}>
       {serverError && (
         <div id="form-error" role="alert" className="rounded-md border border-danger/30 bg-danger-wash px-4 py-3 text-sm text-danger">
           {serverError}
@@ -95,7 +99,7 @@ export default function AuthForm({ mode, next }: { mode: 'sign-in' | 'sign-up'; 
         {signUp && !errors.password && <p id="password-hint" className="hint">At least {PASSWORD_MIN} characters.</p>}
         {fieldError('password')}
       </div>
-      <button type="submit" className="btn-primary w-full py-2.5" disabled={isSubmitting}>
+      <button type="submit" className="btn-primary w-full py-2.5" disabled={!ready || isSubmitting}>
         {isSubmitting ? (signUp ? 'Creating your account…' : 'Signing in…') : signUp ? 'Create account' : 'Sign in'}
       </button>
     </form>
