@@ -100,7 +100,7 @@ export default async function siteBench(): Promise<void> {
     const small = await publishedBrand(server, cookie, 8);
     const { url: link } = (await call(server, cookie, 'POST', `/api/brands/${small.id}/share-links`, { label: 'Bench' })).shareLink;
     const opened = await fetch(link, { redirect: 'manual' });
-    const visitor = { cookie: opened.headers.getSetCookie().map((c) => c.split(';')[0]).join('; '), 'accept-encoding': BROWSER_ENCODINGS };
+    const visitor = { cookie: opened.headers.getSetCookie().map((c) => c.split(';')[0]).join('; '), 'accept-encoding': BROWSER_ENCODINGS, ...(process.env.BENCH_DNT ? { dnt: '1' } : {}) };
     const pageUrl = `${server.baseUrl}/b/${small.slug}`;
     const sent = await rawGet(pageUrl, visitor);
     if (sent.status !== 200) throw new Error(`the page answered ${sent.status}`);

@@ -197,3 +197,22 @@ describe('events from the page', () => {
     expect(limiter.take('v', 61_000)).toBe(true);
   });
 });
+
+describe('repeated reads count once within the window (common practice for page-view counts)', () => {
+  test('the same key within the window is a repeat; after it, or another key, is not', async () => {
+    const { RepeatFilter } = await import('@/lib/insights/repeats');
+    const f = new RepeatFilter(30_000, 100);
+    expect(f.repeats('a', 0)).toBe(false);
+    expect(f.repeats('a', 29_999)).toBe(true);
+    expect(f.repeats('b', 29_999)).toBe(false);
+    expect(f.repeats('a', 30_000)).toBe(false);
+  });
+  test('memory is bounded: past the limit it starts afresh', async () => {
+    const { RepeatFilter } = await import('@/lib/insights/repeats');
+    const f = new RepeatFilter(30_000, 2);
+    f.repeats('a', 0);
+    f.repeats('b', 0);
+    expect(f.repeats('c', 1)).toBe(false);
+    expect(f.repeats('a', 2)).toBe(false);
+  });
+});

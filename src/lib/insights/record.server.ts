@@ -5,6 +5,7 @@ import { log } from '@/lib/log.server';
 import { sendJob } from '@/lib/queue.server';
 import type { SiteEvent, SiteRead } from './contract';
 import { insightsWriteJob } from './jobs.server';
+import { RepeatFilter } from './repeats';
 import { clip, utcDay, visitorKey, type InsightKind, type InsightRow } from './rows';
 import { saltOf } from './salts.server';
 
@@ -59,10 +60,19 @@ function push(item: Pending): void {
 /** Sec-Fetch-Dest values of files the page loads by itself (not opened or saved by the visitor). */
 const EMBEDDED_DESTS = new Set(['image', 'font', 'style', 'script', 'video', 'audio', 'track', 'object', 'embed']);
 
+/** A repeat of the same read by the same visitor within this long counts once (see repeats.ts). */
+export const REPEAT_MS = 30_000;
+const repeats = new RepeatFilter(REPEAT_MS, 20_000);
+
+/** Whether this read repeats one noted less than REPEAT_MS ago (and if not, remember it). */
+const isRepeat = (read: SiteRead, now: number) =>
+  repeats.repeats(`${read.brandId}\n${read.versionNumber}\n${read.path}\n${read.shareLinkId ?? ''}\n${read.userId ?? ''}\n${read.ip}\n${read.userAgent}`, now);
+
 /** Note one read; returns at once. A visitor who asked not to be tracked is not noted at all. */
 export function recordRead(read: SiteRead): void {
   try {
     if (read.doNotTrack) return;
+    if (isRepeat(read, Date.now())) return;
     push({
       at: new Date(),
       brandId: read.brandId,
