@@ -3,6 +3,7 @@ import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join, relative } from 'node:path';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { closeDb } from '../support/db';
+import { waitForBuild } from '../support/publish';
 import { CALLERS, makeBrand, makeCast, type Cast, type Fixture } from './fixtures';
 import { brandPool, type BrandKind, type BrandPool } from './matrix/brand-pool';
 import { brandState } from './matrix/brand-state';
@@ -27,6 +28,10 @@ beforeAll(async () => {
   // Built while the shared cases run, three at a time, so one build's requests are computed while another's wait.
   pool = brandPool(cast, OWN_BRANDS, 3);
   shared = await makeBrand(cast);
+  // The shared brand's published versions are built by a job: its state is taken once they are all done, or a build
+  // finishing during some case would look like that case changing the brand.
+  const listed = await cast.clients.owner.get<{ versions: { number: number }[] }>(`/api/brands/${shared.brandId}/versions`);
+  for (const v of listed.body.versions) await waitForBuild(cast.clients.owner, shared.brandId, v.number);
   sharedState = await brandState(shared.brandId);
 });
 afterAll(async () => {
