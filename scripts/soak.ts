@@ -12,8 +12,6 @@
 // Every process it started is stopped and the cluster and folder removed, also on failure or Ctrl-C; exit 1 when a
 // goal fails. Bounded: SOAK_SECONDS (default 30) of load, SOAK_ROUNDS (default 50) rounds, SOAK_LIMIT_SECONDS
 // (default 600) for the whole run.
-import type { ChildProcess } from 'node:child_process';
-import { execFileSync } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
 import { existsSync, mkdtempSync, readdirSync, rmSync, statSync } from 'node:fs';
 import { availableParallelism, loadavg, tmpdir } from 'node:os';
@@ -23,6 +21,7 @@ import pg from 'pg';
 import { listCaptured } from '@/lib/mail/captured';
 import { startFakeSmtp, type FakeSmtp } from '@/lib/mail/fake-smtp';
 import { startFakeS3, type FakeS3 } from '@/lib/storage/fake-s3';
+import { killHard } from './lib/kill-tree';
 import { ensureDebianPackages, MACHINE_PACKAGES, POSTGRESQL } from './lib/debian';
 import { dropCluster, freePort, startCluster } from './lib/postgres';
 import { buildAppInBackground, outDir, prepareDatabase } from './lib/prepare';
@@ -75,32 +74,6 @@ const abort = (why: string, code: number) => {
 process.on('SIGINT', () => abort('interrupted', 130));
 process.on('SIGTERM', () => abort('terminated', 143));
 setTimeout(() => abort(`over its limit of ${LIMIT_SECONDS} s (SOAK_LIMIT_SECONDS)`, 1), LIMIT_SECONDS * 1000).unref();
-
-/** Every process under `pid` (a worker's Chromium and its own children), deepest last. */
-function descendants(pid: number): number[] {
-  let children: number[] = [];
-  try {
-    children = execFileSync('ps', ['-o', 'pid=', '--ppid', String(pid)], { encoding: 'utf8' }).split('\n').map(Number).filter(Boolean);
-  } catch {
-    // no children
-  }
-  return children.flatMap((c) => [c, ...descendants(c)]);
-}
-
-/** kill -9 one process this run started, and what it started (a killed parent cannot close its Chromium). */
-function killHard(child: ChildProcess): Promise<void> {
-  const tree = descendants(child.pid!);
-  const exited = new Promise<void>((r) => child.once('exit', () => r()));
-  child.kill('SIGKILL');
-  for (const pid of tree) {
-    try {
-      process.kill(pid, 'SIGKILL');
-    } catch {
-      // already gone
-    }
-  }
-  return exited;
-}
 
 /** The newest modification under `paths` (files and folders, recursively), in ms. */
 function newest(paths: string[]): number {

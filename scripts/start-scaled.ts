@@ -11,7 +11,7 @@ import { startMail } from './lib/mail-setup';
 import { buildApp, prepareDatabase } from './lib/prepare';
 import { startCluster } from './lib/postgres';
 import { startScaledLayout, type ScaledLayout } from './lib/scaled';
-import { startPayments } from './lib/payments-setup';
+import { paymentsLine, startPayments } from './lib/payments-setup';
 import { startFakeS3 } from '@/lib/storage/fake-s3';
 import type { StorageSettings } from '@/lib/storage/settings';
 import { authSecret, dataDir, demoEnabled, fakeS3Port, filesDir, host, pgPort, port, s3Settings, siteUrl, webProcesses } from './lib/settings';
@@ -64,7 +64,7 @@ if (process.env.PLUMBLINE_SKIP_BUILD !== '1') {
 const mail = await startMail();
 // Payments: the real service with STRIPE_SECRET_KEY, otherwise the local test service (no money moves).
 const payments = await startPayments(siteUrl);
-console.log(payments.fakeUrl ? `  payments: local test service at ${payments.fakeUrl} (no money moves)` : payments.settings ? '  payments: the payment service (STRIPE_SECRET_KEY)' : '  payments: not set up');
+console.log(paymentsLine(payments));
 
 step(`Starting ${webCount} web process(es) and one worker`);
 let layout: ScaledLayout;

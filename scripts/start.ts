@@ -5,7 +5,7 @@ import { DEMO_PASSWORD, DEMO_PEOPLE } from '@db/seeders/demo';
 import { CHROMIUM, CHROMIUM_PATH, ensureDebianPackages, GHOSTSCRIPT, MACHINE_PACKAGES, POSTGRESQL } from './lib/debian';
 import { publishDemo } from './lib/demo-publish';
 import { startMail } from './lib/mail-setup';
-import { startPayments } from './lib/payments-setup';
+import { paymentsLine, startPayments } from './lib/payments-setup';
 import { buildApp, prepareDatabase, startServer } from './lib/prepare';
 import { startCluster } from './lib/postgres';
 import { checkBrowser, checkDatabase, checkMail, checkStorage, formatChecks } from './lib/readiness';
@@ -77,7 +77,7 @@ if (process.env.PLUMBLINE_SKIP_BUILD !== '1') {
 const mail = await startMail();
 // Payments: the real service with STRIPE_SECRET_KEY, otherwise the local test service (no money moves).
 const payments = await startPayments(siteUrl);
-console.log(payments.fakeUrl ? `  payments: local test service at ${payments.fakeUrl} (no money moves)` : payments.settings ? '  payments: the payment service (STRIPE_SECRET_KEY)' : '  payments: not set up');
+console.log(paymentsLine(payments));
 
 step('Starting the server');
 const serverLog = join(dataDir, 'logs', 'server.log');

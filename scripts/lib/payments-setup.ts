@@ -24,3 +24,7 @@ export async function startPayments(siteUrl: string): Promise<{ settings: Paymen
   });
   return { settings: fake.settings, fakeUrl: fake.url };
 }
+
+/** The start scripts' line saying which payment service a started server talks to. */
+export const paymentsLine = ({ settings, fakeUrl }: { settings: PaymentSettings | null; fakeUrl: string | null }) =>
+  fakeUrl ? `  payments: local test service at ${fakeUrl} (no money moves)` : settings ? '  payments: the payment service (STRIPE_SECRET_KEY)' : '  payments: not set up';

@@ -4,16 +4,17 @@
 // without Chromium fails the build with that reason; the previous version keeps serving; a retry on a server that
 // has Chromium makes it ready.
 import type { ChildProcess } from 'node:child_process';
-import { execFileSync } from 'node:child_process';
 import { createHash, randomUUID } from 'node:crypto';
-import { mkdtempSync, readFileSync } from 'node:fs';
+import { mkdtempSync } from 'node:fs';
 import { readFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import pg from 'pg';
 import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
+import { asSuperuser } from '../support/db';
 import { DEMO_PASSWORD, DEMO_PEOPLE } from '@db/seeders/demo';
 import { freePort } from '../../scripts/lib/postgres';
+import { descendants, killHard } from '../../scripts/lib/kill-tree';
 import { prepareDatabase, startServer } from '../../scripts/lib/prepare';
 import { Client } from '../support/client';
 import { waitForBuild } from '../support/publish';
@@ -29,44 +30,6 @@ let server: ChildProcess | undefined;
 let owner: Client;
 let brandId: string;
 let slug: string;
-
-/** Run one statement as the throwaway cluster's superuser (the application role may not create databases). */
-async function asSuperuser(statement: string): Promise<void> {
-  const url = new URL(inject('databaseUrl'));
-  const admin = new pg.Client({ host: url.hostname, port: Number(url.port), user: 'postgres', database: 'postgres', password: readFileSync(join(inject('clusterDir'), 'superuser-password'), 'utf8').trim() });
-  await admin.connect();
-  try {
-    await admin.query(statement);
-  } finally {
-    await admin.end();
-  }
-}
-
-/** Every process under `pid` (its Chromium and Chromium's own children), deepest last. */
-function descendants(pid: number): number[] {
-  let children: number[] = [];
-  try {
-    children = execFileSync('ps', ['-o', 'pid=', '--ppid', String(pid)], { encoding: 'utf8' }).split('\n').map(Number).filter(Boolean);
-  } catch {
-    // no children
-  }
-  return children.flatMap((c) => [c, ...descendants(c)]);
-}
-
-/** SIGKILL the server and the browser it started (a killed parent cannot close its Chromium). */
-function killHard(child: ChildProcess): Promise<void> {
-  const tree = descendants(child.pid!);
-  const exited = new Promise<void>((r) => child.once('exit', () => r()));
-  child.kill('SIGKILL');
-  for (const pid of tree) {
-    try {
-      process.kill(pid, 'SIGKILL');
-    } catch {
-      // already gone
-    }
-  }
-  return exited;
-}
 
 const start = (settings: Record<string, string> = {}) =>
   startServer({ host: '127.0.0.1', port, databaseUrl, siteUrl: site, secret, signInLimit: 10_000, filesDir, mail: { smtpHost: '127.0.0.1', smtpPort: 9 }, settings }, { quiet: true });

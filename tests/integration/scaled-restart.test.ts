@@ -3,11 +3,11 @@
 // rejoins the rotation, and no visitor's GET fails meanwhile — the front port takes the dead process out and repeats
 // the requests it had cut (RFC 9110 §9.2.1/§9.2.2: safe methods may be repeated; common practice for load balancers).
 import { randomUUID } from 'node:crypto';
-import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import pg from 'pg';
 import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
+import { asSuperuser } from '../support/db';
 import { freePort } from '../../scripts/lib/postgres';
 import { prepareDatabase } from '../../scripts/lib/prepare';
 import { startScaledLayout, type ScaledLayout } from '../../scripts/lib/scaled';
@@ -18,17 +18,6 @@ const dir = mkdtempSync(join(tmpdir(), 'plumbline-restart-'));
 let layout: ScaledLayout | undefined;
 let site: string;
 const said: string[] = [];
-
-async function asSuperuser(statement: string): Promise<void> {
-  const url = new URL(inject('databaseUrl'));
-  const admin = new pg.Client({ host: url.hostname, port: Number(url.port), user: 'postgres', database: 'postgres', password: readFileSync(join(inject('clusterDir'), 'superuser-password'), 'utf8').trim() });
-  await admin.connect();
-  try {
-    await admin.query(statement);
-  } finally {
-    await admin.end();
-  }
-}
 
 beforeAll(async () => {
   await asSuperuser(`CREATE DATABASE ${dbName} OWNER ${new URL(inject('databaseUrl')).username}`);

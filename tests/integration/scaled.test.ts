@@ -7,11 +7,12 @@
 // downloaded byte-identical (SHA-256, FIPS 180-4, from node:crypto) through each web process.
 import type { ChildProcess } from 'node:child_process';
 import { createHash, randomUUID } from 'node:crypto';
-import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import pg from 'pg';
 import { afterAll, beforeAll, describe, expect, inject, test } from 'vitest';
+import { asSuperuser } from '../support/db';
 import { startFrontProxy, type FrontProxy } from '../../scripts/lib/front-proxy';
 import { freePort } from '../../scripts/lib/postgres';
 import { prepareDatabase, startServer } from '../../scripts/lib/prepare';
@@ -33,17 +34,6 @@ let webs: string[] = [];
 let worker: string | undefined;
 let owner: Client;
 let brandId: string;
-
-async function asSuperuser(statement: string): Promise<void> {
-  const url = new URL(inject('databaseUrl'));
-  const admin = new pg.Client({ host: url.hostname, port: Number(url.port), user: 'postgres', database: 'postgres', password: readFileSync(join(inject('clusterDir'), 'superuser-password'), 'utf8').trim() });
-  await admin.connect();
-  try {
-    await admin.query(statement);
-  } finally {
-    await admin.end();
-  }
-}
 
 /** One process of the layout on a free loopback port; its base URL. */
 async function launch(role: 'web' | 'worker'): Promise<string> {

@@ -118,7 +118,7 @@ export async function siteAccess(Astro: Pick<APIContext, 'locals' | 'url' | 'red
     if (moved) return movedTo(Astro.url, slug, moved);
   }
   const role = brand && user ? await siteCache.roles.remember(`${user.id}:${brand.id}`, () => roleOn(user.id, brand)) : null;
-  const share = brand && shareGrant?.brandId === brand.id ? shareGrant : null;
+  const share = brand ? shareFor(brand, shareGrant) : null;
 
   // Our PDF renderer reads the print page with a signed pass for exactly one version.
   const passVersion = brand && !role && !share ? versionFromPass(Astro.cookies.get(PRINT_COOKIE)?.value) : null;
@@ -130,23 +130,14 @@ export async function siteAccess(Astro: Pick<APIContext, 'locals' | 'url' | 'red
     if (!user && !share) return Astro.redirect(`/sign-in?next=${encodeURIComponent(Astro.url.pathname)}`);
     return notFoundPage();
   }
-  if (role && !can(role, 'version.read')) return notFoundPage();
-  // A link pinned to one version opens that version only.
-  const wanted = !role && share?.version != null ? (number === null || number === share.version ? share.version : -1) : number;
+  if (!opens(role, share)) return notFoundPage();
+  const wanted = wantedVersion(role, share, number);
   if (wanted === -1) return notFoundPage();
   const version = await siteCache.versions.remember(`${brand.id}:${wanted ?? 'latest'}`, () => findVersion(brand.id, wanted));
-  if (!version) {
-    return page(404, 'Not published yet', number === null ? 'This brand has no published guidelines yet. The studio will share a link once the first version is out.' : `Version ${number} does not exist.`);
-  }
-  return {
-    brand,
-    version,
-    role,
-    viaShareLink: role ? null : share!.linkId,
-    canDownload: role ? can(role, 'asset.download') : share!.allowDownloads,
-    canPresent: role ? true : share!.allowPresentation,
-    isEditor: role ? can(role, 'draft.edit') : false,
-  };
+  return (
+    readerFrom(brand, role, share, version) ??
+    page(404, 'Not published yet', number === null ? 'This brand has no published guidelines yet. The studio will share a link once the first version is out.' : `Version ${number} does not exist.`)
+  );
 }
 
 /** The clear page for a link that no longer works. */
